@@ -1,0 +1,22 @@
+/**
+ * Benchmark entry point (bundled to dist/bench.cjs):
+ *   node dist/bench.cjs quality [options]   ROUGE against authors' summaries (bench/quality.ts)
+ *   node dist/bench.cjs speed [options]     throughput and memory (bench/speed.ts)
+ */
+async function main(): Promise<number> {
+  const mode = process.argv[2];
+  if (mode === 'quality') return (await import('./quality')).run(process.argv.slice(3));
+  if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
+  console.error('usage: node dist/bench.cjs quality|speed [options]');
+  return 2;
+}
+
+main().then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (error: unknown) => {
+    console.error(error instanceof Error ? (error.stack ?? error.message) : String(error));
+    process.exitCode = 1;
+  },
+);

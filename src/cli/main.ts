@@ -1,0 +1,49 @@
+/** The `tersely` command line: one table of commands, one place that turns errors into messages. */
+import { UsageError } from './args';
+import { InputError } from './read-input';
+import { runSummarize } from './summarize-command';
+import { HELP } from './help';
+
+declare const TERSELY_VERSION: string | undefined;
+
+type Command = (args: string[]) => Promise<number>;
+
+const COMMANDS: Record<string, () => Promise<Command>> = {
+  summarize: async () => runSummarize,
+  check: async () => (await import('./check-command')).runCheck,
+  train: async () => (await import('./train')).runTrain,
+};
+
+export async function main(argv: string[]): Promise<number> {
+  const [name, ...rest] = argv;
+  if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
+    process.stdout.write(HELP);
+    return name === undefined ? 2 : 0;
+  }
+  if (name === '--version' || name === '-v') {
+    process.stdout.write(`${typeof TERSELY_VERSION === 'string' ? TERSELY_VERSION : 'dev'}\n`);
+    return 0;
+  }
+  const load = COMMANDS[name];
+  if (!load) {
+    process.stderr.write(`tersely: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')}; see tersely --help)\n`);
+    return 2;
+  }
+  if (rest.includes('--help') || rest.includes('-h')) {
+    process.stdout.write(HELP);
+    return 0;
+  }
+  try {
+    return await (await load())(rest);
+  } catch (error) {
+    if (error instanceof UsageError) {
+      process.stderr.write(`tersely ${name}: ${error.message} (see tersely --help)\n`);
+      return 2;
+    }
+    if (error instanceof InputError) {
+      process.stderr.write(`tersely ${name}: ${error.message}\n`);
+      return 1;
+    }
+    throw error;
+  }
+}

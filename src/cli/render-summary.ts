@@ -1,0 +1,91 @@
+/** Terminal and JSON views of a summary. */
+import { LineIndex } from '../core/lines';
+import type { Summary } from '../core/types';
+import type { Style } from './style';
+
+export const EXTRACTIVE_NOTE = 'Extractive summary: every line is quoted from the text and may lose the context around it.';
+
+function percent(x: number): string {
+  return `${Math.round(x * 100)}%`;
+}
+
+export function renderText(name: string, summary: Summary, style: Style): string {
+  const { stats } = summary;
+  const lines = new LineIndex(summary.document.text);
+  const lineOf = (offset: number) => lines.position(offset - summary.document.baseOffset).line;
+  const out: string[] = [];
+  const title = summary.document.title ? `${summary.document.title} (${name})` : name;
+  out.push(style.bold(title));
+  out.push(
+    style.dim(
+      `${stats.wordsOut.toLocaleString('en-US')} of ${stats.wordsIn.toLocaleString('en-US')} words (${percent(stats.compression)}) · ` +
+        `${stats.sentencesOut} of ${stats.sentencesIn} sentences · ${stats.sectionsCovered} of ${stats.sectionsWithContent} sections covered · ` +
+        `about ${Math.round(stats.minutesSaved)} min of reading saved · method ${summary.method}`,
+    ),
+  );
+  out.push(style.dim(EXTRACTIVE_NOTE));
+  for (const notice of summary.notices) out.push(style.warn(`note: ${notice}`));
+
+  const flagged = new Map(summary.warnings.map((w) => [w.sentence, w]));
+  let currentPath: string | null = null;
+  for (const picked of summary.sentences) {
+    const path = picked.sectionPath.join(' › ') || '(opening)';
+    if (path !== currentPath) {
+      out.push('', style.accent(path));
+      currentPath = path;
+    }
+    const mark = flagged.has(picked.sentence) ? style.warn('!') : '•';
+    const edited = picked.edited ? style.dim(` (edited: ${picked.edited.reason})`) : '';
+    out.push(`  ${mark} ${picked.text}${edited} ${style.dim(`[line ${lineOf(picked.span.start)}]`)}`);
+  }
+  if (summary.warnings.length > 0) {
+    out.push('', style.warn(`May not stand alone (${summary.warnings.length}):`));
+    for (const warning of summary.warnings) {
+      const context = warning.context.map((i) => `line ${lineOf(summary.document.sentences[i]!.span.start)}`).join(', ');
+      out.push(`  ! line ${lineOf(warning.span.start)}: ${warning.message}${context ? ` — context at ${context}` : ''}`);
+    }
+  }
+  return out.join('\n') + '\n';
+}
+
+export function summaryToJson(name: string, summary: Summary): object {
+  return {
+    file: name,
+    method: summary.method,
+    language: summary.language,
+    sentences: summary.sentences.map((p) => ({
+      text: p.text,
+      start: p.span.start,
+      end: p.span.end,
+      section: p.sectionPath.join(' › '),
+      score: round(p.score),
+      rank: p.rank,
+      ...(p.edited ? { edited: p.edited.reason } : {}),
+    })),
+    stats: { ...summary.stats, compression: round(summary.stats.compression), minutesSaved: round(summary.stats.minutesSaved) },
+    sections: summary.shares.map((s) => ({
+      heading: s.heading,
+      documentShare: round(s.documentShare),
+      summaryShare: round(s.summaryShare),
+      sentences: s.picked,
+    })),
+    warnings: summary.warnings.map((w) => ({
+      sentence: summary.document.sentences[w.sentence]?.text ?? '',
+      trigger: w.trigger,
+      words: w.words,
+      start: w.span.start,
+      end: w.span.end,
+      message: w.message,
+      context: w.context.map((i) => {
+        const s = summary.document.sentences[i]!;
+        return { text: s.text, start: s.span.start, end: s.span.end };
+      }),
+      repairs: w.repairs.map((r) => r.kind),
+    })),
+    notices: summary.notices,
+  };
+}
+
+function round(x: number): number {
+  return Math.round(x * 10_000) / 10_000;
+}

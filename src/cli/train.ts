@@ -1,0 +1,129 @@
+/**
+ * `tersely train DIR --reference-heading Summary --out model.json`: learns the sentence model from
+ * a folder of the user's own documents that carry their own summaries. This file only walks the
+ * folder and writes the result; labelling, features and counting are the engine's (src/core/learn).
+ */
+import { readdir, readFile, writeFile } from 'node:fs/promises';
+import { extname, join, relative } from 'node:path';
+import { exampleFromDocument, trainModel, type TrainingExample } from '../core/learn/train-model';
+import { FEATURES } from '../core/learn/features';
+import { valueLogOdds } from '../core/learn/naive-bayes';
+import type { BayesModel } from '../core/learn/model';
+import type { DocumentFormat } from '../core/types';
+import { parseCommandArgs, UsageError } from './args';
+import { InputError } from './read-input';
+
+const TRAIN_OPTIONS = {
+  'reference-heading': { type: 'string' },
+  out: { type: 'string' },
+  match: { type: 'string' },
+  language: { type: 'string' },
+  quiet: { type: 'boolean' },
+} as const;
+
+const FORMATS: Readonly<Record<string, DocumentFormat>> = {
+  '.md': 'markdown',
+  '.markdown': 'markdown',
+  '.mdown': 'markdown',
+  '.mkd': 'markdown',
+  '.mdx': 'markdown',
+  '.txt': 'plaintext',
+};
+
+/** Document files under `root`, sorted, skipping hidden folders and node_modules. */
+export async function documentFiles(root: string): Promise<string[]> {
+  const found: string[] = [];
+  const walk = async (folder: string) => {
+    const entries = await readdir(folder, { withFileTypes: true });
+    for (const entry of entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
+      if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
+      const path = join(folder, entry.name);
+      if (entry.isDirectory()) await walk(path);
+      else if (entry.isFile() && FORMATS[extname(entry.name).toLowerCase()]) found.push(path);
+    }
+  };
+  try {
+    await walk(root);
+  } catch {
+    throw new InputError(`folder ${root} cannot be read`);
+  }
+  return found;
+}
+
+/** The feature values that most raise or lower the odds, for a one-screen report. */
+export function strongestValues(model: BayesModel, count = 6): string[] {
+  const rows: { label: string; odds: number }[] = [];
+  for (const feature of FEATURES) {
+    const counts = model.features[feature.name];
+    if (!counts) continue;
+    valueLogOdds(counts, model.classes.positive, model.classes.negative, model.smoothing).forEach((odds, v) => {
+      rows.push({ label: `${feature.name} = ${feature.values[v]}`, odds });
+    });
+  }
+  rows.sort((a, b) => b.odds - a.odds);
+  const show = (r: { label: string; odds: number }) => `  ${r.odds >= 0 ? '+' : ''}${r.odds.toFixed(2)}  ${r.label}`;
+  return ['raises the odds most:', ...rows.slice(0, count).map(show), 'lowers them most:', ...rows.slice(-count).reverse().map(show)];
+}
+
+/** Pretty JSON with each count list on one line, so a model file reads as a table. */
+export function modelJson(model: BayesModel): string {
+  return JSON.stringify(model, null, 2).replace(/\[\s*([-\d.e+,\s]*?)\s*\]/g, (_, inner: string) => `[${inner.split(/,\s*/).join(', ')}]`) + '\n';
+}
+
+export async function runTrain(args: string[]): Promise<number> {
+  const { values, positionals } = parseCommandArgs(args, TRAIN_OPTIONS);
+  if (positionals.length !== 1) throw new UsageError('train takes one folder of documents');
+  const root = positionals[0]!;
+  const heading = values['reference-heading'];
+  if (!heading) throw new UsageError('--reference-heading names the section that holds each document’s own summary (e.g. Summary)');
+  const out = values.out;
+  if (!out) throw new UsageError('--out names the model file to write (e.g. model.json)');
+  let match: RegExp | null = null;
+  if (values.match !== undefined) {
+    try {
+      match = new RegExp(values.match);
+    } catch {
+      throw new UsageError(`--match takes a regular expression over file names, not "${values.match}"`);
+    }
+  }
+  const language = values.language ?? 'auto';
+  const say = (line: string) => {
+    if (!values.quiet) process.stderr.write(line);
+  };
+
+  const files = (await documentFiles(root)).filter((path) => match === null || match.test(relative(root, path)));
+  if (files.length === 0) throw new InputError(`no .md, .markdown or .txt files in ${root}${match ? ` whose name matches ${match}` : ''}`);
+  const examples: TrainingExample[] = [];
+  const skipped: Record<string, number> = {};
+  for (const [index, path] of files.entries()) {
+    const format = FORMATS[extname(path).toLowerCase()]!;
+    const example = exampleFromDocument(await readFile(path, 'utf8'), { referenceHeading: heading, format, language });
+    if ('skipped' in example) skipped[example.skipped] = (skipped[example.skipped] ?? 0) + 1;
+    else examples.push(example);
+    if ((index + 1) % 50 === 0 || index + 1 === files.length) say(`\rreading ${index + 1}/${files.length} files`);
+  }
+  say('\n');
+  if (examples.length === 0) throw new InputError(`none of the ${files.length} files has a "${heading}" section with prose in it`);
+
+  let model: BayesModel;
+  try {
+    model = trainModel(examples, {
+      trainedOn: {
+        command: ['tersely', 'train', ...args].join(' '),
+        referenceHeading: heading,
+        files: files.length,
+        skipped,
+      },
+    });
+  } catch (error) {
+    if (error instanceof RangeError) throw new InputError(error.message);
+    throw error;
+  }
+  await writeFile(out, modelJson(model));
+  const skippedText = Object.entries(skipped).map(([reason, n]) => `${n} × ${reason}`).join(', ');
+  say(`trained on ${examples.length} documents (${model.classes.positive} summary-like sentences, ${model.classes.negative} others)`);
+  say(skippedText ? `; skipped ${skippedText}\n` : '\n');
+  say(strongestValues(model).join('\n') + '\n');
+  say(`model written to ${out}\n`);
+  return 0;
+}

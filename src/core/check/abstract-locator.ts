@@ -1,0 +1,90 @@
+/**
+ * Finds the section that holds a document's own abstract.
+ */
+import { analyze } from '../analyze';
+import { parseDocument } from '../parse/index';
+import { normalizeHeading, topSectionDepth } from '../select/units';
+import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
+import type { AbstractSource } from './abstract-report';
+
+/** Headings that name an abstract outright, compared after `normalizeHeading` ("TL;DR" → "tl dr"). */
+export const ABSTRACT_HEADINGS: readonly string[] = ['summary', 'abstract', 'tl dr', 'tldr', 'executive summary', 'synopsis'];
+
+/**
+ * Tried only when none of the above is present: an "Overview" is often an introduction rather
+ * than a summary, so it should never win over a real "Summary".
+ */
+export const FALLBACK_ABSTRACT_HEADINGS: readonly string[] = ['overview'];
+
+export const NO_ABSTRACT_MESSAGE = 'No section headed Summary/Abstract/TL;DR found; pass --abstract-heading or --abstract';
+
+/**
+ * Index of the abstract section, or null. With `heading` the first section with that heading
+ * (case, numbering and punctuation ignored) is taken; without it the first section named like an
+ * abstract. A lone title heading that encloses the whole document is never taken: its "abstract"
+ * would leave no body to check against.
+ */
+export function findAbstractSection(doc: ParsedDocument, heading?: string): number | null {
+  const topDepth = topSectionDepth(doc);
+  const candidates = doc.sections.filter((section) => section.depth >= topDepth);
+  const firstNamed = (names: readonly string[]): number | null => {
+    const wanted = new Set(names.map(normalizeHeading));
+    return candidates.find((section) => wanted.has(normalizeHeading(section.heading)))?.index ?? null;
+  };
+  if (heading !== undefined) return firstNamed([heading]);
+  return firstNamed(ABSTRACT_HEADINGS) ?? firstNamed(FALLBACK_ABSTRACT_HEADINGS);
+}
+
+/** The section and every section nested in it, as a membership array indexed by section. */
+export function sectionWithDescendants(doc: ParsedDocument, root: number): Uint8Array {
+  const inside = new Uint8Array(doc.sections.length);
+  inside[root] = 1;
+  // Sections are in document order and a parent always precedes its children.
+  for (const section of doc.sections) {
+    if (section.parent !== null && inside[section.parent] === 1) inside[section.index] = 1;
+  }
+  return inside;
+}
+
+export function missingHeadingMessage(heading: string): string {
+  return `No section headed "${heading}" found; pass --abstract-heading with an existing heading or --abstract`;
+}
+
+export interface AbstractSentence {
+  readonly text: string;
+  readonly span: Span | null;
+  readonly terms: readonly string[];
+  readonly words: number;
+}
+
+export interface LocatedAbstract {
+  readonly origin: 'section' | 'text';
+  readonly heading: string | null;
+  readonly section: number | null;
+  readonly span: Span | null;
+  /** Sections of the checked document that belong to the abstract (all zero for separate text). */
+  readonly sections: Uint8Array;
+  readonly sentences: readonly AbstractSentence[];
+}
+
+/** The abstract's sentences, or an error message for people. */
+export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSource | undefined, language: string): LocatedAbstract | string {
+  const { doc } = analyzed;
+  if (source?.kind === 'text') {
+    const parsed = analyze(parseDocument(source.text, { format: source.format ?? 'plaintext' }), language);
+    const sentences = parsed.doc.sentences.map((s, i) => ({ text: s.text, span: null, terms: parsed.terms[i]!, words: parsed.words[i]!.length }));
+    if (sentences.length === 0) return 'The abstract text has no sentences to check.';
+    return { origin: 'text', heading: null, section: null, span: null, sections: new Uint8Array(doc.sections.length), sentences };
+  }
+
+  const wanted = source?.kind === 'heading' ? source.heading : undefined;
+  const index = findAbstractSection(doc, wanted);
+  if (index === null) return wanted === undefined ? NO_ABSTRACT_MESSAGE : missingHeadingMessage(wanted);
+  const section = doc.sections[index]!;
+  const sections = sectionWithDescendants(doc, index);
+  const sentences = doc.sentences
+    .filter((s) => sections[s.section] === 1)
+    .map((s) => ({ text: s.text, span: s.span, terms: analyzed.terms[s.index]!, words: analyzed.words[s.index]!.length }));
+  if (sentences.length === 0) return `The section "${section.heading}" has no sentences to check.`;
+  return { origin: 'section', heading: section.heading, section: index, span: section.span, sections, sentences };
+}

@@ -1,0 +1,184 @@
+/**
+ * Automatic repair of summary sentences that do not stand alone (optional; the default is to
+ * flag and suggest). For each flagged sentence, in document order, the first step that works:
+ *
+ * 1. add its context sentence(s), if the word budget has room;
+ * 2. swap: add the context and drop the lowest-scored picks that are not flagged, not added as
+ *    context, and not holding up another pick — only if every dropped pick scores below every
+ *    added context sentence, and the result fits the budget;
+ * 3. trim a leading connective when that leaves a sentence that stands alone (display text only);
+ * 4. replace it with the best-scored unpicked sentence of the same section that stands alone and
+ *    fits the budget; failing that, of any section;
+ * 5. drop it, unless it is the last sentence of the summary.
+ *
+ * Trimming comes before replacing because it keeps the sentence the ranker chose and only
+ * removes the word that pointed back (the brief listed it last, for connectives whose context is
+ * unavailable, which is the situation after steps 1-2 fail). Rounds repeat until nothing is
+ * flagged or nothing changes, at most `REPAIR_DEFAULTS.maxRounds` times. A sentence removed by
+ * repair is never brought back, and a sentence added as context is never swapped out to make room
+ * for other context, so rounds cannot undo each other.
+ */
+import type { ParsedDocument } from '../types';
+import { bestReplacement, contextChain, danglingAt, memoizedTriggers, trimmedIfStandsAlone, type CheckState } from './detect';
+
+export interface RepairInput {
+  readonly doc: ParsedDocument;
+  readonly picked: readonly number[];
+  /** Per sentence, higher is better. */
+  readonly scores: Float64Array;
+  readonly wordBudget: number;
+  readonly wordsOf: (sentence: number) => number;
+  /** Sentences that may be brought into the summary (as context or replacement); all when absent. */
+  readonly isCandidate?: (sentence: number) => boolean;
+}
+
+export interface RepairOutcome {
+  /** Sentence indices in document order. */
+  readonly picked: number[];
+  /** Sentence → displayed text, for sentences shown without their leading connective. */
+  readonly edited: Map<number, string>;
+  /** One line per change, for people. */
+  readonly log: string[];
+}
+
+export const REPAIR_DEFAULTS = {
+  /** Each round fixes every sentence flagged at its start; later rounds only mop up knock-on effects. */
+  maxRounds: 8,
+} as const;
+
+export function repairAutomatically(input: RepairInput): RepairOutcome {
+  const { doc, scores, wordsOf } = input;
+  const isCandidate = input.isCandidate ?? (() => true);
+  const chosen = new Set(input.picked.filter((i) => Number.isInteger(i) && i >= 0 && i < doc.sentences.length));
+  const edited = new Map<number, string>();
+  const state: CheckState = { chosen, edited, triggers: memoizedTriggers() };
+  const log: string[] = [];
+  const addedAsContext = new Set<number>();
+  const removed = new Set<number>();
+  let used = 0;
+  for (const i of chosen) used += wordsOf(i);
+  // Picks may already exceed the budget (a minimum sentence count); swaps must not make it worse.
+  const ceiling = () => Math.max(input.wordBudget, used);
+  const words = (sentences: Iterable<number>) => {
+    let total = 0;
+    for (const i of sentences) total += wordsOf(i);
+    return total;
+  };
+  const remove = (i: number) => {
+    chosen.delete(i);
+    edited.delete(i);
+    removed.add(i);
+    used -= wordsOf(i);
+  };
+  const add = (i: number) => {
+    chosen.add(i);
+    used += wordsOf(i);
+  };
+
+  for (let round = 0; round < REPAIR_DEFAULTS.maxRounds; round++) {
+    const flagged = [...chosen].sort((a, b) => a - b).filter((i) => danglingAt(doc, i, state) !== null);
+    if (flagged.length === 0) break;
+    let changed = false;
+
+    for (const sentence of flagged) {
+      if (!chosen.has(sentence)) continue;
+      const problem = danglingAt(doc, sentence, state);
+      if (!problem) continue;
+      const label = `sentence ${sentence} (“${problem.hit.words}”)`;
+      const context = contextChain(doc, problem.context, state).filter((c) => !chosen.has(c) && !removed.has(c) && isCandidate(c));
+      const contextComplete = context.length > 0 && context.includes(problem.context);
+
+      // 1. Add the context when the budget has room.
+      if (contextComplete && used + words(context) <= input.wordBudget) {
+        for (const c of context) {
+          add(c);
+          addedAsContext.add(c);
+        }
+        log.push(`${label}: added context sentence ${context.join(', ')}`);
+        changed = true;
+        continue;
+      }
+
+      // 2. Swap low-scored picks for the context.
+      if (contextComplete) {
+        const dropped = swapOut(sentence, context);
+        if (dropped) {
+          for (const d of dropped) remove(d);
+          for (const c of context) {
+            add(c);
+            addedAsContext.add(c);
+          }
+          log.push(`${label}: added context sentence ${context.join(', ')} in place of sentence ${dropped.join(', ')}`);
+          changed = true;
+          continue;
+        }
+      }
+
+      // 3. Trim a leading connective.
+      const trimmed = trimmedIfStandsAlone(doc, sentence, problem.hit, state);
+      if (trimmed !== null) {
+        edited.set(sentence, trimmed);
+        log.push(`${label}: shown without its leading connective`);
+        changed = true;
+        continue;
+      }
+
+      // 4. Replace with the best sentence that stands alone: same section first, then any.
+      const section = doc.sentences[sentence]!.section;
+      const fits = (c: number) => !removed.has(c) && isCandidate(c) && used - wordsOf(sentence) + wordsOf(c) <= ceiling();
+      const replacement =
+        bestReplacement(doc, sentence, state, scores, (c) => fits(c) && doc.sentences[c]!.section === section) ??
+        bestReplacement(doc, sentence, state, scores, fits);
+      if (replacement !== null) {
+        remove(sentence);
+        add(replacement);
+        log.push(`${label}: replaced by sentence ${replacement}`);
+        changed = true;
+        continue;
+      }
+
+      // 5. Drop it.
+      if (chosen.size > 1) {
+        remove(sentence);
+        log.push(`${label}: dropped (no context, trim or replacement fits)`);
+        changed = true;
+      }
+    }
+    if (!changed) break;
+  }
+
+  const picked = [...chosen].sort((a, b) => a - b);
+  for (const i of edited.keys()) if (!chosen.has(i)) edited.delete(i);
+  return { picked, edited, log };
+
+  /** Picks to drop so that `context` fits, or null when no acceptable swap exists. */
+  function swapOut(flaggedSentence: number, context: readonly number[]): number[] | null {
+    const contextScore = Math.min(...context.map((c) => scores[c]!));
+    if (!Number.isFinite(contextScore)) return null;
+    const limit = ceiling();
+    const needed = used + words(context) - limit;
+    const candidates = [...chosen]
+      .filter((p) => p !== flaggedSentence && !addedAsContext.has(p) && scores[p]! < contextScore)
+      .filter((p) => danglingAt(doc, p, state) === null && !holdsUpAnother(p))
+      .sort((a, b) => scores[a]! - scores[b]! || b - a);
+    const dropped: number[] = [];
+    let freed = 0;
+    for (const p of candidates) {
+      if (freed >= needed) break;
+      dropped.push(p);
+      freed += wordsOf(p);
+    }
+    return freed >= needed && dropped.length > 0 ? dropped : null;
+  }
+
+  /** Would removing pick `p` leave another pick dangling that does not dangle now? */
+  function holdsUpAnother(p: number): boolean {
+    const without = new Set(chosen);
+    without.delete(p);
+    const trial: CheckState = { ...state, chosen: without };
+    for (const q of without) {
+      if (danglingAt(doc, q, trial) !== null && danglingAt(doc, q, state) === null) return true;
+    }
+    return false;
+  }
+}

@@ -1,0 +1,37 @@
+/**
+ * How well a sentence can serve as a summary line on its own, independent of any ranker:
+ * a lead-in that ends with a colon only announces the list after it, and a two-word label
+ * ("Driver acceptance.") says little without its paragraph. Such lines are demoted, not banned,
+ * so a document made only of them still gets a summary.
+ */
+import type { AnalyzedDocument } from '../types';
+
+export const FITNESS_DEFAULTS = {
+  /** Multiplier for a sentence ending with a colon (common practice, no source). */
+  leadIn: 0.35,
+  /** Multiplier for a sentence shorter than `shortWords` words. */
+  short: 0.5,
+  shortWords: 4,
+} as const;
+
+export function sentenceFitness(a: AnalyzedDocument, settings = FITNESS_DEFAULTS): Float64Array {
+  const fitness = new Float64Array(a.doc.sentences.length).fill(1);
+  a.doc.sentences.forEach((sentence, i) => {
+    if (/:\s*$/.test(sentence.text)) fitness[i]! *= settings.leadIn;
+    if ((a.words[i]?.length ?? 0) < settings.shortWords) fitness[i]! *= settings.short;
+  });
+  return fitness;
+}
+
+/** Ranker scores scaled to [0, 1] and multiplied by fitness; the order among fit sentences is unchanged. */
+export function applyFitness(scores: Float64Array, fitness: Float64Array): Float64Array {
+  let min = Infinity;
+  let max = -Infinity;
+  for (const s of scores) {
+    if (!Number.isFinite(s)) continue;
+    if (s < min) min = s;
+    if (s > max) max = s;
+  }
+  const range = max - min;
+  return scores.map((s, i) => (Number.isFinite(s) ? (range > 0 ? (s - min) / range : 1) : 0) * (fitness[i] ?? 1));
+}

@@ -1,0 +1,64 @@
+/**
+ * Balance units: the sections the budget is shared across. Sub-sections deeper than the balance
+ * depth roll up into their ancestor; text before the first section heading (and directly under a
+ * lone title) forms the root unit.
+ */
+import type { ParsedDocument, Section } from '../types';
+
+export interface BalanceUnits {
+  /** For each section index, the section index of its balance unit (0 = the root unit). */
+  readonly unitOfSection: Int32Array;
+  /** Depth of the document's top section level (after a lone H1 title). */
+  readonly topDepth: number;
+}
+
+/** The shallowest heading depth that structures the body; a single H1 used as a title does not count. */
+export function topSectionDepth(doc: ParsedDocument): number {
+  const depths = doc.sections.filter((s) => s.depth > 0).map((s) => s.depth);
+  if (depths.length === 0) return 1;
+  const shallowest = Math.min(...depths);
+  const atShallowest = depths.filter((d) => d === shallowest).length;
+  const deeper = depths.filter((d) => d > shallowest);
+  if (atShallowest === 1 && deeper.length > 0) return Math.min(...deeper);
+  return shallowest;
+}
+
+export function balanceUnits(doc: ParsedDocument, balanceDepth: number): BalanceUnits {
+  const topDepth = topSectionDepth(doc);
+  const deepestUnitDepth = topDepth + balanceDepth - 1;
+  const unitOfSection = new Int32Array(doc.sections.length);
+  for (const section of doc.sections) {
+    unitOfSection[section.index] = unitFor(doc.sections, section, topDepth, deepestUnitDepth);
+  }
+  return { unitOfSection, topDepth };
+}
+
+function unitFor(sections: readonly Section[], section: Section, topDepth: number, deepest: number): number {
+  let current: Section | undefined = section;
+  while (current && current.depth > 0) {
+    if (current.depth >= topDepth && current.depth <= deepest) return current.index;
+    current = current.parent === null ? undefined : sections[current.parent];
+  }
+  return 0;
+}
+
+/** Headings compared without numbering, punctuation or case: "7. References" matches "references". */
+export function normalizeHeading(heading: string): string {
+  return heading
+    .toLowerCase()
+    .replace(/^\s*(?:\d+(?:\.\d+)*\.?|[ivxlc]+\.)\s+/u, '')
+    .replace(/[^\p{L}\p{N}]+/gu, ' ')
+    .trim();
+}
+
+/** Sections whose own heading, or an ancestor's, is in the exclusion list. */
+export function excludedSections(doc: ParsedDocument, excludeHeadings: readonly string[]): Uint8Array {
+  const excluded = new Uint8Array(doc.sections.length);
+  if (excludeHeadings.length === 0) return excluded;
+  const names = new Set(excludeHeadings.map(normalizeHeading));
+  for (const section of doc.sections) {
+    const parentExcluded = section.parent !== null && excluded[section.parent] === 1;
+    if (parentExcluded || (section.depth > 0 && names.has(normalizeHeading(section.heading)))) excluded[section.index] = 1;
+  }
+  return excluded;
+}

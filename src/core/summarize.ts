@@ -1,0 +1,110 @@
+/**
+ * The pipeline, in one visible place: parse → analyze → rank → select → check.
+ */
+import { analyze, resolveLanguage } from './analyze';
+import { resolveOptions, type SummaryOptions } from './options';
+import { parseDocument } from './parse/index';
+import { rankWith } from './ranking';
+import { balanceUnits, excludedSections } from './select/units';
+import { selectSentences } from './select/select';
+import { applyFitness, sentenceFitness } from './select/fitness';
+import { describeSummary } from './summary-report';
+import { inputProblem } from './input-guard';
+import { findStandAloneProblems, repairAutomatically } from './coherence/index';
+import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankResult, Summary } from './types';
+
+export interface SummarizeRequest extends Partial<Record<keyof SummaryOptions, unknown>> {
+  readonly format?: DocumentFormat;
+  /** Offset of `text` in the whole document when summarizing a selection. */
+  readonly baseOffset?: number;
+}
+
+export function summarize(text: string, request: SummarizeRequest = {}): Summary {
+  const options = resolveOptions(request);
+  const format: DocumentFormat = request.format === 'plaintext' ? 'plaintext' : 'markdown';
+  const baseOffset = typeof request.baseOffset === 'number' && request.baseOffset >= 0 ? Math.floor(request.baseOffset) : 0;
+
+  const problem = inputProblem(text, options.maxChars);
+  if (problem) return refusedSummary(text, format, baseOffset, options, problem);
+
+  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables });
+  const language = resolveLanguage(doc, options.language);
+  const analyzed = analyze(doc, language);
+  const ranked = rankWith(options.method, analyzed, options);
+  return summarizeRanked(analyzed, ranked, options);
+}
+
+/** Selection and checks for already-ranked sentences (the benchmark reuses one ranking for several budgets). */
+export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, options: SummaryOptions): Summary {
+  const { doc } = analyzed;
+  const units = balanceUnits(doc, options.balanceDepth);
+  const excluded = excludedSections(doc, options.excludeHeadings);
+  const wordCounts = analyzed.words.map((w) => w.length);
+  const unitOf = new Int32Array(doc.sentences.length);
+  const unitWeights = new Map<number, number>();
+  doc.sentences.forEach((sentence, i) => {
+    if (excluded[sentence.section] === 1 || wordCounts[i] === 0) {
+      unitOf[i] = -1;
+      return;
+    }
+    const unit = units.unitOfSection[sentence.section]!;
+    unitOf[i] = unit;
+    unitWeights.set(unit, (unitWeights.get(unit) ?? 0) + wordCounts[i]!);
+  });
+
+  const selection = selectSentences({
+    scores: applyFitness(ranked.scores, sentenceFitness(analyzed)),
+    wordCounts,
+    terms: analyzed.terms,
+    unitOf,
+    unitWeights,
+    budget: options.budget,
+    minSentences: options.minSentences,
+    minPerSection: options.minPerSection,
+    balance: options.balance,
+    mmrLambda: options.mmrLambda,
+  });
+
+  let picked = selection.picked;
+  let edited: ReadonlyMap<number, string> | undefined;
+  if (options.repair === 'auto') {
+    // A sentence budget has no word limit; repairs then may only swap, never grow the summary.
+    const pickedWords = picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
+    const repaired = repairAutomatically({
+      doc,
+      picked,
+      scores: ranked.scores,
+      wordBudget: Number.isFinite(selection.wordLimit) ? Math.max(selection.wordLimit, pickedWords) : pickedWords,
+      wordsOf: (i) => wordCounts[i] ?? 0,
+      isCandidate: (i) => unitOf[i]! >= 0,
+    });
+    picked = repaired.picked;
+    edited = repaired.edited;
+  }
+  const warnings = findStandAloneProblems(doc, picked);
+  return describeSummary({ analyzed, ranked, options, picked, unitOf, quotas: selection.quotas, edited, warnings });
+}
+
+function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {
+  const empty: ParsedDocument = {
+    text,
+    baseOffset,
+    format,
+    title: null,
+    sections: [{ index: 0, heading: '', depth: 0, headingSpan: null, span: { start: baseOffset, end: baseOffset + text.length }, parent: null }],
+    paragraphs: [],
+    sentences: [],
+    skipped: [],
+  };
+  return {
+    document: empty,
+    method: options.method,
+    language: options.language === 'auto' ? 'en' : options.language,
+    sentences: [],
+    shares: [],
+    stats: { wordsIn: 0, wordsOut: 0, compression: 0, sentencesIn: 0, sentencesOut: 0, sectionsCovered: 0, sectionsWithContent: 0, minutesSaved: 0 },
+    warnings: [],
+    notices: [reason],
+    refused: reason,
+  };
+}

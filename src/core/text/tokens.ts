@@ -1,0 +1,185 @@
+/**
+ * Word tokens, stop words, stems and content terms: the token views every ranker shares.
+ */
+
+import { LANGUAGES, languageFor, type Language, type Script } from './languages';
+
+/** ISO 639-1 codes the engine has stop words for (stemming where `natural` has a stemmer). */
+export const SUPPORTED_LANGUAGES: readonly string[] = LANGUAGES.map((language) => language.code);
+
+/**
+ * A word: letters, marks and digits, joined across an inner apostrophe, hyphen or period
+ * ("don't", "self-made", "node.js", "3.14") and across a comma between digits ("1,000").
+ */
+const WORD = /[\p{L}\p{M}\p{N}]+(?:(?:['\u2019\u2010.-]|(?<=\p{N}),(?=\p{N}))[\p{L}\p{M}\p{N}]+)*/gu;
+/** Scripts written without spaces whose characters carry meaning one by one. */
+const IDEOGRAPHIC = /[\p{sc=Han}\p{sc=Hiragana}\p{sc=Katakana}\p{sc=Hangul}]/u;
+const IDEOGRAPHIC_CHAR_OR_RUN =
+  /[\p{sc=Han}\p{sc=Hiragana}\p{sc=Katakana}\p{sc=Hangul}]|[^\p{sc=Han}\p{sc=Hiragana}\p{sc=Katakana}\p{sc=Hangul}]+/gu;
+/** Scripts written without spaces whose words span several characters. */
+const UNSPACED_ALPHABETIC = /[\p{sc=Thai}\p{sc=Lao}\p{sc=Khmer}\p{sc=Myanmar}]/u;
+/** Either kind; text without any takes the fast path. */
+const UNSPACED_SCRIPT =
+  /[\p{sc=Han}\p{sc=Hiragana}\p{sc=Katakana}\p{sc=Hangul}\p{sc=Thai}\p{sc=Lao}\p{sc=Khmer}\p{sc=Myanmar}]/u;
+
+/**
+ * Lower-cased word tokens of `text`, numbers included. Han, Kana and Hangul characters become one
+ * token each; Thai, Lao, Khmer and Burmese runs are split by `Intl.Segmenter` when the runtime has
+ * it (kept whole otherwise), so text in those scripts still yields tokens.
+ */
+export function wordTokens(text: string): string[] {
+  const tokens: string[] = [];
+  // Lower-casing once, before matching, is much cheaper than once per token.
+  const lower = text.toLowerCase();
+  const unspaced = UNSPACED_SCRIPT.test(lower);
+  for (const match of lower.matchAll(WORD)) {
+    let word = match[0];
+    if (word.includes('\u2019')) word = word.replaceAll('\u2019', "'");
+    if (word.includes('\u2010')) word = word.replaceAll('\u2010', '-');
+    if (!unspaced) {
+      tokens.push(word);
+    } else if (IDEOGRAPHIC.test(word)) {
+      for (const piece of word.match(IDEOGRAPHIC_CHAR_OR_RUN) ?? []) pushPiece(tokens, piece);
+    } else {
+      pushPiece(tokens, word);
+    }
+  }
+  return tokens;
+}
+
+function pushPiece(tokens: string[], piece: string): void {
+  if (wordSegmenter !== null && UNSPACED_ALPHABETIC.test(piece)) {
+    for (const part of wordSegmenter.segment(piece)) {
+      if (part.isWordLike) tokens.push(part.segment);
+    }
+    return;
+  }
+  // Splitting ideographs off can leave a joiner at an edge ("-x"); it is not part of a word.
+  const trimmed = piece.replace(/^['.,-]+|['.,-]+$/g, '');
+  if (trimmed !== '') tokens.push(trimmed);
+}
+
+/** A fixed locale ('und', undetermined) so the split does not depend on the user's settings. */
+const wordSegmenter: Intl.Segmenter | null =
+  typeof Intl !== 'undefined' && 'Segmenter' in Intl ? new Intl.Segmenter('und', { granularity: 'word' }) : null;
+
+const stopWordSets = new Map<string, ReadonlySet<string>>();
+const EMPTY: ReadonlySet<string> = new Set();
+
+/** Stop words of a language (ISO 639-1); an empty set for a language without a list. */
+export function stopWords(lang: string): ReadonlySet<string> {
+  const language = languageFor(lang);
+  if (language === undefined) return EMPTY;
+  let set = stopWordSets.get(language.code);
+  if (set === undefined) {
+    set = new Set(language.stopWords);
+    stopWordSets.set(language.code, set);
+  }
+  return set;
+}
+
+/** Stemming is hot (every token of every sentence), so each language keeps its stems. */
+const stemCaches = new Map<string, Map<string, string>>();
+/** Bounds memory on huge vocabularies; the cache simply starts over (common practice, no source). */
+const MAX_CACHED_STEMS = 200_000;
+
+/** Stem of a lower-cased word; the word itself for a language without a stemmer. */
+export function stem(word: string, lang: string): string {
+  const language = languageFor(lang);
+  if (language?.stem == null) return word;
+  let cache = stemCaches.get(language.code);
+  if (cache === undefined) {
+    cache = new Map();
+    stemCaches.set(language.code, cache);
+  }
+  let stemmed = cache.get(word);
+  if (stemmed === undefined) {
+    stemmed = language.stem(word);
+    if (cache.size >= MAX_CACHED_STEMS) cache.clear();
+    cache.set(word, stemmed);
+  }
+  return stemmed;
+}
+
+/** Tokens shorter than this are dropped as content terms, except ideographs (common practice, no source). */
+const MIN_TERM_LENGTH = 2;
+/** Parts of hyphenated words are held to a higher bar, so "re-run" and "e-mail" give no "re" or "e". */
+const MIN_PART_LENGTH = 3;
+const HAS_LETTER = /\p{L}/u;
+const HAS_DIGIT_OR_DOT = /[\p{N}.]/u;
+
+/**
+ * Content terms of a sentence's word tokens: stop words and very short tokens dropped, hyphenated
+ * words split into their parts (so "rate-limit" meets "rate limit"), English possessive "'s"
+ * removed, then stemmed. Numbers, versions and file names are kept unstemmed.
+ */
+export function contentTerms(words: readonly string[], lang: string): string[] {
+  const stops = stopWords(lang);
+  const english = languageFor(lang)?.code === 'en';
+  const terms: string[] = [];
+  for (const word of words) {
+    if (stops.has(word)) continue;
+    const hyphenated = word.includes('-');
+    const minLength = hyphenated ? MIN_PART_LENGTH : MIN_TERM_LENGTH;
+    for (let part of hyphenated ? word.split('-') : [word]) {
+      if (english && part.endsWith("'s")) part = part.slice(0, -2);
+      if (part.startsWith("'") || part.endsWith("'")) part = part.replace(/^'+|'+$/g, '');
+      if (part === '' || stops.has(part)) continue;
+      if (part.length < minLength && !IDEOGRAPHIC.test(part)) continue;
+      terms.push(HAS_DIGIT_OR_DOT.test(part) || !HAS_LETTER.test(part) ? part : stem(part, lang));
+    }
+  }
+  return terms;
+}
+
+/** Characters read to detect the language; enough for a stable stop-word count. */
+const DETECTION_SAMPLE = 20_000;
+const SCRIPT_PATTERNS: readonly (readonly [Script, RegExp])[] = [
+  ['latin', /\p{sc=Latin}/gu],
+  ['cyrillic', /\p{sc=Cyrillic}/gu],
+  ['arabic', /\p{sc=Arabic}/gu],
+  ['han', /\p{sc=Han}/gu],
+  ['kana', /[\p{sc=Hiragana}\p{sc=Katakana}]/gu],
+  ['hangul', /\p{sc=Hangul}/gu],
+];
+
+/**
+ * Language of `text` (ISO 639-1): the dominant script first (Japanese whenever Kana is common,
+ * since Japanese mixes Kana with Han), then the language of that script whose stop words occur
+ * most often. 'en' when nothing fits.
+ */
+export function detectLanguage(text: string): string {
+  const sample = text.slice(0, DETECTION_SAMPLE);
+  const counts = new Map<Script, number>();
+  for (const [script, pattern] of SCRIPT_PATTERNS) counts.set(script, sample.match(pattern)?.length ?? 0);
+  const kana = counts.get('kana') ?? 0;
+  const han = counts.get('han') ?? 0;
+  if (kana > 0 && kana * 5 >= han) counts.set('kana', kana + han);
+  let script: Script | null = null;
+  let best = 0;
+  for (const [name, count] of counts) {
+    if (count > best) {
+      best = count;
+      script = name;
+    }
+  }
+  if (script === null) return 'en';
+  const candidates = LANGUAGES.filter((language) => language.script === script);
+  if (candidates.length === 1) return candidates[0]?.code ?? 'en';
+  return mostStopWords(wordTokens(sample), candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
+}
+
+function mostStopWords(tokens: readonly string[], candidates: readonly Language[]): string | null {
+  let bestCode: string | null = null;
+  let bestHits = 0;
+  for (const language of candidates) {
+    const stops = stopWords(language.code);
+    let hits = 0;
+    for (const token of tokens) if (stops.has(token)) hits++;
+    if (hits > bestHits) {
+      bestHits = hits;
+      bestCode = language.code;
+    }
+  }
+  return bestCode;
+}

@@ -1,0 +1,234 @@
+/**
+ * The engine's shared vocabulary.
+ *
+ * Position convention (one for the whole engine): offsets are 0-based UTF-16 code units into the
+ * ORIGINAL document string (what the editor API uses), ranges are half-open `[start, end)`.
+ * When a selection is summarized, the caller passes the selected substring and its start offset;
+ * every span the engine returns is already in whole-document coordinates.
+ */
+
+/** Half-open `[start, end)` range of UTF-16 code units in the whole document. */
+export interface Span {
+  readonly start: number;
+  readonly end: number;
+}
+
+export type DocumentFormat = 'markdown' | 'plaintext';
+
+/** What kind of block a sentence came from; rankers and the coherence checker use it. */
+export type BlockKind = 'paragraph' | 'listItem' | 'quote' | 'tableCell';
+
+/** Why a stretch of the source was not treated as prose. Reported so users can see what was left out. */
+export type SkipReason =
+  | 'code'
+  | 'html'
+  | 'frontMatter'
+  | 'definition'
+  | 'image'
+  | 'table'
+  | 'tableOfContents'
+  | 'thematicBreak'
+  | 'metadata'
+  | 'checklist'
+  | 'linkList'
+  | 'badge'
+  | 'comment'
+  | 'excludedSection';
+
+export interface Skipped {
+  readonly reason: SkipReason;
+  readonly span: Span;
+}
+
+export interface Section {
+  /** Position in `ParsedDocument.sections`; section 0 is always the root (depth 0, no heading). */
+  readonly index: number;
+  /** Heading text with inline markup stripped; '' for the root. */
+  readonly heading: string;
+  /** 1-6 for headings, 0 for the root. */
+  readonly depth: number;
+  /** The heading line itself, or null for the root. */
+  readonly headingSpan: Span | null;
+  /** From the heading's start to the start of the next heading of the same or lower depth. */
+  readonly span: Span;
+  /** Index of the enclosing section (the root's parent is null). */
+  readonly parent: number | null;
+}
+
+export interface Paragraph {
+  readonly index: number;
+  readonly kind: BlockKind;
+  readonly span: Span;
+  readonly section: number;
+  /** Nesting depth for list items (0 = top-level item); 0 otherwise. */
+  readonly listDepth: number;
+  /** For a list item: the index of the paragraph that introduces the list (the line just before it), or null. */
+  readonly leadIn: number | null;
+  /** Indices into `ParsedDocument.sentences`, in order. */
+  readonly sentences: readonly number[];
+}
+
+export interface Sentence {
+  /** Position in `ParsedDocument.sentences` (document order). */
+  readonly index: number;
+  /** Normalized text: inline markup stripped, link text kept, URLs dropped, inline code kept as text. */
+  readonly text: string;
+  readonly span: Span;
+  readonly section: number;
+  readonly paragraph: number;
+  /** 0-based position of the sentence in its paragraph, and the paragraph's sentence count. */
+  readonly positionInParagraph: number;
+  readonly paragraphLength: number;
+  /** 0-based position among the content sentences of its section, and their count. */
+  readonly positionInSection: number;
+  readonly sectionLength: number;
+}
+
+export interface ParsedDocument {
+  /** The text that was analysed (a whole document or a selection). */
+  readonly text: string;
+  /** Offset of `text` in the whole document; all spans already include it. */
+  readonly baseOffset: number;
+  readonly format: DocumentFormat;
+  /** First H1 (or plain-text equivalent), if any. */
+  readonly title: string | null;
+  readonly sections: readonly Section[];
+  readonly paragraphs: readonly Paragraph[];
+  readonly sentences: readonly Sentence[];
+  readonly skipped: readonly Skipped[];
+}
+
+/** Per-sentence token views, built once and shared by every ranker. */
+export interface AnalyzedDocument {
+  readonly doc: ParsedDocument;
+  /** Language code used for stop words and stemming (ISO 639-1, e.g. 'en'). */
+  readonly language: string;
+  /** Lower-cased word tokens of each sentence (stop words kept). */
+  readonly words: readonly (readonly string[])[];
+  /** Stemmed content terms of each sentence (stop words removed). */
+  readonly terms: readonly (readonly string[])[];
+  /** Stemmed content terms of the title. */
+  readonly titleTerms: readonly string[];
+  /** Stemmed content terms of each section's heading (index = section index). */
+  readonly headingTerms: readonly (readonly string[])[];
+}
+
+export type RankerName =
+  | 'position'
+  | 'luhn'
+  | 'edmundson'
+  | 'lexrank'
+  | 'textrank'
+  | 'centroid'
+  | 'bayes'
+  | 'blend';
+
+/** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
+export interface RankResult {
+  readonly scores: Float64Array;
+  /** Optional per-feature values (same length as scores) that explain the score. */
+  readonly features?: Readonly<Record<string, Float64Array>>;
+  /** Iterative rankers report whether they converged. */
+  readonly converged?: boolean;
+  readonly iterations?: number;
+}
+
+export interface CueWords {
+  readonly bonus: readonly string[];
+  readonly stigma: readonly string[];
+}
+
+export type BudgetUnit = 'sentences' | 'words' | 'ratio';
+
+export interface Budget {
+  readonly unit: BudgetUnit;
+  /** A count for sentences/words; a fraction in (0, 1] of the document's words for ratio. */
+  readonly value: number;
+}
+
+/** Why a summary sentence may not stand alone (filled by the coherence checker). */
+export type StandAloneTrigger = 'connective' | 'pronoun' | 'demonstrative' | 'backReference' | 'additive';
+
+/** A repair the user (or automatic repair) can apply to a flagged summary sentence. */
+export type Repair =
+  /** Add the sentence(s) that supply the missing context. */
+  | { readonly kind: 'addContext'; readonly sentences: readonly number[] }
+  /** Drop the flagged sentence; `replacement` is the next best candidate that does not dangle (or null). */
+  | { readonly kind: 'replace'; readonly replacement: number | null }
+  /** Show the sentence without its leading connective (display only, never written to the source). */
+  | { readonly kind: 'trimConnective'; readonly text: string };
+
+export interface StandAloneWarning {
+  /** Index into `ParsedDocument.sentences` of the flagged summary sentence. */
+  readonly sentence: number;
+  readonly trigger: StandAloneTrigger;
+  /** The words that triggered the flag, as written. */
+  readonly words: string;
+  /** Where those words are in the document. */
+  readonly span: Span;
+  /** Source sentence(s) that would supply the context. */
+  readonly context: readonly number[];
+  /** One-line explanation for people. */
+  readonly message: string;
+  readonly repairs: readonly Repair[];
+}
+
+export interface PickedSentence {
+  /** Index into `ParsedDocument.sentences`. */
+  readonly sentence: number;
+  /** Text as shown; differs from the source sentence only when `edited` is set. */
+  readonly text: string;
+  readonly span: Span;
+  /** Headings from the outermost section down to the sentence's own section. */
+  readonly sectionPath: readonly string[];
+  readonly section: number;
+  readonly score: number;
+  /** 1 = best-scored sentence of the document. */
+  readonly rank: number;
+  /** Named feature values behind the score (for "why this sentence"). */
+  readonly features: Readonly<Record<string, number>>;
+  /** Set when the displayed text was edited by a repair (e.g. a leading connective removed). */
+  readonly edited?: { readonly reason: string };
+}
+
+export interface SummaryStats {
+  readonly wordsIn: number;
+  readonly wordsOut: number;
+  /** wordsOut / wordsIn (0 for an empty document). */
+  readonly compression: number;
+  readonly sentencesIn: number;
+  readonly sentencesOut: number;
+  /** Balance units (sections at the balance depth) that have at least one picked sentence. */
+  readonly sectionsCovered: number;
+  /** Balance units that have any content sentence. */
+  readonly sectionsWithContent: number;
+  /** Estimated minutes of reading saved at 230 words per minute (common practice, no source). */
+  readonly minutesSaved: number;
+}
+
+/** One balance unit: a section at the balance depth with its sub-sections rolled up. */
+export interface SectionShare {
+  readonly section: number;
+  readonly heading: string;
+  /** Share of the document's content words (0-1). */
+  readonly documentShare: number;
+  /** Share of the summary's words (0-1). */
+  readonly summaryShare: number;
+  readonly picked: number;
+  readonly quota: number;
+}
+
+export interface Summary {
+  readonly document: ParsedDocument;
+  readonly method: RankerName;
+  readonly language: string;
+  /** Picked sentences in document order. */
+  readonly sentences: readonly PickedSentence[];
+  readonly shares: readonly SectionShare[];
+  readonly stats: SummaryStats;
+  readonly warnings: readonly StandAloneWarning[];
+  /** Plain-language notices (e.g. "the document has no prose sentences"). */
+  readonly notices: readonly string[];
+  /** Set when no summary was attempted (too large, binary content); the reason, for people. */
+  readonly refused?: string;
+}

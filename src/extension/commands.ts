@@ -1,0 +1,60 @@
+/**
+ * Every command in one table, registered in one loop. A command whose preconditions fail says
+ * why instead of throwing. Handlers return a small result so tests inside the editor can check
+ * what happened.
+ */
+import * as vscode from 'vscode';
+import type { RepairArgs } from './diagnostics';
+import type { CommandId } from './ids';
+import type { SummarizeOutcome, TerselyContext } from './tersely-context';
+
+type CommandHandler = (context: TerselyContext, ...args: unknown[]) => unknown;
+
+function withEditor<T>(context: TerselyContext, action: (editor: vscode.TextEditor) => T): T | undefined {
+  const editor = context.targetEditor();
+  if (!editor) {
+    void vscode.window.showInformationMessage('Open a Markdown or text document first: Tersely summarizes the active editor.');
+    return undefined;
+  }
+  return action(editor);
+}
+
+function isRepairArgs(value: unknown): value is RepairArgs {
+  if (typeof value !== 'object' || value === null) return false;
+  const { summaryId, warning, repair } = value as Record<string, unknown>;
+  return [summaryId, warning, repair].every((n) => typeof n === 'number' && Number.isInteger(n) && n >= 0);
+}
+
+function outcomeResult(outcome: SummarizeOutcome): { kind: string; sentences?: number; id?: number } {
+  return outcome.kind === 'shown' ? { kind: outcome.kind, sentences: outcome.shown.summary.sentences.length, id: outcome.shown.id } : { kind: outcome.kind };
+}
+
+const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
+  'tersely.summarizeDocument': (context) =>
+    withEditor(context, async (editor) => {
+      void context.panel.show();
+      return outcomeResult(await context.summarize(editor, 'document', 'command'));
+    }),
+  'tersely.summarizeSelection': (context) =>
+    withEditor(context, async (editor) => {
+      void context.panel.show();
+      return outcomeResult(await context.summarize(editor, 'selection', 'command'));
+    }),
+  'tersely.insertSummary': (context) => withEditor(context, (editor) => context.insertSummary(editor)),
+  'tersely.copySummary': (context) => context.copySummary(context.targetEditor()),
+  'tersely.clearHighlights': (context) => context.clearHighlights(),
+  'tersely.toggleLive': (context) => context.toggleLive(),
+  'tersely.checkAbstract': (context) => withEditor(context, (editor) => context.checkAbstract(editor)),
+  'tersely.showPanel': (context) => context.panel.show(),
+  'tersely.applyRepair': (context, args) => {
+    if (!isRepairArgs(args)) {
+      context.log.warn('tersely.applyRepair was called without a valid repair.');
+      return false;
+    }
+    return context.repair(args);
+  },
+};
+
+export function registerCommands(context: TerselyContext): vscode.Disposable[] {
+  return Object.entries(COMMANDS).map(([id, handler]) => vscode.commands.registerCommand(id, (...args: unknown[]) => handler(context, ...args)));
+}

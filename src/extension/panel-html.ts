@@ -1,0 +1,52 @@
+/**
+ * The side panel's HTML shell. It carries no document text at all: content arrives later by
+ * message and is rendered with DOM calls. Deny-by-default CSP; the one script runs by nonce.
+ */
+import { randomBytes } from 'node:crypto';
+
+export interface PanelHtmlInput {
+  /** The webview's own origin for local resources (`webview.cspSource`). */
+  readonly cspSource: string;
+  readonly nonce: string;
+  readonly scriptUri: string;
+  readonly styleUri: string;
+}
+
+/** 128 bits from the system's CSPRNG, base64 (a valid CSP nonce). */
+export function makeNonce(): string {
+  return randomBytes(16).toString('base64');
+}
+
+export function contentSecurityPolicy(cspSource: string, nonce: string): string {
+  return [
+    "default-src 'none'",
+    `style-src ${cspSource}`,
+    `font-src ${cspSource}`,
+    `script-src 'nonce-${nonce}'`,
+    "base-uri 'none'",
+    "form-action 'none'",
+    "frame-src 'none'",
+  ].join('; ');
+}
+
+function attribute(value: string): string {
+  return value.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+}
+
+export function panelHtml(input: PanelHtmlInput): string {
+  const csp = contentSecurityPolicy(input.cspSource, input.nonce);
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="UTF-8">
+<meta http-equiv="Content-Security-Policy" content="${attribute(csp)}">
+<meta name="viewport" content="width=device-width, initial-scale=1.0">
+<link rel="stylesheet" href="${attribute(input.styleUri)}">
+<title>Tersely summary</title>
+</head>
+<body>
+<div id="app" aria-live="polite"></div>
+<script nonce="${attribute(input.nonce)}" src="${attribute(input.scriptUri)}"></script>
+</body>
+</html>`;
+}

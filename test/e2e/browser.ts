@@ -1,0 +1,60 @@
+/**
+ * Debian's Chromium driven by playwright-core, allowed to reach only the local editor server.
+ * Every request elsewhere is aborted and recorded, so a test can assert that none was attempted.
+ */
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+
+export interface BlockedRequest {
+  readonly url: string;
+  readonly frameUrl: string;
+}
+
+export interface Session {
+  readonly browser: Browser;
+  readonly context: BrowserContext;
+  readonly page: Page;
+  readonly blocked: BlockedRequest[];
+  close(): Promise<void>;
+}
+
+export const CHROMIUM = process.env['CHROMIUM_PATH'] ?? '/usr/bin/chromium';
+
+export async function openSession(base: string, viewport = { width: 1600, height: 1000 }): Promise<Session> {
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM,
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      // Belt and braces: names other than the loopback server do not even resolve.
+      '--host-resolver-rules=MAP * ~NOTFOUND, EXCLUDE 127.0.0.1',
+    ],
+  });
+  const context = await browser.newContext({ viewport });
+  const blocked: BlockedRequest[] = [];
+  await context.route(
+    (url) => !url.href.startsWith(base) && !url.href.startsWith('data:') && !url.href.startsWith('blob:'),
+    (route) => {
+      const request = route.request();
+      let frameUrl = '';
+      try {
+        frameUrl = request.frame().url();
+      } catch {
+        // Service-worker requests have no frame.
+      }
+      blocked.push({ url: request.url(), frameUrl });
+      return route.abort();
+    },
+  );
+  const page = await context.newPage();
+  return { browser, context, page, blocked, close: () => browser.close() };
+}
+
+export function timer(): (label: string) => void {
+  const started = Date.now();
+  return (label) => console.log(`[${String(Date.now() - started).padStart(6)} ms] ${label}`);
+}

@@ -1,0 +1,174 @@
+/**
+ * The extension as a person uses it, in the real editor (code-server in Chromium): open the demo
+ * document, Summarize Document from the palette, read the panel, see the highlights, click a
+ * sentence, go live and type, and open a document full of payloads that must stay inert text.
+ * Expected values come from the engine run here in Node with the same settings the editor has.
+ *
+ * Usage: tsx test/e2e/ui.e2e.ts <baseUrl> <workspaceFolder> <artifactsDir> <userSettings.json>
+ */
+import assert from 'node:assert/strict';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { summarize } from '../../src/core/summarize';
+import { LineIndex } from '../../src/extension/ranges';
+import { UNTITLED_SECTION } from '../../src/extension/panel-model';
+import { parseSettings, toEngineOptions, type SettingKey } from '../../src/extension/settings';
+import { openSession, timer } from './browser';
+import { countDecorations, cursorStatus, openFile, panelFrame, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
+
+const [base, workspace, artifacts, settingsFile] = process.argv.slice(2) as [string, string, string, string];
+const DEMO = 'bike-share-rebalancing.md';
+const XSS = 'xss-payloads.md';
+const mark = timer();
+const checks: Record<string, unknown> = {};
+
+function expectedSummary(file: string) {
+  const user = JSON.parse(readFileSync(settingsFile, 'utf8')) as Record<string, unknown>;
+  const { settings } = parseSettings((key: SettingKey) => user[`tersely.${key}`]);
+  const text = readFileSync(join(workspace, file), 'utf8');
+  return { text, summary: summarize(text, toEngineOptions(settings, 'markdown', 0)) };
+}
+
+async function main(): Promise<void> {
+  mkdirSync(artifacts, { recursive: true });
+  const session = await openSession(base);
+  const { page, blocked } = session;
+  const consoleErrors: string[] = [];
+  page.on('pageerror', (error) => consoleErrors.push(error.message));
+  try {
+    await page.goto(`${base}/?folder=${encodeURIComponent(workspace)}`, { waitUntil: 'domcontentloaded' });
+    await waitForWorkbench(page, DEMO);
+    mark('workbench up');
+
+    // ---- Summarize Document on the demo ----
+    const demo = expectedSummary(DEMO);
+    await openFile(page, DEMO, 'Quillhaven Bike Share');
+    const commandStarted = Date.now();
+    await runCommand(page, 'Tersely: Summarize Document');
+    const panel = panelLocator(page);
+    await panel.locator('.summary button.sentence').first().waitFor({ timeout: 60_000 });
+    checks['commandToPanelMs'] = Date.now() - commandStarted;
+    mark(`panel filled (${checks['commandToPanelMs']} ms after the command)`);
+
+    const groups = await panel.locator('.summary .group').evaluateAll((nodes) =>
+      nodes.map((node) => [node.getAttribute('data-heading'), node.querySelectorAll('button.sentence').length] as [string, number]),
+    );
+    const expectedGroups = demo.summary.shares.filter((share) => share.picked > 0).map((share) => [share.heading || UNTITLED_SECTION, share.picked] as [string, number]);
+    checks['groups'] = groups;
+    assert.ok(demo.summary.sentences.length > 0, 'the engine picks sentences from the demo');
+    assert.equal(groups.reduce((n, [, count]) => n + count, 0), demo.summary.sentences.length, 'panel lists as many sentences as the engine picked');
+    assert.deepEqual([...groups].sort(), [...expectedGroups].sort(), 'grouped by the same sections, same counts');
+    assert.ok(groups.length > 1, 'more than one section is represented');
+    assert.match(await panel.locator('.note').innerText(), /extractive/i, 'the extractive-summary note is visible');
+
+    const decorations = await poll(() => countDecorations(page), (n) => n > 0, 15_000, 'highlights in the editor');
+    checks['decorations'] = decorations;
+    const status = page.locator('.statusbar-item', { hasText: 'sections' }).first();
+    await status.waitFor({ timeout: 10_000 });
+    checks['statusBar'] = await status.innerText();
+    mark(`${decorations} highlight elements, status bar "${checks['statusBar']}"`);
+    await page.screenshot({ path: join(artifacts, '01-panel-beside-document.png') });
+
+    // ---- clicking a sentence selects its source range ----
+    const buttons = panel.locator('.summary button.sentence');
+    const target = buttons.nth(1);
+    const sentenceIndex = Number(await target.getAttribute('data-sentence'));
+    const pick = demo.summary.sentences.find((p) => p.sentence === sentenceIndex);
+    assert.ok(pick, `sentence ${sentenceIndex} is in the engine's summary`);
+    const end = new LineIndex(demo.text).positionAt(pick.span.end);
+    await target.click();
+    const cursor = await poll(() => cursorStatus(page), (c) => c?.line === end.line + 1, 10_000, 'the cursor to move');
+    assert.deepEqual(cursor, { line: end.line + 1, column: end.character + 1, selected: pick.span.end - pick.span.start }, 'selection covers the sentence');
+    checks['reveal'] = cursor;
+    mark(`clicked sentence ${sentenceIndex}: ${JSON.stringify(cursor)}`);
+    await page.screenshot({ path: join(artifacts, '02-sentence-selected.png') });
+
+    // ---- state survives hiding and re-showing the view ----
+    const before = await panel.locator('.summary button.sentence').count();
+    await runCommand(page, 'View: Toggle Primary Side Bar Visibility');
+    await runCommand(page, 'View: Toggle Primary Side Bar Visibility');
+    await panel.locator('.summary button.sentence').first().waitFor({ timeout: 15_000 });
+    assert.equal(await panel.locator('.summary button.sentence').count(), before, 'same summary after hide/show');
+    mark('panel kept its summary across hide/show');
+
+    // ---- live mode follows edits ----
+    const wordsBefore = await panel.locator('[data-figure="words"] dd').innerText();
+    await runCommand(page, 'Tersely: Toggle Live Summary');
+    await panel.locator('#live[aria-pressed="true"]').waitFor({ timeout: 10_000 });
+    await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
+    await page.keyboard.press('Control+End');
+    await page.keyboard.type('\n\nA closing note adds that every rebalancing truck will now carry spare batteries for the electric fleet.\n');
+    const wordsAfter = await poll(() => panel.locator('[data-figure="words"] dd').innerText(), (text) => text !== wordsBefore, 20_000, 'the panel to follow the edit');
+    const wordsIn = (text: string) => Number(text.split('→')[0]!.replace(/[^0-9]/g, ''));
+    assert.ok(wordsIn(wordsAfter) > wordsIn(wordsBefore), `words in grew: ${wordsBefore} → ${wordsAfter}`);
+    checks['live'] = { wordsBefore, wordsAfter };
+    mark(`live update: ${wordsBefore} became ${wordsAfter}`);
+    await poll(() => countDecorations(page), (n) => n > 0, 10_000, 'highlights after the live update');
+    await page.screenshot({ path: join(artifacts, '03-live-updated.png') });
+    await runCommand(page, 'Tersely: Toggle Live Summary');
+    await panel.locator('#live[aria-pressed="false"]').waitFor({ timeout: 10_000 });
+
+    // ---- a document full of payloads stays inert text ----
+    const blockedBefore = blocked.length;
+    await openFile(page, XSS, 'Sanitizer regression notes');
+    await panel.locator('#length-unit').selectOption('percent');
+    await panel.locator('#length-value').fill('100');
+    await panel.locator('#length-value').press('Enter');
+    await runCommand(page, 'Tersely: Summarize Document');
+    await panel.locator('.document-name', { hasText: XSS }).waitFor({ timeout: 30_000 });
+    await poll(() => panel.locator('.summary button.sentence').count(), (n) => n >= 10, 20_000, 'the whole payload document in the panel');
+    const frame = await panelFrame(page);
+    const inside = await frame.evaluate(() => {
+      const content = document.getElementById('content')!;
+      return {
+        xssGlobal: (window as unknown as { __terselyXss?: unknown }).__terselyXss ?? null,
+        activeElements: content.querySelectorAll('img, script, svg, iframe, a, object, embed, style, meta, link, form, textarea').length,
+        scripts: document.scripts.length,
+        csp: document.querySelector('meta[http-equiv="Content-Security-Policy"]')?.getAttribute('content') ?? '',
+        text: content.textContent ?? '',
+        overflow: document.documentElement.scrollWidth - document.documentElement.clientWidth,
+      };
+    });
+    const topGlobal = await page.evaluate(() => (window as unknown as { __terselyXss?: unknown }).__terselyXss ?? null);
+    assert.equal(inside.xssGlobal, null, 'no payload set a global in the panel');
+    assert.equal(topGlobal, null, 'no payload set a global in the workbench');
+    assert.equal(inside.activeElements, 0, 'no element was created from document text');
+    assert.equal(inside.scripts, 1, 'only the panel’s own script');
+    assert.match(inside.csp, /default-src 'none'/);
+    assert.ok(inside.text.includes('<script>') && inside.text.includes('onerror='), 'payloads are shown as text');
+    assert.ok(inside.overflow <= 1, `a 2,000-character word wraps (overflow ${inside.overflow}px)`);
+    const dirtyTabs = await page.locator('.tabs-container .tab.dirty').count();
+    assert.equal(dirtyTabs, 1, 'only the demo edited in live mode is dirty: the postMessage payload did not insert anything');
+    const fromPanel = blocked.slice(blockedBefore).filter((request) => request.frameUrl.includes('webview') || /example\.invalid/.test(request.url));
+    assert.deepEqual(fromPanel, [], 'no network request was attempted from the panel');
+    checks['xss'] = { ...inside, text: `${inside.text.length} characters`, topGlobal, dirtyTabs, blockedSincePayloads: blocked.slice(blockedBefore) };
+    mark('payload document rendered as inert text; no request attempted');
+    await page.screenshot({ path: join(artifacts, '04-payloads-inert.png') });
+
+    // ---- keyboard: Tab to a sentence, Enter reveals it ----
+    const first = panel.locator('.summary button.sentence').first();
+    await first.focus();
+    await page.keyboard.press('Enter');
+    const keyboardCursor = await poll(() => cursorStatus(page), (c) => (c?.selected ?? 0) > 0 && c?.line !== cursor.line, 10_000, 'Enter on a sentence to select it');
+    checks['keyboardReveal'] = keyboardCursor;
+    mark(`Enter on a focused sentence selected ${keyboardCursor?.selected} characters`);
+
+    checks['blockedRequestsTotal'] = blocked.length;
+    checks['pageErrors'] = consoleErrors.slice(0, 20);
+    checks['ok'] = true;
+  } catch (error) {
+    checks['ok'] = false;
+    checks['error'] = error instanceof Error ? error.stack : String(error);
+    await page.screenshot({ path: join(artifacts, 'zz-ui-failure.png') }).catch(() => undefined);
+  } finally {
+    writeFileSync(join(artifacts, 'ui-result.json'), JSON.stringify(checks, null, 2));
+    await session.close();
+  }
+  if (!checks['ok']) {
+    console.error(checks['error']);
+    process.exit(1);
+  }
+  mark('UI checks passed');
+}
+
+void main();

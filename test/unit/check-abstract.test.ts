@@ -1,0 +1,251 @@
+import assert from 'node:assert/strict';
+import { existsSync, readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { ABSTRACT_CHECK_DEFAULTS, checkAbstract } from '../../src/core/check/abstract';
+import type { AbstractCheck, AbstractReport } from '../../src/core/check/abstract-report';
+import { NO_ABSTRACT_MESSAGE } from '../../src/core/check/abstract-locator';
+
+const demoPath = (name: string) => fileURLToPath(new URL(`../../media/demo/${name}`, import.meta.url));
+const demo = (name: string) => readFileSync(demoPath(name), 'utf8');
+
+function expectCheck(report: AbstractReport): AbstractCheck {
+  if (!report.ok) assert.fail(`expected a check, got the error: ${report.error}`);
+  return report;
+}
+
+const headingsOf = (check: AbstractCheck, sections: readonly number[]) =>
+  sections.map((s) => check.sections.find((c) => c.section === s)!.heading);
+
+// What media/demo/abstract-check.md was written to contain: its Summary leaves out one body section
+// and makes one claim the body never makes.
+const MISSED_SECTION = 'Patients without a mobile phone';
+const INVENTED_CLAIM = 'Patient satisfaction scores in the annual survey rose by fifteen points as a result.';
+const BODY_SECTIONS = ['Background', 'What we changed', 'Results', 'Costs', MISSED_SECTION, 'Next steps'];
+
+describe('check: abstract against body', () => {
+  const text = demo('abstract-check.md');
+  const check = expectCheck(checkAbstract(text, { format: 'markdown', language: 'en' }));
+
+  it('takes the Summary section as the abstract, with spans into the document', () => {
+    assert.equal(check.abstract.origin, 'section');
+    assert.equal(check.abstract.heading, 'Summary');
+    assert.equal(check.abstract.sentences.length, 5);
+    for (const sentence of check.abstract.sentences) {
+      assert.ok(sentence.span, 'an in-document abstract sentence has a span');
+      const source = text.slice(sentence.span.start, sentence.span.end);
+      assert.equal(source.replace(/\s+/g, ' '), sentence.text);
+    }
+  });
+
+  it('judges every body section and nothing else', () => {
+    assert.deepEqual(check.sections.map((s) => s.heading), BODY_SECTIONS);
+  });
+
+  it('reports exactly the left-out section as uncovered', () => {
+    assert.deepEqual(headingsOf(check, check.uncoveredSections), [MISSED_SECTION]);
+  });
+
+  it('reports exactly the invented claim as unsupported', () => {
+    const unsupported = check.unsupportedSentences.map((i) => check.abstract.sentences[i]!.text);
+    assert.deepEqual(unsupported, [INVENTED_CLAIM]);
+  });
+
+  it('lists up to three supporting sentences, best first, pointing into the body', () => {
+    for (const sentence of check.abstract.sentences) {
+      assert.ok(sentence.support.length <= 3);
+      assert.equal(sentence.similarity, sentence.support[0]?.similarity ?? 0);
+      for (let i = 1; i < sentence.support.length; i++) {
+        assert.ok(sentence.support[i - 1]!.similarity >= sentence.support[i]!.similarity);
+      }
+      for (const support of sentence.support) {
+        assert.notEqual(support.heading, 'Summary', 'the abstract never supports itself');
+        assert.ok(text.slice(support.span.start, support.span.end).length > 0);
+      }
+    }
+    // The costs claim is backed by the costs section.
+    const costs = check.abstract.sentences.find((s) => s.text.startsWith('Reminders cost'))!;
+    assert.equal(costs.support[0]!.heading, 'Costs');
+  });
+
+  it('states its thresholds and keeps every similarity in [0, 1]', () => {
+    assert.deepEqual(check.thresholds, ABSTRACT_CHECK_DEFAULTS);
+    for (const section of check.sections) {
+      assert.ok(section.similarity >= 0 && section.similarity <= 1);
+      assert.equal(section.covered, section.similarity >= check.thresholds.covered);
+    }
+  });
+
+  it('compares the abstract with a summary of the same length, in both directions', () => {
+    const rouge = check.rouge;
+    assert.ok(rouge, check.notices.join('; '));
+    assert.equal(rouge.words, check.abstract.words);
+    assert.ok(rouge.summary.length > 0);
+    // The summary is made from the body: none of its sentences comes from the Summary section.
+    const abstractSpan = check.abstract.span!;
+    for (const sentence of rouge.summary) {
+      assert.ok(sentence.span.end <= abstractSpan.start || sentence.span.start >= abstractSpan.end, sentence.text);
+    }
+    // ROUGE-N counts the same clipped matches either way round, so precision and recall swap
+    // (Lin 2004, §2: recall over the reference's n-grams, precision over the candidate's).
+    for (const n of ['rouge1', 'rouge2'] as const) {
+      const forward = rouge.abstractAgainstSummary[n];
+      const reverse = rouge.summaryAgainstAbstract[n];
+      assert.ok(Math.abs(forward.precision - reverse.recall) < 1e-12);
+      assert.ok(Math.abs(forward.recall - reverse.precision) < 1e-12);
+      assert.ok(Math.abs(forward.f1 - reverse.f1) < 1e-12);
+    }
+    // Abstract and summary describe the same pilot, so they share words, but the abstract is not a copy.
+    assert.ok(rouge.abstractAgainstSummary.rouge1.f1 > 0.2, JSON.stringify(rouge.abstractAgainstSummary));
+    assert.ok(rouge.abstractAgainstSummary.rouge1.f1 < 0.9);
+  });
+
+  it('is plain data that survives a JSON round trip', () => {
+    assert.deepEqual(JSON.parse(JSON.stringify(check)), check);
+  });
+
+  it('gives the same verdicts for the abstract supplied as separate text', () => {
+    const summaryStart = text.indexOf('## Summary');
+    const summaryEnd = text.indexOf('## Background');
+    const abstractText = text.slice(summaryStart, summaryEnd).replace('## Summary', '').trim();
+    const body = text.slice(0, summaryStart) + text.slice(summaryEnd);
+    const separate = expectCheck(checkAbstract(body, { format: 'markdown', language: 'en', abstract: { kind: 'text', text: abstractText } }));
+    assert.equal(separate.abstract.origin, 'text');
+    assert.equal(separate.abstract.span, null);
+    assert.ok(separate.abstract.sentences.every((s) => s.span === null));
+    assert.deepEqual(headingsOf(separate, separate.uncoveredSections), [MISSED_SECTION]);
+    assert.deepEqual(separate.unsupportedSentences.map((i) => separate.abstract.sentences[i]!.text), [INVENTED_CLAIM]);
+  });
+
+  it('uses a named heading when asked, and explains a missing one', () => {
+    const byName = expectCheck(checkAbstract(text, { format: 'markdown', language: 'en', abstract: { kind: 'heading', heading: 'next steps' } }));
+    assert.equal(byName.abstract.heading, 'Next steps');
+    assert.ok(!byName.sections.some((s) => s.heading === 'Next steps'));
+    const missing = checkAbstract(text, { format: 'markdown', abstract: { kind: 'heading', heading: 'Conclusions' } });
+    assert.equal(missing.ok, false);
+    assert.match((missing as { error: string }).error, /"Conclusions"/);
+  });
+
+  it('returns a clear error when the document has no abstract section', () => {
+    const report = checkAbstract(demo('bike-share-rebalancing.md'), { format: 'markdown', language: 'en' });
+    assert.deepEqual(report, { ok: false, error: NO_ABSTRACT_MESSAGE });
+    assert.equal(NO_ABSTRACT_MESSAGE, 'No section headed Summary/Abstract/TL;DR found; pass --abstract-heading or --abstract');
+  });
+
+  it('prefers a Summary over an Overview, and takes an Overview when it is all there is', () => {
+    const doc = (first: string, second: string) =>
+      `# Title\n\n## ${first}\n\nThe ferry timetable changes in May.\n\n## ${second}\n\nThe ferry leaves at nine.\n\n## Timetable\n\nFrom May the ferry timetable adds a late crossing at eleven on Fridays and Saturdays, and the early crossing moves to six.\n`;
+    const both = expectCheck(checkAbstract(doc('Overview', 'TL;DR'), { format: 'markdown', language: 'en' }));
+    assert.equal(both.abstract.heading, 'TL;DR');
+    const overviewOnly = expectCheck(checkAbstract(doc('Overview', 'Details'), { format: 'markdown', language: 'en' }));
+    assert.equal(overviewOnly.abstract.heading, 'Overview');
+  });
+
+  it('finds the underlined plain-text heading "1. Summary" in the field report', () => {
+    const report = expectCheck(checkAbstract(demo('field-report.txt'), { format: 'plaintext', language: 'en' }));
+    assert.equal(report.abstract.heading, '1. Summary');
+    assert.ok(report.sections.length >= 4);
+    assert.ok(!report.sections.some((s) => s.heading === '1. Summary'));
+  });
+});
+
+describe('check: abstract options and edge cases', () => {
+  const doc = [
+    '# Harbour ferry timetable',
+    '',
+    '## Summary',
+    '',
+    'The changes are as follows:',
+    '',
+    '- The late ferry crossing runs at eleven on Fridays and Saturdays.',
+    '- Ticket machines take contactless cards.',
+    '',
+    '## Timetable',
+    '',
+    'From May the harbour ferry adds a late crossing at eleven on Fridays and Saturdays. The early crossing moves from half past six to six.',
+    '',
+    '## Tickets',
+    '',
+    'Ticket machines on every pier now accept contactless cards. Paper tickets remain on sale at the kiosks near the harbour office.',
+    '',
+  ].join('\n');
+  const run = (extra: object = {}) => expectCheck(checkAbstract(doc, { format: 'markdown', language: 'en', ...extra }));
+
+  it('never flags a lead-in line as an unsupported claim', () => {
+    const check = run();
+    const leadIn = check.abstract.sentences[0]!;
+    assert.equal(leadIn.text, 'The changes are as follows:');
+    assert.equal(leadIn.claim, false);
+    assert.equal(leadIn.supported, true);
+    assert.deepEqual(check.unsupportedSentences, []);
+    assert.deepEqual(check.uncoveredSections, []);
+  });
+
+  it('applies caller thresholds, clamped to [0, 1]', () => {
+    const strict = run({ thresholds: { covered: 5, supported: 1 } });
+    assert.deepEqual(strict.thresholds, { ...ABSTRACT_CHECK_DEFAULTS, covered: 1, supported: 1 });
+    assert.deepEqual(headingsOf(strict, strict.uncoveredSections), ['Timetable', 'Tickets']);
+    assert.deepEqual(strict.unsupportedSentences, [1, 2]);
+    const lax = run({ thresholds: { covered: 0, supported: Number.NaN } });
+    assert.equal(lax.thresholds.covered, 0);
+    assert.equal(lax.thresholds.supported, ABSTRACT_CHECK_DEFAULTS.supported);
+  });
+
+  it('lists sections too short to judge instead of calling them left out', () => {
+    const withStub = doc + '## Fares\n\nTo be decided.\n';
+    const check = expectCheck(checkAbstract(withStub, { format: 'markdown', language: 'en' }));
+    assert.deepEqual(check.unjudgedSections.map((s) => s.heading), ['Fares']);
+    assert.ok(!check.sections.some((s) => s.heading === 'Fares'));
+  });
+
+  it('says so when there is nothing outside the abstract', () => {
+    const report = checkAbstract('# Note\n\n## Summary\n\nThe ferry runs late on Fridays.\n', { format: 'markdown', language: 'en' });
+    assert.equal(report.ok, false);
+    assert.match((report as { error: string }).error, /no prose outside the abstract/);
+  });
+});
+
+// Rust RFCs (MIT/Apache-2.0, /work/shared/corpus) open with a "Summary" written by their authors:
+// real abstracts by other people. These are the first five (by number) whose Summary has three
+// sentences or more; a one-sentence abstract is not meant to cover a whole RFC.
+const CORPUS = '/work/shared/corpus/rust-rfcs/docs';
+const CORPUS_DOCS = [
+  '0008-new-intrinsics.md',
+  '0019-opt-in-builtin-traits.md',
+  '0034-bounded-type-parameters.md',
+  '0042-regexps.md',
+  '0048-traits.md',
+];
+
+describe('check: abstract on corpus documents', function () {
+  before(function () {
+    if (!existsSync(CORPUS)) this.skip();
+  });
+
+  it('never throws, and covers most sections that visibly restate an abstract sentence', () => {
+    let clear = 0;
+    let clearCovered = 0;
+    for (const name of CORPUS_DOCS) {
+      const text = readFileSync(`${CORPUS}/${name}`, 'utf8');
+      const report = expectCheck(checkAbstract(text, { format: 'markdown', language: 'en' }));
+      assert.equal(report.abstract.heading, 'Summary', name);
+      for (const section of report.sections) {
+        // "Clear matching text", judged without tf-idf: some sentence of the section repeats at
+        // least four distinct words (five letters or longer) of one abstract sentence.
+        if (!sharesFourLongWords(text, section.span, report.abstract.sentences.map((s) => s.text))) continue;
+        clear++;
+        if (section.covered) clearCovered++;
+      }
+    }
+    assert.ok(clear >= 5, `too few clear sections to judge: ${clear}`);
+    assert.ok(clearCovered / clear >= 0.75, `${clearCovered} of ${clear} clearly matching sections covered`);
+  });
+});
+
+function sharesFourLongWords(text: string, span: { start: number; end: number }, abstract: readonly string[]): boolean {
+  const longWords = (s: string) => new Set((s.toLowerCase().match(/\p{L}{5,}/gu) ?? []));
+  const sentences = text.slice(span.start, span.end).split(/(?<=[.!?])\s+/u);
+  return abstract.some((a) => {
+    const wanted = longWords(a);
+    return sentences.some((s) => [...longWords(s)].filter((w) => wanted.has(w)).length >= 4);
+  });
+}

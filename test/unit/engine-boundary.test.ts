@@ -1,0 +1,31 @@
+import assert from 'node:assert/strict';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+
+// The engine must run in a browser and in the editor's worker alike (project rule): no editor API,
+// no Node built-ins.
+const FORBIDDEN = /from\s+['"](vscode|node:[^'"]+|fs|path|os|child_process|worker_threads|crypto|util|stream|url|buffer)['"]/;
+const GLOBALS = /\b(process|Buffer|require|__dirname)\s*[.(]/;
+
+function files(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const path = join(dir, name);
+    return statSync(path).isDirectory() ? files(path) : path.endsWith('.ts') ? [path] : [];
+  });
+}
+
+describe('engine boundary', () => {
+  const sources = files('src/core');
+
+  it('finds the engine sources', () => {
+    assert.ok(sources.length > 20, `only ${sources.length} files under src/core`);
+  });
+
+  for (const file of sources) {
+    it(`${file} imports neither the editor API nor Node-only modules`, () => {
+      const text = readFileSync(file, 'utf8');
+      assert.doesNotMatch(text, FORBIDDEN);
+      assert.doesNotMatch(text.replace(/\/\/.*|\/\*[\s\S]*?\*\//g, ''), GLOBALS);
+    });
+  }
+});

@@ -1,0 +1,87 @@
+import assert from 'node:assert/strict';
+import fc from 'fast-check';
+import { isToPanel, parsePanelMessage, type FromPanel } from '../../src/extension/messages';
+
+const valid: FromPanel[] = [
+  { type: 'ready' },
+  { type: 'reveal', summaryId: 3, sentence: 12 },
+  { type: 'applyRepair', summaryId: 3, warning: 0, repair: 2 },
+  { type: 'setLength', unit: 'sentences', value: 5 },
+  { type: 'setLength', unit: 'percent', value: 100 },
+  { type: 'setMethod', method: 'textrank' },
+  { type: 'setBalance', enabled: false },
+  { type: 'command', command: 'insertSummary' },
+];
+
+describe('extension messages: validating what the panel sends', () => {
+  it('accepts every well-formed message unchanged', () => {
+    for (const message of valid) assert.deepEqual(parsePanelMessage(message), { ok: true, message });
+  });
+
+  it('rejects unknown types, wrong field types, out-of-range values and extra fields, with a reason', () => {
+    const bad: unknown[] = [
+      null,
+      'reveal',
+      42,
+      [],
+      {},
+      { type: 'evaluate', code: 'alert(1)' },
+      { type: 'reveal', summaryId: '3', sentence: 1 },
+      { type: 'reveal', summaryId: 3, sentence: -1 },
+      { type: 'reveal', summaryId: 3, sentence: 1.5 },
+      { type: 'reveal', summaryId: 3, sentence: Number.NaN },
+      { type: 'reveal', summaryId: 3, sentence: 1, href: 'https://example.invalid' },
+      { type: 'applyRepair', summaryId: 1, warning: 0, repair: 99 },
+      { type: 'setLength', unit: 'pages', value: 3 },
+      { type: 'setLength', unit: 'percent', value: 101 },
+      { type: 'setLength', unit: 'sentences', value: 0 },
+      { type: 'setMethod', method: '__proto__' },
+      { type: 'setBalance', enabled: 'true' },
+      { type: 'command', command: 'workbench.action.terminal.new' },
+      { type: 'ready', extra: true },
+    ];
+    for (const raw of bad) {
+      const result = parsePanelMessage(raw);
+      assert.equal(result.ok, false, JSON.stringify(raw));
+      if (!result.ok) assert.ok(result.reason.length > 0);
+    }
+  });
+
+  it('never throws and never accepts a message with a field it does not know (property)', () => {
+    fc.assert(
+      fc.property(fc.anything(), (raw) => {
+        const result = parsePanelMessage(raw);
+        if (result.ok) {
+          assert.ok(typeof raw === 'object' && raw !== null);
+          assert.deepEqual(Object.keys(raw).sort(), Object.keys(result.message).sort());
+        }
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('never accepts a mutated valid message whose fields are the wrong type (property)', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...valid.filter((m) => m.type !== 'ready')), fc.oneof(fc.string(), fc.object(), fc.constant(null), fc.double()), (message, junk) => {
+        const keys = Object.keys(message).filter((key) => key !== 'type');
+        const key = keys[0]!;
+        const mutated = { ...message, [key]: junk };
+        const result = parsePanelMessage(mutated);
+        if (result.ok) assert.deepEqual(result.message, mutated); // only when junk happens to be valid
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});
+
+describe('extension messages: the webview side check', () => {
+  it('recognizes the extension’s messages and drops others', () => {
+    assert.equal(isToPanel({ type: 'busy', busy: true }), true);
+    assert.equal(isToPanel({ type: 'clear' }), true);
+    assert.equal(isToPanel({ type: 'summary', summary: { groups: [], figures: {} } }), true);
+    assert.equal(isToPanel({ type: 'summary', summary: '<img src=x onerror=alert(1)>' }), false);
+    assert.equal(isToPanel({ type: 'busy', busy: 'yes' }), false);
+    assert.equal(isToPanel({ type: 'html', html: '<b>x</b>' }), false);
+    assert.equal(isToPanel(null), false);
+  });
+});

@@ -1,0 +1,192 @@
+import assert from 'node:assert/strict';
+import { fromMarkdown } from 'mdast-util-from-markdown';
+import type { Heading, List, Paragraph, RootContent } from 'mdast';
+import { buildPanelSummary, UNTITLED_SECTION } from '../../src/extension/panel-model';
+import { applyRepair, countWords } from '../../src/extension/repairs';
+import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
+import { describePick } from '../../src/extension/hover-text';
+import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';
+import { FERRY_TEXT, ferrySummary } from './extension-fixture';
+
+describe('extension panel model', () => {
+  it('groups sentences by balance unit, in document order, with sub-section paths and warnings', () => {
+    const panel = buildPanelSummary(ferrySummary(), 7, 'ferry.md', 'document');
+    assert.equal(panel.id, 7);
+    assert.deepEqual(
+      panel.groups.map((g) => [g.heading, g.sentences.map((s) => s.sentence), g.summaryShare]),
+      [
+        ['Night Ferry Timetable', [0], 0.25],
+        ['Fares', [3, 4], 0.5],
+        ['Safety', [5], 0.25],
+      ],
+    );
+    const discounts = panel.groups[1]!.sentences[1]!;
+    assert.deepEqual(discounts.subPath, ['Discounts']);
+    const flagged = panel.groups[1]!.sentences[0]!;
+    assert.equal(flagged.warnings.length, 1);
+    assert.equal(flagged.warnings[0]!.index, 0);
+    assert.deepEqual(
+      flagged.warnings[0]!.repairs.map((r) => r.label),
+      ['Add the context sentence', 'Swap for the next best sentence', 'Show without “However,”'],
+    );
+    assert.deepEqual(panel.figures, { ...ferrySummary().stats });
+  });
+
+  it('labels text before the first heading and puts a refusal first among the notices', () => {
+    const summary = ferrySummary();
+    const untitled = { ...summary, shares: summary.shares.map((s) => (s.section === 1 ? { ...s, heading: '' } : s)), refused: 'Too long.', notices: ['Too long.', 'Other.'] };
+    const panel = buildPanelSummary(untitled, 1, 'x', 'document');
+    assert.equal(panel.shares[0]!.heading, UNTITLED_SECTION);
+    assert.deepEqual(panel.notices, ['Too long.', 'Other.']);
+  });
+});
+
+describe('extension repairs (applied to the summary, never the document)', () => {
+  it('adds the context sentence in document order and updates figures, shares and warnings', () => {
+    const before = ferrySummary();
+    const outcome = applyRepair(before, 0, 0);
+    assert.ok(outcome.ok);
+    const after = outcome.summary;
+    assert.deepEqual(after.sentences.map((p) => p.sentence), [0, 2, 3, 4, 5]);
+    assert.equal(after.sentences[1]!.rank, 0);
+    assert.equal(after.stats.sentencesOut, 5);
+    assert.equal(after.stats.wordsOut, before.stats.wordsOut + 4);
+    assert.equal(after.shares.find((s) => s.section === 2)!.picked, 3);
+    assert.equal(after.warnings.length, 0);
+    assert.equal(after.document.text, FERRY_TEXT, 'the document is untouched');
+  });
+
+  it('swaps the flagged sentence for the replacement', () => {
+    const outcome = applyRepair(ferrySummary(), 0, 1);
+    assert.ok(outcome.ok);
+    assert.deepEqual(outcome.summary.sentences.map((p) => p.sentence), [0, 2, 4, 5]);
+    assert.equal(outcome.summary.stats.sentencesOut, 4);
+  });
+
+  it('shows the sentence without its connective, marked as edited', () => {
+    const outcome = applyRepair(ferrySummary(), 0, 2);
+    assert.ok(outcome.ok);
+    const pick = outcome.summary.sentences.find((p) => p.sentence === 3)!;
+    assert.equal(pick.text, 'Children ride free.');
+    assert.match(pick.edited!.reason, /However/);
+    assert.equal(outcome.summary.stats.wordsOut, ferrySummary().stats.wordsOut - 1);
+  });
+
+  it('refuses repairs that are not offered', () => {
+    assert.equal(applyRepair(ferrySummary(), 5, 0).ok, false);
+    assert.equal(applyRepair(ferrySummary(), 0, 9).ok, false);
+  });
+
+  it('counts words as runs of letters and digits, keeping contractions and hyphenated words whole', () => {
+    assert.equal(countWords("It's a well-known 3-step plan — twice."), 6);
+    assert.equal(countWords('   '), 0);
+  });
+});
+
+function blocks(markdown: string): RootContent[] {
+  return fromMarkdown(markdown).children;
+}
+
+describe('extension summary text: copy and insert', () => {
+  it('inserts a Markdown document’s summary as a block right under its title (checked with mdast)', () => {
+    const summary = ferrySummary();
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', 200, 'document');
+    assert.equal(plan.placement, 'underTitle');
+    assert.equal(plan.offset, '# Night Ferry Timetable'.length);
+    const result = FERRY_TEXT.slice(0, plan.offset) + plan.text + FERRY_TEXT.slice(plan.offset);
+    // The rest of the document is unchanged, byte for byte.
+    assert.equal(result.slice(plan.offset + plan.text.length), FERRY_TEXT.slice(plan.offset));
+    // External reference: mdast-util-from-markdown parses the result; the title stays the first
+    // block, the summary is the next blocks (a caption paragraph, then a list), then the old text.
+    const tree = blocks(result);
+    assert.equal(tree[0]!.type, 'heading');
+    assert.equal((tree[0] as Heading).depth, 1);
+    assert.equal(tree[1]!.type, 'paragraph');
+    assert.match(JSON.stringify((tree[1] as Paragraph).children), /Summary/);
+    assert.equal(tree[2]!.type, 'list');
+    assert.equal((tree[2] as List).children.length, summary.sentences.length);
+    assert.equal(tree[3]!.type, 'paragraph');
+  });
+
+  it('follows the document’s CRLF line endings', () => {
+    const crlf = FERRY_TEXT.replace(/\n/g, '\r\n');
+    const plan = planInsertion(ferrySummary(crlf), crlf, 'markdown', 0, 'document');
+    assert.ok(plan.text.includes('\r\n'));
+    assert.ok(!/[^\r]\n/.test(plan.text), 'no bare LF');
+  });
+
+  it('puts a selection’s summary, and plain text, at the cursor, on a line of its own', () => {
+    const summary = ferrySummary();
+    const cursor = FERRY_TEXT.indexOf('returns');
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', cursor, 'selection');
+    assert.equal(plan.placement, 'atCursor');
+    assert.equal(plan.offset, cursor);
+    assert.ok(plan.text.startsWith('\n\n'));
+    const plain = planInsertion(summary, FERRY_TEXT, 'plaintext', 0, 'document');
+    assert.equal(plain.offset, 0);
+    assert.match(plain.text, /^Summary \(extractive/);
+    assert.equal(plain.text.split('\n').filter((line) => line.startsWith('- ')).length, summary.sentences.length);
+  });
+
+  it('copies Markdown whose sentence text cannot turn into markup (checked with mdast)', () => {
+    const hostile = '<img src=x onerror=alert(1)> *not emphasis* [link](javascript:alert(1))';
+    const summary = ferrySummary(FERRY_TEXT, { sentence: hostile });
+    const markdown = summaryForClipboard(summary);
+    // External reference: micromark/mdast must see no HTML, emphasis or link nodes in the list items.
+    const types = new Set<string>();
+    const visit = (node: { type: string; children?: unknown[] }): void => {
+      types.add(node.type);
+      for (const child of (node.children ?? []) as { type: string }[]) visit(child);
+    };
+    visit(fromMarkdown(markdown));
+    for (const forbidden of ['html', 'emphasis', 'link', 'image']) assert.ok(!types.has(forbidden), `no ${forbidden} node`);
+    assert.ok(markdown.includes('onerror=alert(1)'), 'the text itself is kept');
+  });
+});
+
+describe('extension hover text', () => {
+  it('shows rank, score and the strongest features, escaped as Markdown', () => {
+    const pick = ferrySummary().sentences[1]!;
+    const text = describePick(pick, 6, 'blend');
+    assert.match(text, /rank 2 of 6/);
+    assert.match(text, /score 0\.500/);
+    assert.ok(text.indexOf('position') < text.indexOf('heading'), 'largest feature first');
+    assert.ok(text.includes('heading\\|overlap'), 'a pipe in a feature name cannot break the table');
+  });
+
+  it('says when a sentence came from a repair instead of a ranking', () => {
+    const pick = { ...ferrySummary().sentences[0]!, rank: 0 };
+    assert.match(describePick(pick, 6, 'blend'), /added to the summary by a repair/);
+  });
+});
+
+describe('extension panel HTML shell', () => {
+  it('has a deny-by-default policy: scripts only by nonce, styles and fonts only from the extension', () => {
+    const csp = contentSecurityPolicy('https://file+.vscode-resource.example', 'abc123==');
+    const directives = new Map(csp.split(';').map((d) => d.trim().split(/\s+/)).map(([name, ...values]) => [name!, values]));
+    assert.deepEqual(directives.get('default-src'), ["'none'"]);
+    assert.deepEqual(directives.get('script-src'), ["'nonce-abc123=='"]);
+    assert.deepEqual(directives.get('style-src'), ['https://file+.vscode-resource.example']);
+    assert.deepEqual(directives.get('font-src'), ['https://file+.vscode-resource.example']);
+    assert.ok(!csp.includes('unsafe-inline') && !csp.includes('unsafe-eval'));
+  });
+
+  it('makes 128-bit nonces that differ each time', () => {
+    const nonces = new Set(Array.from({ length: 50 }, () => makeNonce()));
+    assert.equal(nonces.size, 50);
+    for (const nonce of nonces) assert.equal(Buffer.from(nonce, 'base64').length, 16);
+  });
+
+  it('loads one script with the nonce and contains no inline handlers or inline script', () => {
+    const html = panelHtml({ cspSource: 'vscode-resource:', nonce: 'N0nce', scriptUri: 'vscode-resource:/dist/webview.js', styleUri: 'vscode-resource:/media/panel.css' });
+    assert.equal(html.match(/<script/g)?.length, 1);
+    assert.match(html, /<script nonce="N0nce" src="vscode-resource:\/dist\/webview.js"><\/script>/);
+    assert.ok(!/\son[a-z]+=/i.test(html));
+    assert.ok(!/style="/.test(html));
+  });
+
+  it('escapes attribute values', () => {
+    const html = panelHtml({ cspSource: 'x', nonce: 'n', scriptUri: '"><script>alert(1)</script>', styleUri: 's' });
+    assert.equal(html.match(/<script/g)?.length, 1);
+  });
+});

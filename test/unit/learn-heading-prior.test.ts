@@ -1,0 +1,56 @@
+import assert from 'node:assert/strict';
+import { DEFAULT_HEADING_RULES, headingPrior, sectionPriors } from '../../src/core/rank/heading-prior';
+
+describe('heading prior (Edmundson 1969 location idea)', () => {
+  it('favours headings that state the problem or the proposal', () => {
+    for (const heading of ['Motivation', 'Overview', 'Goals', 'Introduction', 'Background', '1. Introduction']) {
+      assert.ok(headingPrior(heading) > 1.2, `${heading}: ${headingPrior(heading)}`);
+    }
+    assert.ok(headingPrior('Design') > 1);
+  });
+
+  it('disfavours headings that weigh options, list open questions or point elsewhere', () => {
+    for (const heading of ['Alternatives', 'Unresolved questions', 'Drawbacks', 'References', 'Prior art', 'Future possibilities', 'Future work']) {
+      assert.ok(headingPrior(heading) < 0.8, `${heading}: ${headingPrior(heading)}`);
+    }
+  });
+
+  it('is neutral for headings it does not know, and ignores case and punctuation', () => {
+    assert.equal(headingPrior('Parser changes'), 1);
+    assert.equal(headingPrior(''), 1);
+    assert.equal(headingPrior('MOTIVATION:'), headingPrior('motivation'));
+  });
+
+  it('averages the rules a heading matches ("Rationale and alternatives")', () => {
+    const rationale = headingPrior('Rationale');
+    const alternatives = headingPrior('Alternatives');
+    assert.equal(headingPrior('Rationale and alternatives'), (rationale + alternatives) / 2);
+  });
+
+  it('lets a longer phrase override the words inside it ("Future work" is one rule)', () => {
+    const futureWork = DEFAULT_HEADING_RULES.find((r) => r.phrase.join(' ') === 'future work')!;
+    assert.equal(headingPrior('Future work'), futureWork.weight);
+  });
+
+  it('does not mistake "reference-level explanation" for a references section', () => {
+    assert.ok(headingPrior('Reference-level explanation') > 1);
+  });
+
+  it('accepts a custom table', () => {
+    assert.equal(headingPrior('Risks', [{ phrase: ['risks'], weight: 2 }]), 2);
+  });
+
+  it('lets a section with an unknown heading inherit its parent’s prior', () => {
+    const priors = sectionPriors([
+      { heading: '', parent: null },
+      { heading: 'Motivation', parent: 0 },
+      { heading: 'Parser changes', parent: 1 },
+      { heading: 'Drawbacks', parent: 0 },
+      { heading: 'Open items', parent: null },
+    ]);
+    assert.equal(priors[0], 1);
+    assert.equal(priors[2], priors[1]);
+    assert.ok(priors[3]! < 1);
+    assert.equal(priors[4], 1);
+  });
+});

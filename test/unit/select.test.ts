@@ -1,0 +1,64 @@
+import assert from 'node:assert/strict';
+import { selectSentences, type SelectionInput } from '../../src/core/select/select';
+
+function input(overrides: Partial<Omit<SelectionInput, 'scores'>> & { scores: number[] }): SelectionInput {
+  const n = overrides.scores.length;
+  return {
+    wordCounts: new Array(n).fill(10),
+    terms: Array.from({ length: n }, (_, i) => [`t${i}`, `u${i}`]),
+    unitOf: new Int32Array(n),
+    unitWeights: new Map([[0, n * 10]]),
+    budget: { unit: 'sentences', value: 2 },
+    minSentences: 0,
+    minPerSection: 1,
+    balance: true,
+    mmrLambda: 0.7,
+    ...overrides,
+    scores: Float64Array.from(overrides.scores),
+  };
+}
+
+describe('selectSentences', () => {
+  it('takes the best sentences and returns them in document order', () => {
+    const result = selectSentences(input({ scores: [0.1, 0.9, 0.2, 0.8] }));
+    assert.deepEqual(result.picked, [1, 3]);
+  });
+
+  it('gives every section with content a sentence when the budget allows (topic balance)', () => {
+    // Section 1 holds all the high scores; section 2 must still be represented.
+    const unitOf = Int32Array.from([1, 1, 1, 1, 2, 2]);
+    const unitWeights = new Map([[1, 40], [2, 20]]);
+    const scores = [0.9, 0.8, 0.85, 0.7, 0.1, 0.2];
+    const balanced = selectSentences(input({ scores, unitOf, unitWeights, budget: { unit: 'sentences', value: 3 } }));
+    assert.deepEqual(balanced.picked, [0, 2, 5]);
+    assert.equal(balanced.quotas.get(1), 2);
+    assert.equal(balanced.quotas.get(2), 1);
+    const unbalanced = selectSentences(input({ scores, unitOf, unitWeights, balance: false, budget: { unit: 'sentences', value: 3 } }));
+    assert.deepEqual(unbalanced.picked, [0, 1, 2]);
+  });
+
+  it('never passes a word budget', () => {
+    const wordCounts = [30, 5, 8, 12, 20, 4];
+    const result = selectSentences(input({ scores: [0.9, 0.8, 0.7, 0.6, 0.5, 0.4], wordCounts, budget: { unit: 'words', value: 25 } }));
+    const total = result.picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
+    assert.ok(total <= 25, `picked ${total} words`);
+    assert.ok(result.picked.length >= 2);
+  });
+
+  it('reaches the minimum sentence count of a ratio budget', () => {
+    const result = selectSentences(input({ scores: [0.9, 0.8, 0.7, 0.6, 0.5], minSentences: 3, budget: { unit: 'ratio', value: 0.01 } }));
+    assert.equal(result.picked.length, 3);
+  });
+
+  it('skips a near-duplicate of a picked sentence (MMR)', () => {
+    const terms = [['bike', 'dock', 'truck'], ['bike', 'dock', 'truck'], ['rider', 'credit']];
+    const result = selectSentences(input({ scores: [0.9, 0.89, 0.6], terms, budget: { unit: 'sentences', value: 2 }, mmrLambda: 0.5 }));
+    assert.deepEqual(result.picked, [0, 2]);
+  });
+
+  it('ignores sentences that are not candidates and handles empty input', () => {
+    const result = selectSentences(input({ scores: [0.9, 0.1], unitOf: Int32Array.from([-1, 0]) }));
+    assert.deepEqual(result.picked, [1]);
+    assert.deepEqual(selectSentences(input({ scores: [] })).picked, []);
+  });
+});
