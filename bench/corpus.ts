@@ -40,7 +40,7 @@ export interface CorpusDocument {
 export interface CorpusLoad {
   readonly directory: string;
   readonly documents: readonly CorpusDocument[];
-  /** How many files were skipped, by reason. */
+  /** How many files of the loaded half (or both) were skipped, by reason. */
   readonly skipped: Readonly<Record<string, number>>;
   readonly files: number;
 }
@@ -81,8 +81,8 @@ export function prepareDocument(file: string, text: string): CorpusDocument | { 
   return { file, number, half: halfOf(number), bodyText: split.bodyText, body, referenceSentences, referenceWords };
 }
 
-/** Reads every Markdown file of the folder (sorted by name) and prepares it. */
-export async function loadCorpus(directory: string, onProgress?: (done: number, total: number) => void): Promise<CorpusLoad> {
+/** Reads the Markdown files of the folder (sorted by name) and prepares those of the wanted half (or all). */
+export async function loadCorpus(directory: string, half: Half | 'both', onProgress?: (done: number, total: number) => void): Promise<CorpusLoad> {
   let names: string[];
   try {
     names = (await readdir(directory)).filter((name) => name.toLowerCase().endsWith('.md')).sort();
@@ -97,6 +97,8 @@ export async function loadCorpus(directory: string, onProgress?: (done: number, 
   const documents: CorpusDocument[] = [];
   const skipped: Record<string, number> = {};
   for (const [index, name] of names.entries()) {
+    const number = documentNumber(name);
+    if (half !== 'both' && number !== null && halfOf(number) !== half) continue;
     const prepared = prepareDocument(name, await readFile(join(directory, name), 'utf8'));
     if ('skipped' in prepared) skipped[prepared.skipped] = (skipped[prepared.skipped] ?? 0) + 1;
     else documents.push(prepared);

@@ -240,8 +240,7 @@ function report(args: QualityArgs, corpus: Awaited<ReturnType<typeof loadCorpus>
   const lead = get('lead');
   const oracle = get('oracle');
   const best = get(DEFAULT_METHOD);
-  const used = corpus.documents.length;
-  const trainCount = corpus.documents.filter((d) => d.half === 'train').length;
+  const halfFiles = corpus.documents.length + Object.values(corpus.skipped).reduce((a, b) => a + b, 0);
   const skipped = Object.entries(corpus.skipped).map(([reason, count]) => `${count} × ${reason}`).join('; ') || 'none';
   const r1 = mean(best, best.f1.r1);
   const targets = [
@@ -261,7 +260,7 @@ function report(args: QualityArgs, corpus: Awaited<ReturnType<typeof loadCorpus>
       `(\`node dist/bench.cjs quality${args.split === 'test' ? '' : ` --split ${args.split}`}\`); do not edit by hand.`,
     '',
     `- Corpus: ${corpus.files} Markdown design documents (Rust RFCs, see the corpus README), read from \`${args.corpus.endsWith('rust-rfcs/docs') ? '../shared/corpus/rust-rfcs/docs' : args.corpus}\`.`,
-    `- Procedure: the \`Summary\` section is cut out as the reference; the rest is summarized with a word budget equal to the reference's word count; documents with a reference under ${MIN_REFERENCE_WORDS} words or a body under ${MIN_BODY_SENTENCES} sentences are skipped. Usable: ${used} (${trainCount} train, ${used - trainCount} test). Skipped: ${skipped}.`,
+    `- Procedure: the \`Summary\` section is cut out as the reference; the rest is summarized with a word budget equal to the reference's word count; documents with a reference under ${MIN_REFERENCE_WORDS} words or a body under ${MIN_BODY_SENTENCES} sentences are skipped. Of the ${halfFiles} files in the ${args.split} half, ${corpus.documents.length} are usable; skipped: ${skipped}.`,
     `- Split by document: RFC number even → train half (tuning, model training), odd → test half. **This table: ${args.split} half, ${documents.length} documents.**`,
     '- ROUGE: Tersely\'s own implementation (`src/core/evaluate/rouge.ts`, checked against Lin 2004\'s examples and the `js-rouge` package), Porter stemming, stop words kept, one reference; ROUGE-L is summary-level union LCS. Figures are means over documents.',
     '- Anchors (computed by the bench, not by the engine): _lead_ = the first body sentences that fit the budget; _random_ = sentences in a seeded random order that fit; _oracle_ = greedy pick maximising ROUGE-1 F1 + ROUGE-2 F1 against the reference (a ceiling for extractive methods). All see the same candidate sentences as the methods (prose sentences outside the default excluded sections).',
@@ -303,7 +302,7 @@ export async function run(argv: readonly string[] = process.argv.slice(3)): Prom
   const started = performance.now();
   let corpus: Awaited<ReturnType<typeof loadCorpus>>;
   try {
-    corpus = await loadCorpus(args.corpus, (done, total) => {
+    corpus = await loadCorpus(args.corpus, args.split, (done, total) => {
       if (done % 100 === 0 || done === total) process.stderr.write(`\rreading corpus ${done}/${total}`);
     });
     process.stderr.write('\n');

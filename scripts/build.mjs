@@ -4,7 +4,9 @@ import { build } from 'esbuild';
 import { existsSync, mkdirSync } from 'node:fs';
 
 const production = process.argv.includes('--production');
-const common = { bundle: true, sourcemap: !production, minify: production, logLevel: 'warning', legalComments: 'none' };
+// natural's German stemmer pulls in a 300 KB stop-word table for a function we never call.
+const alias = { 'stopwords-iso': './src/core/text/stopwords-iso-stub.ts' };
+const common = { bundle: true, alias, sourcemap: !production, minify: production, logLevel: 'warning', legalComments: 'none' };
 
 const entries = [
   // Node programs (CommonJS so the `bin` entry and the extension host load them without flags).

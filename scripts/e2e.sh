@@ -113,6 +113,7 @@ start_server() {
   "npm.autoDetect": "off",
   "workbench.editor.enablePreview": false,
   "editor.minimap.enabled": false,
+  "files.autoSave": "off",
   "tersely.length.unit": "sentences",
   "tersely.length.value": 6
 }
@@ -132,21 +133,27 @@ JSON
   BASE="http://127.0.0.1:$port"
 }
 
+ONLY=${E2E_ONLY:-all} # ui | suite | all (for working on one part)
+UI_RC=0
+SUITE_RC=0
+
 # ---------- 1. UI script against the installed VSIX ----------
+if [ "$ONLY" != suite ]; then
 start_server ui
 step "editor up for the UI script ($BASE)"
-UI_RC=0
 npx --no-install tsx test/e2e/ui.e2e.ts "$BASE" "$RUN/workspace-ui" "$ARTIFACTS" "$RUN/ui/user-data/User/settings.json" 2>&1 | tee "$ARTIFACTS/ui.log" || UI_RC=$?
 stop_server
 step "UI script: exit code $UI_RC"
+fi
 
 # ---------- 2. in-editor mocha suite (extension under development) ----------
+if [ "$ONLY" != ui ]; then
 start_server suite
 step "editor up for the in-editor suite ($BASE)"
-SUITE_RC=0
 npx --no-install tsx test/e2e/run-in-editor.ts "$ROOT" "$RUN/workspace-suite" "$BASE" 2>&1 | tee "$ARTIFACTS/suite.log" || SUITE_RC=$?
 stop_server
 step "in-editor suite: exit code $SUITE_RC"
+fi
 
 cp "$RUN"/ui/server.log "$ARTIFACTS/server-ui.log" 2>/dev/null || true
 cp "$RUN"/suite/server.log "$ARTIFACTS/server-suite.log" 2>/dev/null || true

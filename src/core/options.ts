@@ -59,7 +59,7 @@ export const DEFAULT_OPTIONS: SummaryOptions = {
   mmrLambda: 0.7,
   repair: 'suggest',
   includeTables: false,
-  maxChars: 5_000_000,
+  maxChars: 3_000_000,
 };
 
 const BUDGET_UNITS: readonly BudgetUnit[] = ['sentences', 'words', 'ratio'];

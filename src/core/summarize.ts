@@ -81,7 +81,7 @@ export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, 
     picked = repaired.picked;
     edited = repaired.edited;
   }
-  const warnings = findStandAloneProblems(doc, picked);
+  const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
   return describeSummary({ analyzed, ranked, options, picked, unitOf, quotas: selection.quotas, edited, warnings });
 }
 

@@ -3,6 +3,7 @@
  * rank and the features behind the score; figures; each balance unit's share of document and summary.
  */
 import type { SummaryOptions } from './options';
+import { topSectionDepth } from './select/units';
 import type {
   AnalyzedDocument,
   PickedSentence,
@@ -35,6 +36,7 @@ export function describeSummary(input: ReportInput): Summary {
   const { doc } = analyzed;
   const wordCounts = analyzed.words.map((w) => w.length);
   const ranks = rankOrder(ranked.scores, unitOf);
+  const topDepth = topSectionDepth(doc);
 
   const sentences: PickedSentence[] = picked.map((i) => {
     const sentence = doc.sentences[i]!;
@@ -43,7 +45,7 @@ export function describeSummary(input: ReportInput): Summary {
       sentence: i,
       text: editedText ?? sentence.text,
       span: sentence.span,
-      sectionPath: sectionPath(analyzed, sentence.section),
+      sectionPath: sectionPath(analyzed, sentence.section, topDepth),
       section: sentence.section,
       score: ranked.scores[i] ?? 0,
       rank: ranks[i] ?? 0,
@@ -123,12 +125,13 @@ function featuresOf(ranked: RankResult, i: number): Record<string, number> {
   return out;
 }
 
-export function sectionPath(analyzed: AnalyzedDocument, section: number): string[] {
+/** Headings from the top section level down; a lone title heading is left out, it is the same for every line. */
+export function sectionPath(analyzed: AnalyzedDocument, section: number, topDepth = topSectionDepth(analyzed.doc)): string[] {
   const path: string[] = [];
   let current: number | null = section;
   while (current !== null && current > 0) {
     const s: AnalyzedDocument['doc']['sections'][number] = analyzed.doc.sections[current]!;
-    if (s.heading) path.unshift(s.heading);
+    if (s.heading && s.depth >= topDepth) path.unshift(s.heading);
     current = s.parent;
   }
   return path;

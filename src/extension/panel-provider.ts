@@ -22,10 +22,13 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     private readonly extensionUri: vscode.Uri,
     private readonly onMessage: (message: FromPanel) => void,
     private readonly log: vscode.LogOutputChannel,
+    /** Called when the panel first opens: a good moment to start the engine thread. */
+    private readonly onFirstShow: () => void = () => undefined,
   ) {}
 
   resolveWebviewView(view: vscode.WebviewView): void {
     this.view = view;
+    this.onFirstShow();
     const media = vscode.Uri.joinPath(this.extensionUri, 'media');
     const dist = vscode.Uri.joinPath(this.extensionUri, 'dist');
     view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [media, dist] };

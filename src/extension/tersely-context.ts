@@ -97,7 +97,7 @@ export class TerselyContext implements vscode.Disposable {
     this.status = this.own(new SummaryStatus());
     this.diagnostics = this.own(vscode.languages.createDiagnosticCollection(DIAGNOSTIC_SOURCE));
     this.models = new ModelFiles(this.log);
-    this.panel = this.own(new SummaryPanel(extension.extensionUri, (message) => void this.onPanelMessage(message), this.log));
+    this.panel = this.own(new SummaryPanel(extension.extensionUri, (message) => void this.onPanelMessage(message), this.log, () => this.engine.warm()));
     this.liveMode = extension.workspaceState.get<boolean>('tersely.live', false);
 
     this.own(vscode.window.registerWebviewViewProvider(VIEW_ID, this.panel));

@@ -54,6 +54,11 @@ export class EngineClient {
     });
   }
 
+  /** Starts the thread ahead of the first job (loading the engine takes a moment on a cold start). */
+  warm(): void {
+    if (!this.disposed) this.ensureWorker();
+  }
+
   /** Cancels the running job, if any: its promise rejects with CancelledError and its thread ends. */
   cancel(): void {
     const running = this.running;

@@ -91,6 +91,15 @@ async function main(): Promise<void> {
     assert.equal(await panel.locator('.summary button.sentence').count(), before, 'same summary after hide/show');
     mark('panel kept its summary across hide/show');
 
+    // ---- the same command again, with the panel open and the engine thread warm ----
+    const previousId = await panel.locator('[data-summary-id]').getAttribute('data-summary-id');
+    await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
+    const warmStarted = Date.now();
+    await runCommand(page, 'Tersely: Summarize Document');
+    await panel.locator(`[data-summary-id]:not([data-summary-id="${previousId}"])`).waitFor({ timeout: 30_000 });
+    checks['commandToPanelWarmMs'] = Date.now() - warmStarted;
+    mark(`summarized again: panel refilled ${checks['commandToPanelWarmMs']} ms after the command`);
+
     // ---- live mode follows edits ----
     const wordsBefore = await panel.locator('[data-figure="words"] dd').innerText();
     await runCommand(page, 'Tersely: Toggle Live Summary');
@@ -98,11 +107,13 @@ async function main(): Promise<void> {
     await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
     await page.keyboard.press('Control+End');
     await page.keyboard.type('\n\nA closing note adds that every rebalancing truck will now carry spare batteries for the electric fleet.\n');
-    const wordsAfter = await poll(() => panel.locator('[data-figure="words"] dd').innerText(), (text) => text !== wordsBefore, 20_000, 'the panel to follow the edit');
+    // The panel follows while typing goes on; in the end it must show the text as typed (16 more words).
     const wordsIn = (text: string) => Number(text.split('→')[0]!.replace(/[^0-9]/g, ''));
-    assert.ok(wordsIn(wordsAfter) > wordsIn(wordsBefore), `words in grew: ${wordsBefore} → ${wordsAfter}`);
+    const wordsAfter = await poll(() => panel.locator('[data-figure="words"] dd').innerText(), (text) => wordsIn(text) >= wordsIn(wordsBefore) + 16, 30_000, 'the panel to follow the edit');
     checks['live'] = { wordsBefore, wordsAfter };
     mark(`live update: ${wordsBefore} became ${wordsAfter}`);
+    // The typing left the viewport at the end of the document; highlights are drawn only where visible.
+    await page.keyboard.press('Control+Home');
     await poll(() => countDecorations(page), (n) => n > 0, 10_000, 'highlights after the live update');
     await page.screenshot({ path: join(artifacts, '03-live-updated.png') });
     await runCommand(page, 'Tersely: Toggle Live Summary');
@@ -110,6 +121,9 @@ async function main(): Promise<void> {
 
     // ---- a document full of payloads stays inert text ----
     const blockedBefore = blocked.length;
+    const xssOnDisk = readFileSync(join(workspace, XSS), 'utf8');
+    // The webview host adds a script of its own to the panel's document; count the scripts before the payloads.
+    const scriptsBefore = await (await panelFrame(page)).evaluate(() => Array.from(document.scripts).map((s) => s.src.replace(/^.*\//, '') || 'inline'));
     await openFile(page, XSS, 'Sanitizer regression notes');
     await panel.locator('#length-unit').selectOption('percent');
     await panel.locator('#length-value').fill('100');
@@ -123,7 +137,7 @@ async function main(): Promise<void> {
       return {
         xssGlobal: (window as unknown as { __terselyXss?: unknown }).__terselyXss ?? null,
         activeElements: content.querySelectorAll('img, script, svg, iframe, a, object, embed, style, meta, link, form, textarea').length,
-        scripts: document.scripts.length,
+        scripts: Array.from(document.scripts).map((s) => s.src.replace(/^.*\//, '') || 'inline'),
         csp: document.querySelector('meta[http-equiv="Content-Security-Policy"]')?.getAttribute('content') ?? '',
         text: content.textContent ?? '',
         overflow: document.documentElement.scrollWidth - document.documentElement.clientWidth,
@@ -133,12 +147,16 @@ async function main(): Promise<void> {
     assert.equal(inside.xssGlobal, null, 'no payload set a global in the panel');
     assert.equal(topGlobal, null, 'no payload set a global in the workbench');
     assert.equal(inside.activeElements, 0, 'no element was created from document text');
-    assert.equal(inside.scripts, 1, 'only the panel’s own script');
+    assert.deepEqual(inside.scripts, scriptsBefore, 'no script was added by the payloads');
+    assert.equal(inside.scripts.filter((src) => src === 'webview.js').length, 1, 'the panel’s own script, once');
     assert.match(inside.csp, /default-src 'none'/);
     assert.ok(inside.text.includes('<script>') && inside.text.includes('onerror='), 'payloads are shown as text');
     assert.ok(inside.overflow <= 1, `a 2,000-character word wraps (overflow ${inside.overflow}px)`);
-    const dirtyTabs = await page.locator('.tabs-container .tab.dirty').count();
-    assert.equal(dirtyTabs, 1, 'only the demo edited in live mode is dirty: the postMessage payload did not insert anything');
+    // A payload that managed to post 'insertSummary' would change the payload document. The demo,
+    // typed into above, shows that the dirty marker is read correctly.
+    const dirtyTabs = await page.locator('.tabs-container .tab.dirty').allInnerTexts();
+    assert.deepEqual(dirtyTabs.map((t) => t.trim()), [DEMO], 'only the demo typed into is modified');
+    assert.equal(readFileSync(join(workspace, XSS), 'utf8'), xssOnDisk, 'the payload document on disk is unchanged');
     const fromPanel = blocked.slice(blockedBefore).filter((request) => request.frameUrl.includes('webview') || /example\.invalid/.test(request.url));
     assert.deepEqual(fromPanel, [], 'no network request was attempted from the panel');
     checks['xss'] = { ...inside, text: `${inside.text.length} characters`, topGlobal, dirtyTabs, blockedSincePayloads: blocked.slice(blockedBefore) };

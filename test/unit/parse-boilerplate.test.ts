@@ -14,8 +14,21 @@ describe('parse: non-content blocks', () => {
       assert.equal(isMetadataRun(['Start Date: 2031-04-02', 'Review Ticket: #77', 'Owner:']), true);
       assert.equal(isMetadataRun(['Status: Draft']), true);
       assert.equal(isMetadataRun(['Approver #: 12']), true);
+      // No space after the colon, as long as it is not a URL scheme.
+      assert.equal(isMetadataRun(['Start Date: 2031-04-02', 'Tracker:https://example.org/9']), true);
       // A sentence after the colon is prose, not a field.
       assert.equal(isMetadataRun(['Note: the pump was replaced in May.']), false);
+      assert.equal(isMetadataRun(['Summary: a pump that moves twice the water']), false);
+      assert.equal(isMetadataRun(["There's one alternative: Not doing anything."]), false);
+      // A path separator is not a key's colon.
+      assert.equal(isMetadataRun(['In `core::mem` today:']), false);
+      // Lower-case keys read as definitions inside prose, not as fields...
+      assert.equal(isMetadataRun(['input: a token tree', 'output: a tree']), false);
+      // ...unless they sit in a run with capitalized keys.
+      assert.equal(isMetadataRun(['Start Date: 2031-04-02', 'eRFC PR: #12']), true);
+      // A long run may hold one sentence-like value; a short one may not.
+      assert.equal(isMetadataRun(['Name: quiet', 'Start Date: 2031-04-02', 'Tracker: N/A. The change ships itself.']), true);
+      assert.equal(isMetadataRun(['Name: quiet', 'Tracker: N/A. The change ships itself.']), false);
       // Keys are 1-4 words.
       assert.equal(isMetadataRun(['The team that ran the pilot last year: north']), false);
       // A URL is not a key.
@@ -30,6 +43,22 @@ describe('parse: non-content blocks', () => {
       const doc = md('- Proposal Name: quiet_mode\n- Start Date: 2031-04-02\n- Tracking: [board#12](https://example.org/12)\n\n# Quiet mode\n\nThe mode mutes alerts.');
       assert.deepEqual(texts(doc), ['The mode mutes alerts.']);
       assert.deepEqual(doc.skipped.map((s) => s.reason), ['metadata']);
+    });
+
+    it('reads a field whose value wraps or is a nested list', () => {
+      const text = [
+        '- Proposal Name: quiet_mode',
+        '- Tracking: [board#12](https://example.org/12)',
+        '  [board#13](https://example.org/13)',
+        '- Related:',
+        '  - [board#2](https://example.org/2)',
+        '  - [board#3](https://example.org/3) - the first try',
+        '',
+        'The mode mutes alerts.',
+      ].join('\n');
+      const doc = md(text);
+      assert.deepEqual(texts(doc), ['The mode mutes alerts.']);
+      assert.deepEqual(skippedAs(doc), [['metadata', text.slice(0, text.indexOf('\n\nThe'))]]);
     });
 
     it('skips metadata lines at the start of a section, with emphasized keys', () => {

@@ -39,9 +39,12 @@ export interface AbstractSentenceCheck {
 }
 
 export interface SectionCoverage {
-  /** Section index of the balance unit (0 = text before the first section heading). */
+  /**
+   * Section index of the balance unit. 0 is the text before the first section heading (under a
+   * lone title); it is judged only when the abstract is not the document's opening section.
+   */
   readonly section: number;
-  /** The unit's heading; '' for text before the first section heading. */
+  /** The unit's heading; '' for unit 0. */
   readonly heading: string;
   readonly span: Span;
   /** Content sentences of the unit (sub-sections included, the abstract itself excluded). */

@@ -11,10 +11,12 @@
  * "may", and shows the evidence so a person can judge.
  */
 import { analyze, resolveLanguage } from '../analyze';
-import { DEFAULT_OPTIONS } from '../options';
+import { inputProblem } from '../input-guard';
+import { DEFAULT_OPTIONS, resolveOptions } from '../options';
 import { parseDocument } from '../parse/index';
-import { summarize } from '../summarize';
-import type { DocumentFormat } from '../types';
+import { rankWith } from '../ranking';
+import { summarizeRanked } from '../summarize';
+import type { AnalyzedDocument, DocumentFormat } from '../types';
 import { locateAbstract, type LocatedAbstract } from './abstract-locator';
 import { ABSTRACT_CHECK_DEFAULTS, matchAbstract } from './abstract-match';
 import type { AbstractCheck, AbstractReport, AbstractRougeComparison, AbstractSource, AbstractThresholds } from './abstract-report';
@@ -34,6 +36,8 @@ export interface CheckAbstractOptions {
 
 export function checkAbstract(documentText: string, options: CheckAbstractOptions): AbstractReport {
   const thresholds = { ...ABSTRACT_CHECK_DEFAULTS, ...validThresholds(options.thresholds) };
+  const problem = inputProblem(documentText, DEFAULT_OPTIONS.maxChars);
+  if (problem !== null) return { ok: false, error: problem };
   const doc = parseDocument(documentText, { format: options.format });
   const language = resolveLanguage(doc, options.language ?? 'auto');
   const analyzed = analyze(doc, language);
@@ -46,11 +50,11 @@ export function checkAbstract(documentText: string, options: CheckAbstractOption
   const { sentences, sections, unjudged } = match;
 
   const notices: string[] = [];
-  const rouge = rougeComparison(documentText, options.format, language, located, notices);
+  const rouge = rougeComparison(analyzed, located, notices);
 
   const result: AbstractCheck = {
     ok: true,
-    language,
+    language: analyzed.language,
     abstract: {
       origin: located.origin,
       heading: located.heading,
@@ -82,27 +86,18 @@ function validThresholds(partial: Partial<AbstractThresholds> | undefined): Part
 }
 
 /** Tersely's own summary at the abstract's length, compared with the abstract both ways. */
-function rougeComparison(
-  documentText: string,
-  format: DocumentFormat,
-  language: string,
-  located: LocatedAbstract,
-  notices: string[],
-): AbstractRougeComparison | null {
+function rougeComparison(analyzed: AnalyzedDocument, located: LocatedAbstract, notices: string[]): AbstractRougeComparison | null {
   const words = located.sentences.reduce((sum, s) => sum + s.words, 0);
   // The summary must not simply copy the abstract back, so the abstract section is left out.
   const excludeHeadings = located.heading === null ? DEFAULT_OPTIONS.excludeHeadings : [...DEFAULT_OPTIONS.excludeHeadings, located.heading];
-  const summary = summarize(documentText, {
-    format,
-    language,
+  const options = resolveOptions({
+    language: analyzed.language,
     budget: { unit: 'words', value: Math.max(1, words) },
     minSentences: 1,
     excludeHeadings,
   });
-  if (summary.refused !== undefined) {
-    notices.push(`No comparison summary: ${summary.refused}`);
-    return null;
-  }
+  // Reuses the parse already made: summarize() would parse the whole document a second time.
+  const summary = summarizeRanked(analyzed, rankWith(options.method, analyzed, options), options);
   if (summary.sentences.length === 0) {
     notices.push('No comparison summary: the document has no sentences outside the abstract to pick.');
     return null;
@@ -112,6 +107,6 @@ function rougeComparison(
     summary: summary.sentences,
     words,
     summaryWords: summary.stats.wordsOut,
-    language,
+    language: analyzed.language,
   });
 }

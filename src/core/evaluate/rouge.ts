@@ -71,7 +71,7 @@ export function splitSentences(text: string): string[] {
 /** Tokenizes one sentence the way every ROUGE score here sees it. */
 export function rougeTokens(sentence: string, options: RougeOptions = {}): string[] {
   const language = options.language ?? 'en';
-  let tokens = sentence.toLowerCase().match(WORD) ?? [];
+  let tokens: string[] = sentence.toLowerCase().match(WORD) ?? [];
   if (options.removeStopWords) {
     const stop = stopWords(language);
     tokens = tokens.filter((token) => !stop.has(token));

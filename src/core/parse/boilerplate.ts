@@ -7,34 +7,45 @@
 import type { List, ListItem, Paragraph, PhrasingContent } from 'mdast';
 import type { SkipReason } from '../types';
 
-/** `Key: value`, the key being 1-4 short words starting with a letter (e.g. `Start Date`, `RFC PR #`). */
-const METADATA_LINE =
-  /^\p{L}[\p{L}\p{N}'’&/._()#+-]*(?:[ \t]+[\p{L}\p{N}'’&/._()#+-]+){0,3}[ \t]*:(?:[ \t]+(.*))?$/u;
+/**
+ * `Key: value`, the key being 1-4 short words starting with a letter (`Start Date`, `RFC PR #`);
+ * a `::` path separator is not a key's colon.
+ */
+const METADATA_LINE = /^\p{L}[\p{L}\p{N}'’&/._()#+-]*(?:[ \t]+[\p{L}\p{N}'’&/._()#+-]+){0,3}[ \t]*:(?!:)[ \t]*(.*)$/u;
 const MAX_KEY_LENGTH = 40;
 /** Values longer than this read as prose, not as a field (common practice, no source). */
 const MAX_VALUE_WORDS = 12;
+/** A lone `Key: value` line needs a shorter value to count as a field. */
+const MAX_LONE_VALUE_WORDS = 6;
 
 /**
- * True when every line is a `Key: value` field and no value reads like a sentence. Used only for
- * runs at the start of a document or section, where such fields describe the document.
+ * True when every line is a `Key: value` field and the values read like field values, not
+ * sentences (a long run may hold one sentence-like value, e.g. `Issue: N/A. Self-executing.`).
+ * At least one key must be capitalized: runs of lower-case keys (`input: a token tree`) are
+ * definitions inside prose. Used only for runs at the start of a document or section.
  */
 export function isMetadataRun(lines: readonly string[]): boolean {
   if (lines.length === 0) return false;
   let withValue = 0;
+  let proseLike = 0;
+  let capitalized = 0;
   for (const raw of lines) {
     const line = raw.trim();
     const match = METADATA_LINE.exec(line);
     if (match === null) return false;
     if (line.indexOf(':') > MAX_KEY_LENGTH) return false;
-    const value = (match[1] ?? '').trim();
+    if (!/^\p{Ll}/u.test(line)) capitalized++;
+    const value = match[1]!.trim();
     if (value.length === 0) continue;
-    if (value.startsWith('//')) return false; // a URL scheme, not a key
+    if (value.startsWith('//')) return false; // `https://…`: a URL, not a key
+    if (!/[\p{L}\p{N}]/u.test(value)) return false; // `Example::` introduces a literal block
     withValue++;
     const words = value.split(/\s+/).length;
-    if (words > MAX_VALUE_WORDS) return false;
-    if (words >= 4 && /[.!?]["')\]]*$/.test(value)) return false;
+    const lone = lines.length === 1;
+    const sentenceEnd = /[.!?]["')\]]*$/.test(value) && (lone || words >= 4);
+    if (words > (lone ? MAX_LONE_VALUE_WORDS : MAX_VALUE_WORDS) || sentenceEnd) proseLike++;
   }
-  return withValue > 0;
+  return withValue > 0 && capitalized > 0 && proseLike * 2 < withValue;
 }
 
 /** Text between links that is only separators (spaces, punctuation, symbols). */

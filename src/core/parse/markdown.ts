@@ -11,7 +11,7 @@ import { frontmatterFromMarkdown } from 'mdast-util-frontmatter';
 import { gfmFromMarkdown } from 'mdast-util-gfm';
 import { frontmatter } from 'micromark-extension-frontmatter';
 import { gfm } from 'micromark-extension-gfm';
-import type { BlockKind, ParsedDocument } from '../types';
+import type { BlockKind, ParsedDocument, SkipReason } from '../types';
 import { imageParagraphKind, isMetadataRun, isTaskItem, listSkipReason } from './boilerplate';
 import { DocumentBuilder } from './document-builder';
 import { frontMatterTitle } from './front-matter';
@@ -180,17 +180,18 @@ class MarkdownWalker {
     }
   }
 
-  /** A list whose every item is one `Key: value` line. */
+  /**
+   * A list whose every item is one `Key: value` field: a paragraph (whose wrapped lines continue the
+   * value), optionally followed by a nested list holding the value's parts.
+   */
   private isMetadataList(node: List): boolean {
     const lines: string[] = [];
     for (const item of node.children) {
-      const only = item.children.length === 1 ? item.children[0] : undefined;
-      if (only?.type !== 'paragraph') return false;
+      const [first, ...rest] = item.children;
+      if (first?.type !== 'paragraph' || !rest.every((child) => child.type === 'list')) return false;
       const inline = new InlineTextBuilder();
-      appendPhrasing(only.children, inline, this.source, () => {});
-      const itemLines = inline.lines();
-      if (itemLines.length !== 1) return false;
-      lines.push(itemLines[0]!);
+      appendPhrasing(first.children, inline, this.source, () => {});
+      lines.push(inline.lines().join(' '));
     }
     return isMetadataRun(lines);
   }
@@ -221,13 +222,13 @@ class MarkdownWalker {
     });
   }
 
-  private skip(reason: Parameters<DocumentBuilder['skip']>[0], node: Nodes): void {
+  private skip(reason: SkipReason, node: Nodes): void {
     const start = nodeStart(node, this.source);
     const end = nodeEnd(node, this.source);
     if (start !== null && end !== null) this.doc.skip(reason, start, end);
   }
 
-  private readonly skipSink = (reason: Parameters<DocumentBuilder['skip']>[0], start: number, end: number): void => {
+  private readonly skipSink = (reason: SkipReason, start: number, end: number): void => {
     this.doc.skip(reason, start, end);
   };
 }

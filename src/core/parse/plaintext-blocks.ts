@@ -96,6 +96,7 @@ class BlockReader {
     const itemStart = listItemContentStart(line);
     if (itemStart !== null && !isSeparatorLine(line)) {
       this.flush();
+      this.literalAfter = null; // a literal block must follow its `::` paragraph directly
       const column = line.indent + (itemStart - line.contentStart);
       this.open = { kind: 'listItem', indent: line.indent, ranges: [], lastLine: line };
       this.runningItem = { indent: line.indent, column };

@@ -80,9 +80,11 @@ function addParagraph(
 
 /** A run of list items: a metadata run, or items nested by marker indentation. */
 function addList(doc: DocumentBuilder, text: string, items: ParagraphBlock[], previousParagraph: number | null): void {
-  const single = items.every((item) => item.ranges.length === 1);
-  if (doc.atSectionStart && single && isMetadataRun(items.map((item) => text.slice(item.ranges[0]!.start, item.ranges[0]!.end)))) {
-    doc.skip('metadata', items[0]!.ranges[0]!.start, items[items.length - 1]!.ranges[0]!.end);
+  // An item's wrapped lines continue its value.
+  const fields = items.map((item) => item.ranges.map((r) => text.slice(r.start, r.end).trim()).join(' '));
+  if (doc.atSectionStart && isMetadataRun(fields)) {
+    const last = items[items.length - 1]!.ranges;
+    doc.skip('metadata', items[0]!.ranges[0]!.start, last[last.length - 1]!.end);
     return;
   }
   const indents: number[] = [];

@@ -22,9 +22,8 @@ export interface HeadingRule {
 export const DEFAULT_HEADING_RULES: readonly HeadingRule[] = [
   ...rules(1.5, ['summary', 'abstract', 'tl;dr', 'tldr', 'synopsis', 'executive summary', 'in brief', 'at a glance']),
   ...rules(1.4, ['overview', 'introduction', 'motivation', 'goals', 'goal', 'objectives', 'objective', 'purpose', 'aims']),
-  ...rules(1.3, ['background', 'problem', 'problem statement', 'proposal', 'proposed', 'conclusion', 'conclusions', 'key ideas']),
-  ...rules(1.15, ['design', 'approach', 'solution', 'description', 'explanation', 'context', 'scope', 'requirements', 'results', 'findings', 'recommendation', 'recommendations']),
-  ...rules(0.9, ['implementation', 'rationale', 'details', 'detailed', 'examples', 'example', 'usage', 'specification', 'semantics', 'syntax', 'grammar', 'migration', 'compatibility', 'documentation', 'teaching', 'teach', 'guide']),
+  ...rules(1.25, ['background', 'problem', 'problem statement', 'proposal', 'proposed', 'solution', 'design', 'approach', 'explanation', 'description', 'guide', 'walkthrough', 'conclusion', 'conclusions', 'key ideas', 'results', 'findings', 'recommendation', 'recommendations', 'context', 'scope', 'requirements']),
+  ...rules(0.9, ['implementation', 'rationale', 'details', 'examples', 'example', 'usage', 'specification', 'semantics', 'syntax', 'grammar', 'migration', 'compatibility', 'documentation', 'teaching', 'teach']),
   ...rules(0.75, ['discussion', 'risks', 'caveats', 'limitations', 'costs', 'cost', 'security', 'performance', 'testing', 'timeline', 'schedule', 'status', 'notes', 'terminology', 'definitions', 'glossary']),
   ...rules(0.6, ['alternatives', 'alternative', 'drawbacks', 'drawback', 'downsides', 'unresolved', 'open questions', 'open issues', 'questions', 'faq', 'future', 'future work', 'possibilities', 'extensions', 'prior art', 'related work', 'history', 'appendix', 'appendices']),
   ...rules(0.4, ['references', 'bibliography', 'see also', 'further reading', 'links', 'acknowledgements', 'acknowledgments', 'credits', 'changelog', 'change log', 'revision history', 'license', 'contents', 'table of contents']),
@@ -87,4 +86,16 @@ export function sectionPriors(
     }
   });
   return priors;
+}
+
+/** The prior of each sentence's section, one value per sentence (a ranker-shaped view). */
+export function headingPriorScores(
+  doc: {
+    readonly sections: readonly { readonly heading: string; readonly parent: number | null }[];
+    readonly sentences: readonly { readonly section: number }[];
+  },
+  table: readonly HeadingRule[] = DEFAULT_HEADING_RULES,
+): Float64Array {
+  const priors = sectionPriors(doc.sections, table);
+  return Float64Array.from(doc.sentences, (sentence) => priors[sentence.section] ?? 1);
 }

@@ -10,7 +10,7 @@ export const FITNESS_DEFAULTS = {
   /** Multiplier for a sentence ending with a colon (common practice, no source). */
   leadIn: 0.35,
   /** Multiplier for a sentence shorter than `shortWords` words. */
-  short: 0.5,
+  short: 0.25,
   shortWords: 4,
 } as const;
 

@@ -64,7 +64,12 @@ describe('Tersely in the editor', function () {
 
   it('summarizes the document: sentences inside it, in order, highlighted, with a status bar item and a hover', async () => {
     const editor = await openDemo();
+    let started = performance.now();
     const result = (await vscode.commands.executeCommand('tersely.summarizeDocument')) as { kind: string; sentences: number };
+    console.log(`TIMING first Summarize Document (engine thread starts): ${(performance.now() - started).toFixed(0)} ms`);
+    started = performance.now();
+    await vscode.commands.executeCommand('tersely.summarizeDocument');
+    console.log(`TIMING second Summarize Document (warm thread): ${(performance.now() - started).toFixed(0)} ms`);
     assert.equal(result.kind, 'shown');
     assert.equal(result.sentences, 5);
     const shown = api.inspect(editor.document.uri)!;
@@ -149,6 +154,7 @@ describe('Tersely in the editor', function () {
   it('gives a clear message instead of a summary above the size cap', async () => {
     const editor = await openDemo();
     await setting('maxDocumentSize', 1000);
+    await new Promise((resolve) => setTimeout(resolve, 300)); // let the settings refresh pass first
     assert.ok(editor.document.getText().length > 1000);
     const result = (await vscode.commands.executeCommand('tersely.summarizeDocument')) as { kind: string };
     assert.equal(result.kind, 'tooLarge');
@@ -175,10 +181,12 @@ describe('Tersely in the editor', function () {
 
   it('offers quick fixes that repair the summary, not the document', async function () {
     const editor = await openDemo();
+    const first = (await vscode.commands.executeCommand('tersely.summarizeDocument')) as { kind: string; id: number };
+    assert.equal(first.kind, 'shown');
+    // A longer summary has more chances of a sentence that leans on the one before it; the
+    // setting change refreshes the open summary by itself.
     await setting('length.value', 12);
-    const result = (await vscode.commands.executeCommand('tersely.summarizeDocument')) as { kind: string };
-    assert.equal(result.kind, 'shown');
-    const shown = api.inspect(editor.document.uri)!;
+    const shown = await until(() => api.inspect(editor.document.uri)!, (s) => s.id !== first.id && s.spans.length === 12, 'the refreshed 12-sentence summary');
     const diagnostics = vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.source === 'Tersely');
     assert.equal(diagnostics.length, shown.warnings, 'one diagnostic per coherence warning');
     if (shown.warnings === 0) {

@@ -2,10 +2,17 @@
  * Entry point the editor loads through `extensionTestsPath` (code-server or @vscode/test-electron
  * alike): runs the bundled in-editor tests with mocha and resolves only when all pass.
  */
-import Mocha from 'mocha';
+import * as mochaModule from 'mocha';
+import type MochaType from 'mocha';
 import { join } from 'node:path';
 
 const FILES = ['commands.test.cjs'];
+
+// However mocha's CommonJS exports reach this bundle (namespace, default or named), take the constructor.
+const candidates = mochaModule as unknown as { Mocha?: unknown; default?: { Mocha?: unknown } | unknown };
+const Mocha = [candidates.Mocha, (candidates.default as { Mocha?: unknown } | undefined)?.Mocha, candidates.default].find(
+  (candidate) => typeof candidate === 'function',
+) as typeof MochaType;
 
 export function run(): Promise<void> {
   const mocha = new Mocha({ ui: 'bdd', timeout: 30_000, color: false, reporter: 'spec' });
