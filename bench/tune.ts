@@ -18,7 +18,7 @@ import { rankBayes } from '../src/core/learn/model';
 import { modelFromLabelled } from '../src/core/learn/train-model';
 import { resolveOptions, type SummaryOptions } from '../src/core/options';
 import { headingPriorScores } from '../src/core/rank/heading-prior';
-import { RANKERS } from '../src/core/rank/index';
+import { BLEND_WEIGHTS, RANKERS } from '../src/core/rank/index';
 import { titleComponent } from '../src/core/rank/edmundson';
 import { normalize } from '../src/core/rank/normalize';
 import { selectSentences } from '../src/core/select/select';
@@ -53,6 +53,8 @@ export interface Config {
   readonly balance?: boolean;
   readonly mmrLambda?: number;
   readonly minPerSection?: number;
+  /** Experiment: sentences under 5 words, or ending in a colon, are not candidates. */
+  readonly dropFragments?: boolean;
 }
 
 function rouge12(picked: readonly number[], p: Prepared): { r1: number; r2: number } {
@@ -60,12 +62,19 @@ function rouge12(picked: readonly number[], p: Prepared): { r1: number; r2: numb
   return { r1: rougeNTokens(candidate, p.referenceTokens, 1).f1, r2: rougeNTokens(candidate, p.referenceTokens, 2).f1 };
 }
 
-function select(p: Prepared, scores: Float64Array, options: SummaryOptions): number[] {
+function select(p: Prepared, scores: Float64Array, options: SummaryOptions, dropFragments = false): number[] {
+  let unitOf = p.unitOf;
+  if (dropFragments) {
+    unitOf = Int32Array.from(p.unitOf);
+    p.analyzed.doc.sentences.forEach((s, i) => {
+      if (p.wordCounts[i]! < 5 || /:\s*$/.test(s.text)) unitOf[i] = -1;
+    });
+  }
   return selectSentences({
     scores,
     wordCounts: p.wordCounts,
     terms: p.analyzed.terms,
-    unitOf: p.unitOf,
+    unitOf,
     unitWeights: p.unitWeights,
     budget: options.budget,
     minSentences: options.minSentences,
@@ -100,7 +109,7 @@ export function evaluate(prepared: readonly Prepared[], config: Config): { r1: n
       mmrLambda: config.mmrLambda ?? 0.7,
       minPerSection: config.minPerSection ?? 1,
     });
-    const scored = rouge12(select(p, scores, options), p);
+    const scored = rouge12(select(p, scores, options, config.dropFragments), p);
     r1 += scored.r1;
     r2 += scored.r2;
     if (scored.r1 > p.leadR1) beats++;
@@ -161,8 +170,16 @@ function prepare(doc: CorpusDocument): Prepared {
 }
 
 /** Cross-fitted Bayes scores (see the file header). */
-function addBayes(prepared: readonly Prepared[]): void {
-  const labelled = prepared.map((p) => ({ features: sentenceFeatures(p.analyzed), labels: labelSentences(p.analyzed, p.doc.referenceSentences) }));
+function addBayes(prepared: readonly Prepared[], oracleLabels: boolean): void {
+  const labelled = prepared.map((p) => {
+    const features = sentenceFeatures(p.analyzed);
+    if (!oracleLabels) return { features, labels: labelSentences(p.analyzed, p.doc.referenceSentences) };
+    // Experiment: the greedy oracle's picks as positives instead of Kupiec-style best matches.
+    const labels = new Uint8Array(p.analyzed.doc.sentences.length);
+    const picked = greedyOracle({ sentences: p.sentenceTokens, wordCounts: p.wordCounts, reference: p.referenceTokens.flat(), wordLimit: p.doc.referenceWords });
+    for (const i of picked) labels[i] = 1;
+    return { features, labels };
+  });
   const fold = (p: Prepared) => (p.doc.number % 4 === 0 ? 0 : 1);
   for (const side of [0, 1]) {
     const model = modelFromLabelled(labelled.filter((_, k) => fold(prepared[k]!) !== side));
@@ -172,7 +189,8 @@ function addBayes(prepared: readonly Prepared[]): void {
   }
 }
 
-const CURRENT = { centroid: 0.35, lexrank: 0.35, position: 0.2, title: 0.1 };
+/** The blend as shipped (src/core/rank/index.ts), the starting point of every search. */
+const CURRENT: Partial<Record<Component, number>> = { ...BLEND_WEIGHTS };
 
 const EXPERIMENTS: readonly Config[] = [
   { label: 'current blend', weights: CURRENT },
@@ -188,6 +206,10 @@ const EXPERIMENTS: readonly Config[] = [
   { label: 'current + bayes 0.5', weights: { ...CURRENT, bayes: 0.5 } },
   { label: 'current + bayes 0.5, prior^2', weights: { ...CURRENT, bayes: 0.5 }, priorPower: 2 },
   { label: 'current, mmr 0.9', weights: CURRENT, mmrLambda: 0.9 },
+  { label: 'current, no fragments', weights: CURRENT, dropFragments: true },
+  { label: 'current, no fragments, no balance', weights: CURRENT, dropFragments: true, balance: false },
+  { label: 'bayes + lexrank 0.3 + centroid 0.1, no balance', weights: { bayes: 1, lexrank: 0.3, centroid: 0.1 }, balance: false },
+  { label: 'bayes + lexrank 0.3 + centroid 0.1, no balance, no fragments', weights: { bayes: 1, lexrank: 0.3, centroid: 0.1 }, balance: false, dropFragments: true },
   { label: 'current, minPerSection 0', weights: CURRENT, minPerSection: 0 },
 ];
 
@@ -241,7 +263,7 @@ export async function run(argv: readonly string[] = process.argv.slice(3)): Prom
     if ((k + 1) % 25 === 0) process.stderr.write(`\rpreparing ${k + 1}/${documents.length}`);
     return prepare(doc);
   });
-  addBayes(prepared);
+  addBayes(prepared, argv.includes('--oracle-labels'));
   process.stderr.write(`\nprepared ${prepared.length} train documents in ${((performance.now() - started) / 1000).toFixed(0)} s\n`);
   const lead = prepared.reduce((s, p) => s + p.leadR1, 0) / prepared.length;
   const oracle = prepared.reduce((s, p) => s + p.oracleR1, 0) / prepared.length;

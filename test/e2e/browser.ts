@@ -50,6 +50,20 @@ export async function openSession(base: string, viewport = { width: 1600, height
       return route.abort();
     },
   );
+  // Requests that a service worker answers never reach the route above; note every request the
+  // browser reports for another host as well (the webview host serves the panel through one).
+  context.on('request', (request) => {
+    const url = request.url();
+    if (url.startsWith(base) || url.startsWith('data:') || url.startsWith('blob:')) return;
+    if (blocked.some((entry) => entry.url === url)) return;
+    let frameUrl = '';
+    try {
+      frameUrl = request.frame().url();
+    } catch {
+      frameUrl = 'service worker';
+    }
+    blocked.push({ url, frameUrl });
+  });
   const page = await context.newPage();
   return { browser, context, page, blocked, close: () => browser.close() };
 }

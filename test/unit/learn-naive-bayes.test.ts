@@ -27,23 +27,30 @@ describe('naive Bayes (Kupiec et al. 1995) on a hand-made set', () => {
     assert.deepEqual(counts.features.b, { positive: [1, 0, 1], negative: [1, 2, 1] });
   });
 
-  it('smooths with add-one: P(a=1|S) = 3/4, P(a=1|¬S) = 2/6', () => {
-    // By hand: (2 + 1) / (2 + 1·2) and (1 + 1) / (4 + 1·2).
+  it('smooths with pseudo-counts in proportion to class size: P(a=1|S) = 0.8, P(a=1|¬S) = 0.35', () => {
+    // By hand: mean class size 3, so α_S = 2/3 and α_¬S = 4/3.
+    // P(a=1|S) = (2 + 2/3) / (2 + 2·2/3) = 0.8; P(a=1|¬S) = (1 + 4/3) / (4 + 2·4/3) = 0.35.
     const table = valueLogOdds(counts.features.a!, 2, 4, 1);
-    close(table[1]!, Math.log(3 / 4) - Math.log(2 / 6));
-    close(table[0]!, Math.log(1 / 4) - Math.log(4 / 6));
+    close(table[1]!, Math.log(0.8) - Math.log(0.35));
+    // P(a=0|S) = (0 + 2/3) / (10/3) = 0.2; P(a=0|¬S) = (3 + 4/3) / (20/3) = 0.65.
+    close(table[0]!, Math.log(0.2) - Math.log(0.65));
+  });
+
+  it('gives a value never seen in either class no weight', () => {
+    const table = valueLogOdds({ positive: [2, 0], negative: [4, 0] }, 2, 4, 1);
+    close(table[1]!, 0);
   });
 
   it('scores the log-odds P(S)/P(¬S) · Π P(F|S)/P(F|¬S)', () => {
     const { scores, contributions } = scoreNaiveBayes(counts, 1, matrix, 6);
-    // Sentence 0 (a=1, b=2): prior 2/4; a: (3/4)/(2/6) = 2.25; b: ((1+1)/(2+3)) / ((1+1)/(4+3)) = 0.4/(2/7) = 1.4.
-    close(Math.exp(scores[0]!), 0.5 * 2.25 * 1.4);
-    // Sentence 3 (a=0, b=1): a: (1/4)/(4/6) = 0.375; b: ((0+1)/5) / ((2+1)/7) = 0.2/(3/7) = 7/15.
-    close(Math.exp(scores[3]!), 0.5 * 0.375 * (7 / 15));
-    close(contributions.b![3]!, Math.log(7 / 15));
-    // The posterior of sentence 0 is odds / (1 + odds) = 1.575 / 2.575.
-    const odds = Math.exp(scores[0]!);
-    close(odds / (1 + odds), 1.575 / 2.575);
+    // Sentence 0 (a=1, b=2): prior 2/4; a: 0.8/0.35; b: ((1 + 2/3)/4) / ((1 + 4/3)/8) = (5/12)/(7/24) = 10/7.
+    close(Math.exp(scores[0]!), 0.5 * (0.8 / 0.35) * (10 / 7));
+    // Sentence 3 (a=0, b=1): a: 0.2/0.65; b: ((0 + 2/3)/4) / ((2 + 4/3)/8) = (1/6)/(5/12) = 0.4.
+    close(Math.exp(scores[3]!), 0.5 * (0.2 / 0.65) * 0.4);
+    close(contributions.b![3]!, Math.log(0.4));
+    // The posterior of sentence 0 is odds / (1 + odds).
+    const odds = 0.5 * (0.8 / 0.35) * (10 / 7);
+    close(Math.exp(scores[0]!) / (1 + Math.exp(scores[0]!)), odds / (1 + odds));
   });
 
   it('gives equal features equal scores, and rewards the value seen with positives', () => {

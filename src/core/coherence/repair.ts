@@ -27,6 +27,8 @@ export interface RepairInput {
   /** Per sentence, higher is better. */
   readonly scores: Float64Array;
   readonly wordBudget: number;
+  /** Most sentences the summary may hold (a sentence budget); no limit when absent. */
+  readonly maxPicks?: number;
   readonly wordsOf: (sentence: number) => number;
   /** Sentences that may be brought into the summary (as context or replacement); all when absent. */
   readonly isCandidate?: (sentence: number) => boolean;
@@ -59,6 +61,8 @@ export function repairAutomatically(input: RepairInput): RepairOutcome {
   for (const i of chosen) used += wordsOf(i);
   // Picks may already exceed the budget (a minimum sentence count); swaps must not make it worse.
   const ceiling = () => Math.max(input.wordBudget, used);
+  // Context may replace one long pick with several short ones; a sentence budget caps the count too.
+  const maxPicks = input.maxPicks ?? Infinity;
   const words = (sentences: Iterable<number>) => {
     let total = 0;
     for (const i of sentences) total += wordsOf(i);
@@ -89,7 +93,7 @@ export function repairAutomatically(input: RepairInput): RepairOutcome {
       const contextComplete = context.length > 0 && context.includes(problem.context);
 
       // 1. Add the context when the budget has room.
-      if (contextComplete && used + words(context) <= input.wordBudget) {
+      if (contextComplete && used + words(context) <= input.wordBudget && chosen.size + context.length <= maxPicks) {
         for (const c of context) {
           add(c);
           addedAsContext.add(c);
@@ -163,12 +167,13 @@ export function repairAutomatically(input: RepairInput): RepairOutcome {
       .sort((a, b) => scores[a]! - scores[b]! || b - a);
     const dropped: number[] = [];
     let freed = 0;
+    const tooMany = () => chosen.size - dropped.length + context.length > maxPicks;
     for (const p of candidates) {
-      if (freed >= needed) break;
+      if (freed >= needed && !tooMany()) break;
       dropped.push(p);
       freed += wordsOf(p);
     }
-    return freed >= needed && dropped.length > 0 ? dropped : null;
+    return freed >= needed && !tooMany() && dropped.length > 0 ? dropped : null;
   }
 
   /** Would removing pick `p` leave another pick dangling that does not dangle now? */

@@ -11,7 +11,9 @@
  * Every feature takes values 0..arity-1. A model stores the arity it was trained with; a model
  * whose arities differ from these definitions is refused on load.
  */
-import { RANKERS } from '../rank/index';
+// Rankers are imported one by one, not through rank/index, so the blend may use this model without an import cycle.
+import { centroidRank } from '../rank/centroid';
+import { lexRank } from '../rank/lexrank';
 import { countPhrases, DEFAULT_CUE_WORDS } from '../rank/edmundson';
 import { sectionPriors } from '../rank/heading-prior';
 import type { AnalyzedDocument, BlockKind } from '../types';
@@ -164,7 +166,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     m.titleOverlap[i] = Math.min(2, shared);
     m.ending[i] = endingBin(sentence.text);
   });
-  m.centroidRank.set(rankBins(RANKERS.centroid(a).scores));
-  m.lexrankRank.set(rankBins(RANKERS.lexrank(a).scores));
+  m.centroidRank.set(rankBins(centroidRank(a).scores));
+  m.lexrankRank.set(rankBins(lexRank(a).scores));
   return m;
 }

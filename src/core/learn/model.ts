@@ -5,7 +5,7 @@
  * File format (JSON, ours):
  *   {
  *     "format": "tersely-sentence-model", "version": 1, "kind": "naive-bayes",
- *     "smoothing": 1,                                  // add-α for P(F = v | class)
+ *     "smoothing": 1,                                  // α of the smoothing (naive-bayes.ts)
  *     "classes": { "positive": 812, "negative": 40210 }, // training sentences per class
  *     "features": { "length": { "positive": [..arity..], "negative": [..arity..] }, ... },
  *     "trainedOn": { ... }                              // optional provenance, free-form

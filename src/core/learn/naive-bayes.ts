@@ -7,7 +7,12 @@
  *     log P(S)/P(¬S) + Σ_j log P(Fj = v | S) / P(Fj = v | ¬S),
  * which is the same independence model written against the negative class rather than the
  * marginal; it stays a proper posterior when the features are not independent in the marginal.
- * Probabilities use add-α (Laplace) smoothing: P(F = v | c) = (count(v, c) + α) / (N_c + α · arity).
+ * Probabilities are smoothed with pseudo-counts in proportion to the class sizes:
+ *     P(F = v | c) = (count(v, c) + α_c) / (N_c + α_c · arity),   α_c = α · N_c / mean(N_S, N_¬S).
+ * Plain add-α (the same α for both classes) would hand a value never seen in either class a large
+ * log-odds in favour of the smaller class — (α / N_S) / (α / N_¬S) — here it is 0: no evidence, no
+ * effect. The proportional pseudo-counts are a Dirichlet prior shaped like the class sizes
+ * (common practice, no source).
  */
 import type { FeatureMatrix } from './features';
 
@@ -55,9 +60,12 @@ export function countFeatureValues(documents: readonly LabelledDocument[], ariti
 export function valueLogOdds(counts: ClassCounts, positiveTotal: number, negativeTotal: number, smoothing: number): Float64Array {
   const arity = counts.positive.length;
   const out = new Float64Array(arity);
+  const meanClass = (positiveTotal + negativeTotal) / 2;
+  const alphaPositive = (smoothing * positiveTotal) / meanClass;
+  const alphaNegative = (smoothing * negativeTotal) / meanClass;
   for (let v = 0; v < arity; v++) {
-    const pPositive = (counts.positive[v]! + smoothing) / (positiveTotal + smoothing * arity);
-    const pNegative = (counts.negative[v]! + smoothing) / (negativeTotal + smoothing * arity);
+    const pPositive = (counts.positive[v]! + alphaPositive) / (positiveTotal + alphaPositive * arity);
+    const pNegative = (counts.negative[v]! + alphaNegative) / (negativeTotal + alphaNegative * arity);
     out[v] = Math.log(pPositive) - Math.log(pNegative);
   }
   return out;

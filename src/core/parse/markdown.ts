@@ -17,6 +17,7 @@ import { DocumentBuilder } from './document-builder';
 import { frontMatterTitle } from './front-matter';
 import { InlineTextBuilder, singleLine } from './inline-text';
 import { appendPhrasing, nodeEnd, nodeStart, type InlineSource } from './markdown-inline';
+import { restoreMissingPositions } from './restore-positions';
 
 const FRONT_MATTER_KINDS = ['yaml', 'toml'] as const;
 
@@ -40,10 +41,12 @@ const ROOT_CONTEXT: BlockContext = { kind: 'paragraph', listDepth: -1, leadIn: n
 export function parseMarkdown(text: string, options: MarkdownOptions): ParsedDocument {
   // micromark drops a leading byte order mark and counts offsets without it.
   const shift = text.charCodeAt(0) === 0xfeff ? 1 : 0;
-  const tree = fromMarkdown(shift === 0 ? text : text.slice(shift), {
+  const body = shift === 0 ? text : text.slice(shift);
+  const tree = fromMarkdown(body, {
     extensions: [gfm(), frontmatter([...FRONT_MATTER_KINDS])],
     mdastExtensions: [gfmFromMarkdown(), frontmatterFromMarkdown([...FRONT_MATTER_KINDS])],
   });
+  restoreMissingPositions(tree, body);
   const walker = new MarkdownWalker({ text, shift }, new DocumentBuilder(text, options.baseOffset, 'markdown'), options);
   walker.walkBlocks(tree.children, ROOT_CONTEXT);
   return walker.finish();

@@ -40,7 +40,9 @@ describe('Tersely in the editor', function () {
   before(async () => {
     const extension = vscode.extensions.getExtension<TerselyApi>(EXTENSION_ID);
     assert.ok(extension, `${EXTENSION_ID} is installed`);
+    const started = performance.now();
     api = await extension.activate();
+    console.log(`TIMING activation (as seen by the test): ${(performance.now() - started).toFixed(0)} ms`);
     await setting('length.unit', 'sentences');
     await setting('length.value', 5);
   });
@@ -138,6 +140,15 @@ describe('Tersely in the editor', function () {
     const after = await until(() => api.inspect(editor.document.uri), (s) => s !== undefined && s.id !== first!.id && s.version === editor.document.version, 'the live summary of the edited text');
     assert.equal(after!.version, editor.document.version);
     assert.equal(after!.highlighted, true);
+  });
+
+  it('live mode follows the active editor when switching documents', async () => {
+    await openDemo();
+    await vscode.commands.executeCommand('tersely.toggleLive');
+    const other = await openDemo('pull-request.md');
+    const shown = await until(() => api.inspect(other.document.uri), (s) => s !== undefined, 'a summary of the editor switched to');
+    assert.equal(shown!.version, other.document.version);
+    assert.equal(shown!.scope, 'document');
   });
 
   it('refreshes an open summary when a setting changes', async () => {

@@ -53,9 +53,12 @@ export function rangeFailures(summary: Summary): string[] {
  * - words W: at most W words, except the single shortest candidate when no sentence fits;
  * - ratio r: at most round(r × candidate words) — candidate words ≤ words in — except that the
  *   first `minSentences` picks are taken even past that limit.
+ * Automatic repair (src/core/coherence/repair.ts) may swap picks for context sentences but never
+ * adds words beyond the larger of the limit and what the selection had picked; `unrepaired` gives
+ * that selection (the same request with repairs only suggested).
  * Words are counted as the engine counts them (its tokenizer over the source sentence's text).
  */
-export function budgetFailures(summary: Summary, request: SummarizeRequest): string[] {
+export function budgetFailures(summary: Summary, request: SummarizeRequest, unrepaired?: () => Summary): string[] {
   if (summary.refused !== undefined) return summary.sentences.length === 0 ? [] : ['a refused summary has sentences'];
   const options = resolveOptions(request);
   const { budget } = options;
@@ -79,7 +82,8 @@ export function budgetFailures(summary: Summary, request: SummarizeRequest): str
     }
   } else {
     const limit = Math.round(budget.value * summary.stats.wordsIn);
-    if (words > limit && picks.length > Math.max(1, options.minSentences)) {
+    const repairCeiling = () => (options.repair === 'auto' && unrepaired ? Math.max(limit, unrepaired().stats.wordsOut) : limit);
+    if (words > limit && picks.length > Math.max(1, options.minSentences) && words > repairCeiling()) {
       failures.push(`${words} words in ${picks.length} sentences for a ratio limit of ${limit} words (floor ${options.minSentences} sentences)`);
     }
   }
@@ -101,6 +105,6 @@ export function orderFailures(summary: Summary, text: string): string[] {
 }
 
 /** Every property of one summary; empty when all hold. */
-export function summaryFailures(summary: Summary, text: string, request: SummarizeRequest): string[] {
-  return [...rangeFailures(summary), ...budgetFailures(summary, request), ...orderFailures(summary, text)];
+export function summaryFailures(summary: Summary, text: string, request: SummarizeRequest, unrepaired?: () => Summary): string[] {
+  return [...rangeFailures(summary), ...budgetFailures(summary, request, unrepaired), ...orderFailures(summary, text)];
 }
