@@ -65,6 +65,11 @@ export function strongestValues(model: BayesModel, count = 6): string[] {
   return ['raises the odds most:', ...rows.slice(0, count).map(show), 'lowers them most:', ...rows.slice(-count).reverse().map(show)];
 }
 
+/** Quotes a word for a POSIX shell when it needs it, so the recorded command can be pasted back. */
+export function shellWord(word: string): string {
+  return /^[\w./=:@%+-]+$/.test(word) ? word : `'${word.replace(/'/g, `'\\''`)}'`;
+}
+
 /** Pretty JSON with each count list on one line, so a model file reads as a table. */
 export function modelJson(model: BayesModel): string {
   return JSON.stringify(model, null, 2).replace(/\[\s*([-\d.e+,\s]*?)\s*\]/g, (_, inner: string) => `[${inner.split(/,\s*/).join(', ')}]`) + '\n';
@@ -109,7 +114,7 @@ export async function runTrain(args: string[]): Promise<number> {
   try {
     model = trainModel(examples, {
       trainedOn: {
-        command: ['tersely', 'train', ...args].join(' '),
+        command: ['tersely', 'train', ...args].map(shellWord).join(' '),
         referenceHeading: heading,
         files: files.length,
         skipped,

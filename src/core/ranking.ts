@@ -5,16 +5,14 @@ import { RANKERS, rankBlend, type RankOptions } from './rank/index';
 import type { AnalyzedDocument, RankerName, RankResult } from './types';
 
 export function rankOptionsFrom(options: SummaryOptions): RankOptions {
-  return { cueWords: options.cueWords };
+  // A model that does not validate falls back to the shipped one; callers report the problem.
+  const loaded = options.model === undefined ? null : loadModel(options.model);
+  return { cueWords: options.cueWords, ...(loaded?.ok ? { model: loaded.model } : {}) };
 }
 
 export function rankWith(method: RankerName, analyzed: AnalyzedDocument, options: SummaryOptions): RankResult {
   const rankOptions = rankOptionsFrom(options);
   if (method === 'blend') return rankBlend(analyzed, rankOptions);
-  if (method === 'bayes') {
-    // A model that does not validate falls back to the shipped one; callers report the problem.
-    const loaded = options.model === undefined ? null : loadModel(options.model);
-    return rankBayes(analyzed, loaded?.ok ? loaded.model : undefined);
-  }
+  if (method === 'bayes') return rankBayes(analyzed, rankOptions.model);
   return RANKERS[method](analyzed, rankOptions);
 }

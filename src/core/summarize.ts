@@ -75,7 +75,7 @@ export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, 
       picked,
       scores: ranked.scores,
       wordBudget: Number.isFinite(selection.wordLimit) ? Math.max(selection.wordLimit, pickedWords) : pickedWords,
-      ...(process.env.ZZ_NOFIX ? {} : options.budget.unit === 'sentences' ? { maxPicks: Math.max(options.budget.value, picked.length) } : {}),
+      ...(options.budget.unit === 'sentences' ? { maxPicks: Math.max(options.budget.value, picked.length) } : {}),
       wordsOf: (i) => wordCounts[i] ?? 0,
       isCandidate: (i) => unitOf[i]! >= 0,
     });

@@ -44,7 +44,7 @@ export const DEFAULT_SETTINGS: TerselySettings = {
   cueWords: { bonus: [], stigma: [] },
   language: 'auto',
   repair: 'suggest',
-  maxDocumentSize: 5_000_000,
+  maxDocumentSize: 3_000_000,
   liveDelayMs: 300,
   modelFile: '',
 };

@@ -1,6 +1,8 @@
 import assert from 'node:assert/strict';
 import * as rank from '../../src/core/rank/index';
 import { BLEND_WEIGHTS, rankBlend, RANKERS, type RankOptions } from '../../src/core/rank/index';
+import { rankBayes } from '../../src/core/learn/model';
+import { rankOptionsFrom } from '../../src/core/ranking';
 import { resolveOptions } from '../../src/core/options';
 import { minMax, rankScale } from '../../src/core/rank/normalize';
 import type { AnalyzedDocument } from '../../src/core/types';
@@ -43,7 +45,7 @@ describe('rank/index', () => {
   it('pins the public API', () => {
     assert.deepEqual(Object.keys(rank).sort(), ['BLEND_NORMALIZATION', 'BLEND_WEIGHTS', 'RANKERS', 'rankBlend']);
     assert.deepEqual(Object.keys(RANKERS).sort(), NAMES);
-    assert.deepEqual(BLEND_WEIGHTS, { centroid: 0.35, lexrank: 0.35, position: 0.2, title: 0.1, luhn: 0, edmundson: 0, textrank: 0 });
+    assert.deepEqual(BLEND_WEIGHTS, { bayes: 1, lexrank: 0.3, centroid: 0.1, textrank: 0, position: 0, title: 0, luhn: 0, edmundson: 0 });
   });
 
   it('every ranker is pure: one finite score per sentence, input untouched, same result twice', () => {
@@ -79,9 +81,22 @@ describe('rank/index', () => {
     }
   });
 
-  it('blends normalised component scores with the default weights and records each component', () => {
+  it('blends by default the trained model with LexRank and the centroid', () => {
     const doc = seedLibrary();
     const result = rankBlend(doc);
+    assert.deepEqual(Object.keys(result.features!).sort(), ['bayes', 'centroid', 'lexrank']);
+    const bayes = minMax(rankBayes(doc).scores);
+    const centroid = minMax(RANKERS.centroid(doc).scores);
+    const lexrank = minMax(RANKERS.lexrank(doc).scores);
+    for (let i = 0; i < 8; i++) {
+      const expected = 1 * bayes[i]! + 0.3 * lexrank[i]! + 0.1 * centroid[i]!;
+      assert.ok(Math.abs(result.scores[i]! - expected) < 1e-12);
+    }
+  });
+
+  it('blends normalised component scores with given weights and records each component', () => {
+    const doc = seedLibrary();
+    const result = rankBlend(doc, { blend: { bayes: 0, centroid: 0.35, lexrank: 0.35, position: 0.2, title: 0.1 } });
     assert.deepEqual(Object.keys(result.features!).sort(), ['centroid', 'lexrank', 'position', 'title']);
     const centroid = minMax(RANKERS.centroid(doc).scores);
     const lexrank = minMax(RANKERS.lexrank(doc).scores);
@@ -99,19 +114,19 @@ describe('rank/index', () => {
 
   it('accepts other weights and rank normalisation', () => {
     const doc = seedLibrary();
-    const luhnOnly = rankBlend(doc, { blend: { centroid: 0, lexrank: 0, position: 0, title: 0, luhn: 1 } });
+    const luhnOnly = rankBlend(doc, { blend: { bayes: 0, centroid: 0, lexrank: 0, position: 0, title: 0, luhn: 1 } });
     assert.deepEqual(Object.keys(luhnOnly.features!), ['luhn']);
     assert.deepEqual(Array.from(luhnOnly.scores), Array.from(minMax(RANKERS.luhn(doc).scores)));
     assert.equal(luhnOnly.converged, undefined, 'no iterative component, nothing to report');
 
-    const ranked = rankBlend(doc, { normalization: 'rank', blend: { centroid: 0, lexrank: 0, title: 0 } });
+    const ranked = rankBlend(doc, { normalization: 'rank', blend: { bayes: 0, centroid: 0, lexrank: 0, title: 0, position: 0.2 } });
     const expected = rankScale(RANKERS.position(doc).scores).map((v) => 0.2 * v);
     assert.deepEqual(Array.from(ranked.scores), Array.from(expected));
   });
 
   it('accepts the pipeline\u2019s summary options as rank options (cue words pass through)', () => {
     const summaryOptions = resolveOptions({ cueWords: { bonus: ['volunt'], stigma: [] } });
-    const options: RankOptions = summaryOptions; // compile-time contract with src/core/options.ts
+    const options: RankOptions = rankOptionsFrom(summaryOptions); // the pipeline's conversion (src/core/ranking.ts)
     const { features } = RANKERS.edmundson(seedLibrary(), options);
     // Only s4 ("volunt sort packet weekend") holds the bonus word.
     assert.deepEqual(Array.from(features!.cue!), [0, 0, 0, 0, 1, 0, 0, 0]);
@@ -119,7 +134,7 @@ describe('rank/index', () => {
 
   it('passes ranker options through the blend', () => {
     const doc = seedLibrary();
-    const a = rankBlend(doc, { blend: { centroid: 0, position: 0, title: 0 }, lexrank: { variant: 'continuous' } });
+    const a = rankBlend(doc, { blend: { bayes: 0, centroid: 0, position: 0, title: 0 }, lexrank: { variant: 'continuous' } });
     assert.deepEqual(Array.from(a.features!.lexrank!), Array.from(minMax(RANKERS.lexrank(doc, { lexrank: { variant: 'continuous' } }).scores)));
   });
 });

@@ -37,6 +37,14 @@ describe('selectSentences', () => {
     assert.deepEqual(unbalanced.picked, [0, 1, 2]);
   });
 
+  it('lets the best sentences win when the budget cannot give every section one', () => {
+    const unitOf = Int32Array.from([1, 1, 2, 3]);
+    const unitWeights = new Map([[1, 20], [2, 10], [3, 10]]);
+    const result = selectSentences(input({ scores: [0.9, 0.8, 0.3, 0.2], unitOf, unitWeights, budget: { unit: 'sentences', value: 2 } }));
+    assert.deepEqual(result.picked, [0, 1]);
+    assert.equal(result.quotas.size, 0);
+  });
+
   it('never passes a word budget', () => {
     const wordCounts = [30, 5, 8, 12, 20, 4];
     const result = selectSentences(input({ scores: [0.9, 0.8, 0.7, 0.6, 0.5, 0.4], wordCounts, budget: { unit: 'words', value: 25 } }));

@@ -16,6 +16,7 @@ import { centroidRank } from '../rank/centroid';
 import { lexRank } from '../rank/lexrank';
 import { countPhrases, DEFAULT_CUE_WORDS } from '../rank/edmundson';
 import { sectionPriors } from '../rank/heading-prior';
+import { withDefaultsOnce } from '../rank/memo';
 import type { AnalyzedDocument, BlockKind } from '../types';
 
 export interface FeatureDefinition {
@@ -166,7 +167,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     m.titleOverlap[i] = Math.min(2, shared);
     m.ending[i] = endingBin(sentence.text);
   });
-  m.centroidRank.set(rankBins(centroidRank(a).scores));
-  m.lexrankRank.set(rankBins(lexRank(a).scores));
+  m.centroidRank.set(rankBins(withDefaultsOnce(a, 'centroid', () => centroidRank(a)).scores));
+  m.lexrankRank.set(rankBins(withDefaultsOnce(a, 'lexrank', () => lexRank(a)).scores));
   return m;
 }

@@ -83,10 +83,17 @@ const stemCaches = new Map<string, Map<string, string>>();
 /** Bounds memory on huge vocabularies; the cache simply starts over (common practice, no source). */
 const MAX_CACHED_STEMS = 200_000;
 
+/**
+ * Longer tokens are not words (base64, minified code, hashes) and are left unstemmed: the
+ * stemmers' suffix rules take time quadratic in the token's length, minutes for one 200,000-
+ * character token (common practice, no source; the longest dictionary words are under 50 letters).
+ */
+const MAX_STEMMED_LENGTH = 64;
+
 /** Stem of a lower-cased word; the word itself for a language without a stemmer. */
 export function stem(word: string, lang: string): string {
   const language = languageFor(lang);
-  if (language?.stem == null) return word;
+  if (language?.stem == null || word.length > MAX_STEMMED_LENGTH) return word;
   let cache = stemCaches.get(language.code);
   if (cache === undefined) {
     cache = new Map();
