@@ -3,11 +3,13 @@
  *   node dist/bench.cjs quality [options]   ROUGE against authors' summaries (bench/quality.ts)
  *   node dist/bench.cjs speed [options]     throughput and memory (bench/speed.ts)
  *   node dist/bench.cjs tune [options]      weight search on the train half (bench/tune.ts)
+ *   node dist/bench.cjs tune-repair         repair strategies on the train half (bench/tune-repair.ts)
  */
 async function main(): Promise<number> {
   const mode = process.argv[2];
   if (mode === 'quality') return (await import('./quality')).run(process.argv.slice(3));
   if (mode === 'tune') return (await import('./tune')).run(process.argv.slice(3));
+  if (mode === 'tune-repair') return (await import('./tune-repair')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
   console.error('usage: node dist/bench.cjs quality|speed|tune [options]');
   return 2;

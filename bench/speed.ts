@@ -1,5 +1,364 @@
-/** Placeholder until the speed benchmark is written (another part of the work replaces this file). */
-export async function run(_args: readonly string[] = []): Promise<number> {
-  console.error('speed bench not written yet');
-  return 1;
+/**
+ * Speed and footprint benchmark: prints one table, asserts nothing.
+ *
+ *   node --expose-gc dist/bench.cjs speed [--corpus PATH] [--quick] [--full]
+ *
+ * Inputs are corpus documents (../shared/corpus/rust-rfcs/docs) concatenated and cut to size
+ * (1 KB = 1,024 characters). Every size runs in its own child process, so its peak resident
+ * memory (maxRSS from process.resourceUsage) belongs to that size alone. Times are medians of
+ * several runs after warm-up runs (the 2 MB and 10 MB rows: one cold run); the stage columns
+ * time the same pipeline as summarize() (parse → analyze → rank → select+check) piece by piece,
+ * so the bottleneck is visible.
+ * --quick: fewer runs and no 2 MB / 10 MB rows; --full: also a 10 MB Markdown document with the
+ * size cap raised (minutes, and a lot of memory).
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { join, resolve } from 'node:path';
+import { analyze, resolveLanguage } from '../src/core/analyze';
+import { resolveOptions } from '../src/core/options';
+import { parseDocument } from '../src/core/parse/index';
+import { rankWith } from '../src/core/ranking';
+import { summarize, summarizeRanked } from '../src/core/summarize';
+import type { DocumentFormat, Summary } from '../src/core/types';
+import { corpusDirectory } from './corpus';
+
+const KB = 1024;
+const MB = 1024 * KB;
+
+/** Targets from the project's issues (engine and robustness); printed beside the figures. */
+const TARGETS = { smallMs: 30, smallChars: 20 * KB, megabyteMs: 1500, megabyteRssMb: 300 };
+
+interface Job {
+  readonly label: string;
+  readonly format: DocumentFormat;
+  readonly chars: number;
+  readonly warmups: number;
+  readonly runs: number;
+  /** Passed as maxChars; above the default cap for the 10 MB rows. */
+  readonly maxChars?: number;
+  /** Time the stages separately as well (skipped for the slowest rows). */
+  readonly stages: boolean;
+}
+
+interface JobResult {
+  readonly label: string;
+  readonly format: DocumentFormat;
+  readonly chars: number;
+  readonly sentences: number;
+  readonly picked: number;
+  readonly refused?: string;
+  readonly medianMs: number;
+  readonly runs: readonly number[];
+  readonly stages?: { parse: number; analyze: number; rank: number; select: number };
+  readonly baselineRssMb: number;
+  readonly peakRssMb: number;
+  readonly peakHeapMb: number;
+}
+
+const median = (values: readonly number[]): number => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length === 0 ? NaN : sorted.length % 2 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
+};
+
+const gc = (): void => (globalThis as { gc?: () => void }).gc?.();
+const mb = (bytes: number): number => bytes / MB;
+
+// ------------------------------------------------------------------ input
+
+function markdownFiles(dir: string): string[] {
+  return readdirSync(dir)
+    .sort()
+    .flatMap((name) => {
+      const path = join(dir, name);
+      return statSync(path).isDirectory() ? markdownFiles(path) : name.endsWith('.md') ? [path] : [];
+    });
+}
+
+/** Corpus documents joined by blank lines (repeated if the corpus is smaller), cut to `chars`. */
+function corpusText(dir: string, chars: number): string {
+  const files = markdownFiles(dir);
+  if (files.length === 0) throw new Error(`no .md files in ${dir}`);
+  const parts: string[] = [];
+  let length = 0;
+  for (let i = 0; length < chars; i = (i + 1) % files.length) {
+    const text = readFileSync(files[i]!, 'utf8');
+    parts.push(text);
+    length += text.length + 2;
+  }
+  let text = parts.join('\n\n').slice(0, chars);
+  // Never end on half of a surrogate pair.
+  if (/[\uD800-\uDBFF]$/.test(text)) text = text.slice(0, -1);
+  return text;
+}
+
+// ------------------------------------------------------------------ one size, in a child process
+
+function runJob(job: Job, corpus: string): JobResult {
+  const text = corpusText(corpus, job.chars);
+  const request = { format: job.format, ...(job.maxChars ? { maxChars: job.maxChars } : {}) };
+  gc();
+  const baselineRss = process.memoryUsage().rss;
+  let peakHeap = process.memoryUsage().heapUsed;
+  const sampleHeap = () => {
+    peakHeap = Math.max(peakHeap, process.memoryUsage().heapUsed);
+  };
+
+  for (let i = 0; i < job.warmups; i++) {
+    summarize(text, request);
+    sampleHeap();
+  }
+  const runs: number[] = [];
+  let last: Summary | undefined;
+  for (let i = 0; i < Math.max(1, job.runs); i++) {
+    gc();
+    const started = performance.now();
+    last = summarize(text, request);
+    runs.push(performance.now() - started);
+    sampleHeap();
+  }
+  if (last === undefined) throw new Error('no run');
+
+  let stages: JobResult['stages'];
+  if (job.stages && last.refused === undefined) {
+    const options = resolveOptions(request);
+    const times = { parse: [] as number[], analyze: [] as number[], rank: [] as number[], select: [] as number[] };
+    for (let i = 0; i < job.runs; i++) {
+      gc();
+      const t0 = performance.now();
+      const doc = parseDocument(text, { format: job.format, baseOffset: 0, includeTables: options.includeTables });
+      const t1 = performance.now();
+      const analyzed = analyze(doc, resolveLanguage(doc, options.language));
+      const t2 = performance.now();
+      const ranked = rankWith(options.method, analyzed, options);
+      const t3 = performance.now();
+      summarizeRanked(analyzed, ranked, options);
+      const t4 = performance.now();
+      sampleHeap();
+      times.parse.push(t1 - t0);
+      times.analyze.push(t2 - t1);
+      times.rank.push(t3 - t2);
+      times.select.push(t4 - t3);
+    }
+    stages = { parse: median(times.parse), analyze: median(times.analyze), rank: median(times.rank), select: median(times.select) };
+  }
+
+  return {
+    label: job.label,
+    format: job.format,
+    chars: text.length,
+    sentences: last.document.sentences.length,
+    picked: last.sentences.length,
+    ...(last.refused !== undefined ? { refused: last.refused } : {}),
+    medianMs: median(runs),
+    runs,
+    ...(stages ? { stages } : {}),
+    baselineRssMb: mb(baselineRss),
+    // maxRSS is in kilobytes.
+    peakRssMb: process.resourceUsage().maxRSS / KB,
+    peakHeapMb: mb(peakHeap),
+  };
+}
+
+/** Runs one job in a fresh Node process (same script, `--child`), so memory peaks do not mix. */
+function runInChild(job: Job, corpus: string): JobResult | { error: string } {
+  const script = process.argv[1]!;
+  const child = spawnSync(process.execPath, [...process.execArgv, script, 'speed', '--child', JSON.stringify({ job, corpus })], {
+    encoding: 'utf8',
+    maxBuffer: 16 * MB,
+  });
+  const line = child.stdout.trim().split('\n').pop() ?? '';
+  try {
+    return JSON.parse(line) as JobResult;
+  } catch {
+    return { error: (child.stderr || child.stdout || `exit ${child.status} ${child.signal ?? ''}`).trim().split('\n').slice(-3).join(' | ') };
+  }
+}
+
+// ------------------------------------------------------------------ extension footprint
+
+function fileSize(path: string): string {
+  return existsSync(path) ? `${(statSync(path).size / KB).toFixed(1)} KB` : 'not built';
+}
+
+/**
+ * Activation outside the editor: require dist/extension.cjs with a stand-in `vscode` module (every
+ * property a callable that returns another stand-in) and call activate with a stand-in context.
+ * It shows the cost of loading the bundle and building the context, not the editor's own work.
+ */
+function activationInChild(): { requireMs: number; activateMs: number } | { error: string } {
+  const path = resolve('dist/extension.cjs');
+  if (!existsSync(path)) return { error: 'dist/extension.cjs not built' };
+  const require = createRequire(resolve('package.json'));
+  const Module = require('node:module') as { _resolveFilename: (request: string, ...rest: unknown[]) => string };
+  const stubId = resolve('.vscode-stand-in.cjs');
+  const original = Module._resolveFilename;
+  Module._resolveFilename = function (this: unknown, request: string, ...rest: unknown[]) {
+    return request === 'vscode' ? stubId : original.call(this, request, ...rest);
+  };
+  // The bundle copies the module's own properties (esbuild's ESM interop), so the stand-in lists
+  // every name the bundle reads from it.
+  const names = new Set([...readFileSync(path, 'utf8').matchAll(/\bvscode\d*\.([A-Za-z_$][\w$]*)/g)].map((m) => m[1]!));
+  const api = Object.fromEntries([...names].map((name) => [name, standIn(`vscode.${name}`)]));
+  require.cache[stubId] = { id: stubId, filename: stubId, loaded: true, exports: api } as unknown as NodeJS.Module;
+  const t0 = performance.now();
+  const extension = require(path) as { activate: (context: unknown) => unknown; deactivate?: () => void };
+  const t1 = performance.now();
+  const context = {
+    subscriptions: [] as { dispose?: () => void }[],
+    extensionUri: standIn('extensionUri'),
+    extensionPath: resolve('.'),
+    globalState: standIn('globalState'),
+    workspaceState: standIn('workspaceState'),
+    extensionMode: 1,
+  };
+  try {
+    extension.activate(context);
+  } catch (error) {
+    return { error: `activate threw with the stand-in API: ${String(error).split('\n')[0]}` };
+  }
+  const t2 = performance.now();
+  try {
+    extension.deactivate?.();
+    for (const d of context.subscriptions) d.dispose?.();
+  } catch {
+    // Tearing down stand-ins is not measured.
+  }
+  return { requireMs: t1 - t0, activateMs: t2 - t1 };
+}
+
+function standIn(name: string): unknown {
+  const members = new Map<PropertyKey, unknown>();
+  const target = function () {};
+  return new Proxy(target, {
+    get(_target, property) {
+      if (property === 'then') return undefined; // not a promise
+      if (property === Symbol.toPrimitive) return () => 0;
+      if (property === Symbol.iterator) return function* () {};
+      if (property === 'dispose') return () => {};
+      if (!members.has(property)) members.set(property, standIn(`${name}.${String(property)}`));
+      return members.get(property);
+    },
+    set(_target, property, value) {
+      members.set(property, value);
+      return true;
+    },
+    apply: () => standIn(`${name}()`),
+    construct: () => standIn(`new ${name}`) as object,
+  });
+}
+
+// ------------------------------------------------------------------ the table
+
+function jobsFor(quick: boolean, full: boolean): Job[] {
+  const jobs: Job[] = [
+    { label: '20 KB', format: 'markdown', chars: 20 * KB, warmups: quick ? 3 : 10, runs: quick ? 9 : 31, stages: true },
+    { label: '200 KB', format: 'markdown', chars: 200 * KB, warmups: quick ? 1 : 2, runs: quick ? 3 : 7, stages: true },
+    { label: '1 MB', format: 'markdown', chars: MB, warmups: 1, runs: quick ? 1 : 3, stages: true },
+    { label: '1 MB', format: 'plaintext', chars: MB, warmups: 1, runs: quick ? 1 : 3, stages: true },
+  ];
+  if (!quick) {
+    // One cold run each from here: the point is that they finish, and how time grows.
+    jobs.push({ label: '2 MB', format: 'markdown', chars: 2 * MB, warmups: 0, runs: 1, stages: true });
+    jobs.push({ label: '10 MB (cap raised)', format: 'plaintext', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
+  }
+  if (full) jobs.push({ label: '10 MB (cap raised)', format: 'markdown', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
+  return jobs;
+}
+
+const pad = (text: string, width: number) => text.padStart(width);
+const ms = (value: number | undefined) => (value === undefined || Number.isNaN(value) ? '-' : value >= 100 ? value.toFixed(0) : value.toFixed(1));
+
+function printTable(results: readonly (JobResult | { error: string; label: string; format: string })[]): void {
+  const header = ['size', 'format', 'sentences', 'median ms', 'ms/KB', 'parse', 'analyze', 'rank', 'select+check', 'peak RSS MB', 'peak heap MB'];
+  const widths = [18, 9, 9, 9, 6, 7, 7, 7, 12, 11, 12];
+  console.log(header.map((h, i) => pad(h, widths[i]!)).join(' '));
+  for (const r of results) {
+    if ('error' in r) {
+      console.log(`${pad(r.label, widths[0]!)} ${pad(r.format, widths[1]!)}  failed: ${r.error}`);
+      continue;
+    }
+    const row = [
+      r.label,
+      r.format,
+      String(r.sentences),
+      ms(r.medianMs),
+      (r.medianMs / (r.chars / KB)).toFixed(2),
+      ms(r.stages?.parse),
+      ms(r.stages?.analyze),
+      ms(r.stages?.rank),
+      ms(r.stages?.select),
+      `${r.peakRssMb.toFixed(0)} (${r.baselineRssMb.toFixed(0)})`,
+      r.peakHeapMb.toFixed(0),
+    ];
+    console.log(row.map((c, i) => pad(c, widths[i]!)).join(' '));
+  }
+  console.log('  median ms: summarize() end to end, median of the runs after warm-up; stage columns: medians of separate staged runs.');
+  console.log('  peak RSS: maxRSS of the child process for that size (in brackets: RSS with the input loaded, before summarizing);');
+  console.log('  peak heap: largest heapUsed seen between runs (after each run, so a lower bound of the true peak).');
+}
+
+export async function run(args: readonly string[] = []): Promise<number> {
+  const childAt = args.indexOf('--child');
+  if (childAt >= 0) {
+    const { job, corpus } = JSON.parse(args[childAt + 1]!) as { job: Job; corpus: string };
+    console.log(JSON.stringify(runJob(job, corpus)));
+    return 0;
+  }
+  if (args.includes('--activation-child')) {
+    console.log(JSON.stringify(activationInChild()));
+    return 0;
+  }
+
+  const corpus = corpusDirectory(args);
+  if (!existsSync(corpus)) {
+    console.log(`speed: corpus folder not found at ${corpus}; skipping the engine figures (pass --corpus PATH or set TERSELY_CORPUS).`);
+  }
+  const quick = args.includes('--quick');
+  const full = args.includes('--full');
+  if (typeof (globalThis as { gc?: unknown }).gc !== 'function') console.log('(run with node --expose-gc for steadier figures)');
+
+  const results: (JobResult | { error: string; label: string; format: string })[] = [];
+  if (existsSync(corpus)) {
+    console.log(`Engine: method blend (default options), corpus ${corpus}`);
+    for (const job of jobsFor(quick, full)) {
+      const result = runInChild(job, corpus);
+      results.push('error' in result ? { ...result, label: job.label, format: job.format } : result);
+    }
+    printTable(results);
+
+    const small = results.find((r): r is JobResult => !('error' in r) && r.label === '20 KB');
+    const big = results.find((r): r is JobResult => !('error' in r) && r.label === '1 MB' && r.format === 'markdown');
+    if (small && big) {
+      const growth = big.medianMs / big.chars / (small.medianMs / small.chars);
+      console.log(`\nGrowth 20 KB → 1 MB: time per KB × ${growth.toFixed(2)} (1.00 = linear; size × ${(big.chars / small.chars).toFixed(0)}, time × ${(big.medianMs / small.medianMs).toFixed(0)})`);
+      console.log(`Targets: 20 KB ≤ ${TARGETS.smallMs} ms → ${ms(small.medianMs)} ms ${small.medianMs <= TARGETS.smallMs ? 'met' : 'NOT met'}; ` +
+        `1 MB ≤ ${TARGETS.megabyteMs} ms → ${ms(big.medianMs)} ms ${big.medianMs <= TARGETS.megabyteMs ? 'met' : 'NOT met'}; ` +
+        `1 MB peak RSS ≤ ${TARGETS.megabyteRssMb} MB → ${big.peakRssMb.toFixed(0)} MB ${big.peakRssMb <= TARGETS.megabyteRssMb ? 'met' : 'NOT met'}`);
+    }
+    const bigDoc = corpusText(corpus, 10 * MB);
+    const started = performance.now();
+    const refused = summarize(bigDoc, { format: 'markdown' });
+    console.log(`10 MB Markdown at the default cap: ${refused.refused ? `refused in ${ms(performance.now() - started)} ms: "${refused.refused}"` : 'NOT refused'}`);
+  }
+
+  console.log('\nExtension footprint (as built in dist/; npm run build does not minify, the packaged build may):');
+  for (const file of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/webview.js', 'dist/cli.cjs']) console.log(`  ${file.padEnd(24)} ${fileSize(file)}`);
+  const packages = readdirSync('.').filter((name) => name.endsWith('.vsix'));
+  if (packages.length === 0) console.log('  .vsix                    none in the repository root');
+  for (const name of packages) console.log(`  ${name.padEnd(24)} ${fileSize(name)}`);
+
+  const activations: number[] = [];
+  let activationError: string | null = null;
+  for (let i = 0; i < 5 && activationError === null; i++) {
+    const child = spawnSync(process.execPath, [process.argv[1]!, 'speed', '--activation-child'], { encoding: 'utf8' });
+    const result = JSON.parse(child.stdout.trim().split('\n').pop() || '{"error":"no output"}') as { requireMs: number; activateMs: number } | { error: string };
+    if ('error' in result) activationError = result.error;
+    else activations.push(result.requireMs + result.activateMs);
+  }
+  if (activationError !== null) console.log(`  activation: not measurable in Node (${activationError}); see the editor tests`);
+  else console.log(`  activation in Node with a stand-in vscode API (require + activate, fresh process): median ${ms(median(activations))} ms of ${activations.length}`);
+  return 0;
 }

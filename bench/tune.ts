@@ -22,7 +22,7 @@ import { BLEND_WEIGHTS, RANKERS } from '../src/core/rank/index';
 import { titleComponent } from '../src/core/rank/edmundson';
 import { normalize } from '../src/core/rank/normalize';
 import { selectSentences } from '../src/core/select/select';
-import { balanceUnits, excludedSections } from '../src/core/select/units';
+import { candidateUnits } from '../src/core/select/units';
 import type { AnalyzedDocument } from '../src/core/types';
 import { corpusDirectory, loadCorpus, type CorpusDocument } from './corpus';
 
@@ -124,19 +124,7 @@ function prepare(doc: CorpusDocument): Prepared {
   const analyzed = analyze(doc.body, resolveLanguage(doc.body, 'auto'));
   const wordCounts = analyzed.words.map((w) => w.length);
   const base = resolveOptions({});
-  const units = balanceUnits(doc.body, base.balanceDepth);
-  const excluded = excludedSections(doc.body, base.excludeHeadings);
-  const unitOf = new Int32Array(doc.body.sentences.length);
-  const unitWeights = new Map<number, number>();
-  doc.body.sentences.forEach((s, i) => {
-    if (excluded[s.section] === 1 || wordCounts[i] === 0) {
-      unitOf[i] = -1;
-      return;
-    }
-    const unit = units.unitOfSection[s.section]!;
-    unitOf[i] = unit;
-    unitWeights.set(unit, (unitWeights.get(unit) ?? 0) + wordCounts[i]!);
-  });
+  const { unitOf, unitWeights } = candidateUnits(doc.body, wordCounts, base);
   const rougeOptions = { stem: true };
   const sentenceTokens = doc.body.sentences.map((s) => tokenizeText([s.text], rougeOptions).flat());
   const referenceTokens = tokenizeText(doc.referenceSentences, rougeOptions);

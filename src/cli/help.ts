@@ -26,10 +26,14 @@ check options
   --abstract-heading TEXT   the section holding the abstract (default: Summary, Abstract or TL;DR)
   --abstract FILE           read the abstract from a separate file instead
   --format FORMAT           text (default) or json
+  --lang CODE               language for stop words and stemming (default: auto)
 
 train options
-  --reference-heading TEXT  heading of each document's own summary (default: Summary)
-  --out FILE                where to write the model (default: model.json)
+  --reference-heading TEXT  heading of the section holding each document's own summary (required)
+  --out FILE                where to write the model (required)
+  --match REGEX             only files whose name matches (e.g. '^\\d*[02468]-')
+  --lang CODE               language of the documents (default: auto)
+  --quiet                   no progress lines
 
 The summary quotes sentences from the document; it can drop context that a sentence relied on.
 Colour is used on terminals unless NO_COLOR is set.

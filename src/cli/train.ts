@@ -17,7 +17,7 @@ const TRAIN_OPTIONS = {
   'reference-heading': { type: 'string' },
   out: { type: 'string' },
   match: { type: 'string' },
-  language: { type: 'string' },
+  lang: { type: 'string' },
   quiet: { type: 'boolean' },
 } as const;
 
@@ -91,7 +91,7 @@ export async function runTrain(args: string[]): Promise<number> {
       throw new UsageError(`--match takes a regular expression over file names, not "${values.match}"`);
     }
   }
-  const language = values.language ?? 'auto';
+  const language = values.lang ?? 'auto';
   const say = (line: string) => {
     if (!values.quiet) process.stderr.write(line);
   };

@@ -5,7 +5,7 @@ import { analyze, resolveLanguage } from './analyze';
 import { resolveOptions, type SummaryOptions } from './options';
 import { parseDocument } from './parse/index';
 import { rankWith } from './ranking';
-import { balanceUnits, excludedSections } from './select/units';
+import { candidateUnits } from './select/units';
 import { selectSentences } from './select/select';
 import { applyFitness, sentenceFitness } from './select/fitness';
 import { describeSummary } from './summary-report';
@@ -37,20 +37,8 @@ export function summarize(text: string, request: SummarizeRequest = {}): Summary
 /** Selection and checks for already-ranked sentences (the benchmark reuses one ranking for several budgets). */
 export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, options: SummaryOptions): Summary {
   const { doc } = analyzed;
-  const units = balanceUnits(doc, options.balanceDepth);
-  const excluded = excludedSections(doc, options.excludeHeadings);
   const wordCounts = analyzed.words.map((w) => w.length);
-  const unitOf = new Int32Array(doc.sentences.length);
-  const unitWeights = new Map<number, number>();
-  doc.sentences.forEach((sentence, i) => {
-    if (excluded[sentence.section] === 1 || wordCounts[i] === 0) {
-      unitOf[i] = -1;
-      return;
-    }
-    const unit = units.unitOfSection[sentence.section]!;
-    unitOf[i] = unit;
-    unitWeights.set(unit, (unitWeights.get(unit) ?? 0) + wordCounts[i]!);
-  });
+  const { unitOf, unitWeights } = candidateUnits(doc, wordCounts, options);
 
   const selection = selectSentences({
     scores: applyFitness(ranked.scores, sentenceFitness(analyzed)),

@@ -4,8 +4,8 @@
  * or malformed messages are rejected with a reason (the caller logs it and does nothing else).
  * No editor API here: the webview bundle imports these types too.
  */
+import type { RankerName, SummaryStats } from '../core/types';
 import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from './settings';
-import type { RankerName } from '../core/types';
 
 // ---------- what the panel shows (extension → webview) ----------
 
@@ -50,16 +50,8 @@ export interface PanelShare {
   readonly picked: number;
 }
 
-export interface PanelFigures {
-  readonly wordsIn: number;
-  readonly wordsOut: number;
-  readonly compression: number;
-  readonly sentencesIn: number;
-  readonly sentencesOut: number;
-  readonly sectionsCovered: number;
-  readonly sectionsWithContent: number;
-  readonly minutesSaved: number;
-}
+/** The engine's figures, passed through unchanged. */
+export type PanelFigures = SummaryStats;
 
 export interface PanelSummary {
   /** Identifies this summary; messages about a replaced summary are ignored. */

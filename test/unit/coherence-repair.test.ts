@@ -23,18 +23,37 @@ function input(picked: number[], scores: number[], slack: number, extra: Partial
 }
 
 describe('coherence: automatic repair', () => {
-  it('adds the context sentence when the budget has room', () => {
-    const out = repairAutomatically(input([3], [0, 0, 0.5, 0.9, 0, 0, 0, 0], 20));
-    assert.deepEqual(out.picked, [2, 3]);
+  it('adds the context chain when the budget has room', () => {
+    // 4 ("This rule ...") leans on 3, which leans on 2 ("However, ..."); 15 words of room fit both.
+    const out = repairAutomatically(input([4], [0, 0, 0.5, 0.9, 0.9, 0, 0, 0], 15));
+    assert.deepEqual(out.picked, [2, 3, 4]);
     assert.equal(out.edited.size, 0);
-    assert.match(out.log[0]!, /sentence 3 .*added context sentence 2/);
+    assert.match(out.log[0]!, /sentence 4 .*added context sentence 2, 3/);
   });
 
   it('swaps out the lowest-scored unflagged pick when the context scores higher and the budget is full', () => {
-    const out = repairAutomatically(input([0, 3], [0.2, 0, 0.5, 0.9, 0, 0, 0, 0], 0));
+    // The swap step itself, with trimming and refilling turned off (the default trims 3 first).
+    const out = repairAutomatically(input([0, 3], [0.2, 0, 0.5, 0.9, 0, 0, 0, 0], 0, { strategy: { trimFirst: false, refill: false } }));
     assert.deepEqual(out.picked, [2, 3]);
     assert.match(out.log[0]!, /in place of sentence 0/);
     assert.ok(total(doc, out.picked) <= total(doc, [0, 3]));
+  });
+
+  it('trims a leading connective before adding context, keeping the ranked sentence', () => {
+    const out = repairAutomatically(input([0, 3], [0.2, 0, 0.5, 0.9, 0, 0, 0, 0], 0));
+    assert.deepEqual(out.picked, [0, 3]);
+    assert.deepEqual([...out.edited], [[3, 'Ladders count as two tools.']]);
+  });
+
+  it('refills freed words with the best-scored sentences that stand alone, and untrims a sentence whose context came back', () => {
+    // Trimming 3 leaves 9 words of room: 2 (score 0.5, 9 words) fits; 4 (8 more words) no longer does.
+    const out = repairAutomatically(input([3], [0, 0, 0.5, 0.9, 0.1, 0, 0, 0], 9));
+    assert.deepEqual(out.picked, [2, 3]);
+    assert.equal(out.edited.size, 0, 'sentence 3 has its context again, so it is shown as written');
+    assert.match(out.log.join('\n'), /sentence 2: added to refill/);
+    assert.deepEqual(findStandAloneProblems(doc, out.picked, { edited: out.edited }), []);
+    const without = repairAutomatically(input([3], [0, 0, 0.5, 0.9, 0.1, 0, 0, 0], 9, { strategy: { refill: false } }));
+    assert.deepEqual(without.picked, [3]);
   });
 
   it('trims a leading connective when its context cannot be added or swapped in', () => {
@@ -68,9 +87,11 @@ describe('coherence: automatic repair', () => {
   });
 
   it('brings in only sentences the caller allows', () => {
-    const out = repairAutomatically(input([3], [0, 0, 0.5, 0.9, 0, 0, 0, 0], 20, { isCandidate: (i) => i !== 2 }));
-    assert.deepEqual(out.picked, [3]);
-    assert.deepEqual([...out.edited.keys()], [3]);
+    const allowed = (i: number) => i !== 2 && i !== 0;
+    const out = repairAutomatically(input([4], [0.9, 0, 0.9, 0.5, 0.9, 0, 0, 0], 20, { isCandidate: allowed }));
+    assert.ok(out.picked.every((i) => i === 4 || allowed(i)), `picked ${out.picked}`);
+    assert.ok(out.picked.includes(3), 'context 3 is allowed and added');
+    assert.deepEqual(findStandAloneProblems(doc, out.picked, { edited: out.edited }), []);
   });
 });
 

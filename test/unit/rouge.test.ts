@@ -1,4 +1,5 @@
 import assert from 'node:assert/strict';
+import { seededRandom } from '../../bench/seeded-random';
 import { l as jsRougeL, n as jsRougeN, s as jsRougeS } from 'js-rouge';
 import {
   combineReferences,
@@ -126,17 +127,6 @@ describe('ROUGE: several references', () => {
   });
 });
 
-// Seeded generator (mulberry32) so the generated cases are the same on every run.
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 // A small vocabulary so generated sentences overlap, repeat words and have several LCSs.
 const VOCABULARY = ['river', 'lamp', 'stone', 'green', 'quiet', 'north', 'paper', 'seven', 'the', 'a', 'runs', 'holds'];
@@ -162,7 +152,7 @@ describe('ROUGE: agreement with js-rouge on 300 generated cases', () => {
   //  - js-rouge's l() finds sentences with its own segmenter; we hand it the same sentence list
   //    through its `segmenter` option (one sentence per line).
   const cases = Array.from({ length: 300 }, (_, index) => {
-    const next = random(1000 + index);
+    const next = seededRandom(1000 + index);
     return { candidate: generatedSummary(next), reference: generatedSummary(next) };
   });
   const jsLines = { segmenter: (text: string) => text.split('\n'), tokenizer: (text: string) => text.split(' ') };

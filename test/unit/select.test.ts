@@ -37,12 +37,15 @@ describe('selectSentences', () => {
     assert.deepEqual(unbalanced.picked, [0, 1, 2]);
   });
 
-  it('lets the best sentences win when the budget cannot give every section one', () => {
-    const unitOf = Int32Array.from([1, 1, 2, 3]);
-    const unitWeights = new Map([[1, 20], [2, 10], [3, 10]]);
-    const result = selectSentences(input({ scores: [0.9, 0.8, 0.3, 0.2], unitOf, unitWeights, budget: { unit: 'sentences', value: 2 } }));
-    assert.deepEqual(result.picked, [0, 1]);
+  it('spreads a budget too small for every section over the sections with the best sentences', () => {
+    // Unit 1 is longest but its sentences are weak; units 2 and 3 hold the best ones.
+    const unitOf = Int32Array.from([1, 1, 1, 2, 2, 3, 4]);
+    const unitWeights = new Map([[1, 60], [2, 20], [3, 10], [4, 10]]);
+    const result = selectSentences(input({ scores: [0.2, 0.1, 0.15, 0.9, 0.85, 0.8, 0.3], unitOf, unitWeights, budget: { unit: 'sentences', value: 3 } }));
+    assert.deepEqual(result.picked, [3, 5, 6]);
     assert.equal(result.quotas.size, 0);
+    const unbalanced = selectSentences(input({ scores: [0.2, 0.1, 0.15, 0.9, 0.85, 0.8, 0.3], unitOf, unitWeights, balance: false, budget: { unit: 'sentences', value: 3 } }));
+    assert.deepEqual(unbalanced.picked, [3, 4, 5]);
   });
 
   it('never passes a word budget', () => {

@@ -47,6 +47,9 @@ const IRREGULAR_PAST = new Set(
    taught caught bought sold spent shut split`.split(/\s+/),
 );
 
+/** Irregular past participles not in IRREGULAR_PAST ("those given by ..."). */
+const PARTICIPLES = new Set('given taken shown known seen written chosen done drawn grown thrown driven hidden'.split(' '));
+
 /** Words after "that" that show it opens a clause ("That the pump survived ..."), not a reference. */
 const CLAUSE_OPENERS = new Set(
   'the a an this these those it they we he she you i our their its his her my your there no some most all each every'.split(' '),
@@ -139,6 +142,12 @@ function demonstrativeAt(layout: ClauseLayout, i: number): FoundTrigger | null {
   if (word === 'those') {
     if (next === 'who' || next === 'whom' || next === 'whose') return null;
     if (next === 'of' && /^(you|us)$/.test(tokens[nextWord(tokens, nextIndex + 1)]?.lower ?? '')) return null;
+    // "those defined in this RFC", "those given by the user": the participle phrase says which
+    // ones, as "those who" does. Not "those changed files", where the participle modifies a noun.
+    if (adjacent && (/ed$/.test(next) || IRREGULAR_PAST.has(next) || PARTICIPLES.has(next))) {
+      const after = tokens[nextIndex + 1];
+      if (!isWord(after) || FUNCTION_WORDS.has(after.lower)) return null;
+    }
     return spanWithNoun(tokens, i, nextIndex, adjacent);
   }
   if (word === 'that') {
@@ -192,7 +201,7 @@ function hasAntecedent(layout: ClauseLayout, index: number): boolean {
     if (intro?.kind === 'prepositional') continue;
     // An object pronoun cannot point at its own clause's subject.
     if (objectPosition && !intro && i >= layout.mainStart) continue;
-    if (!looksLikeNounPhraseHead(tokens, i)) continue;
+    if (!looksLikeNounPhraseHead(tokens, i) || verbBeforePronoun(tokens, i, index)) continue;
     const plural = looksPlural(token.lower) || coordinated(tokens, i);
     if (wantsPlural && !plural && !isCapitalizedName(tokens, i)) continue;
     if (wantsSingular && plural) continue;
@@ -201,10 +210,18 @@ function hasAntecedent(layout: ClauseLayout, index: number): boolean {
   return false;
 }
 
+/** "The club requires that they ...": a word right before "(that) <pronoun>" is read as the verb that takes it. */
+function verbBeforePronoun(tokens: readonly Token[], i: number, pronoun: number): boolean {
+  const next = nextWord(tokens, i + 1);
+  if (next === pronoun) return looksPlural(tokens[i]!.lower) && tokens[i + 1] === tokens[next];
+  return next === i + 1 && tokens[next]!.lower === 'that' && nextWord(tokens, next + 1) === next + 1 && next + 1 === pronoun;
+}
+
 function looksLikeNounPhraseHead(tokens: readonly Token[], i: number): boolean {
   const prev = previousWord(tokens, i);
   if (prev < 0) return /^\p{Lu}/u.test(tokens[i]!.text); // first word of the sentence
   const prevWord = tokens[prev]!.lower;
+  if (isImperativeObject(tokens, i, prev)) return true;
   if (DETERMINERS.has(prevWord) || SUBORDINATORS.has(prevWord) || prevWord === 'and') return true;
   if (isCapitalizedName(tokens, i)) return true;
   // A modifier between determiner and noun: "the weather station", "each orchard row". Before a
@@ -212,6 +229,20 @@ function looksLikeNounPhraseHead(tokens: readonly Token[], i: number): boolean {
   const prev2 = previousWord(tokens, prev);
   if (isClauseBreak(tokens[i + 1])) return false;
   return prev2 >= 0 && DETERMINERS.has(tokens[prev2]!.lower) && !FUNCTION_WORDS.has(prevWord);
+}
+
+/**
+ * "Give dispatchers a plan they can read": a bare plural right after an opening imperative verb
+ * (a base form: no -s, -ed or -ing) and followed by another noun phrase is its object. Not "Cargo
+ * requires that they ...": a word in -s followed by "that" or a pronoun is read as a verb.
+ */
+function isImperativeObject(tokens: readonly Token[], i: number, prev: number): boolean {
+  const word = tokens[i]!.lower;
+  const opener = tokens[prev]!.lower;
+  if (prev !== 0 || i !== prev + 1 || !looksPlural(word) || FUNCTION_WORDS.has(word)) return false;
+  if (FUNCTION_WORDS.has(opener) || /(s|ed|ing)$/.test(opener) || !/^\p{Lu}/u.test(tokens[prev]!.text)) return false;
+  const after = tokens[i + 1];
+  return isWord(after) && DETERMINERS.has(after.lower) && !/^(that|this|these|those|their|its)$/.test(after.lower);
 }
 
 function isCapitalizedName(tokens: readonly Token[], i: number): boolean {

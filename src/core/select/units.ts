@@ -62,3 +62,32 @@ export function excludedSections(doc: ParsedDocument, excludeHeadings: readonly 
   }
   return excluded;
 }
+
+export interface Candidates {
+  /** Balance unit of each sentence, or -1 when it is not a candidate (excluded section, no words). */
+  readonly unitOf: Int32Array;
+  /** Content words of each balance unit: the weight it gets in apportionment. */
+  readonly unitWeights: Map<number, number>;
+}
+
+/** Which sentences may be picked, and the balance unit and weight each belongs to. */
+export function candidateUnits(
+  doc: ParsedDocument,
+  wordCounts: readonly number[],
+  options: { readonly balanceDepth: number; readonly excludeHeadings: readonly string[] },
+): Candidates {
+  const units = balanceUnits(doc, options.balanceDepth);
+  const excluded = excludedSections(doc, options.excludeHeadings);
+  const unitOf = new Int32Array(doc.sentences.length);
+  const unitWeights = new Map<number, number>();
+  doc.sentences.forEach((sentence, i) => {
+    if (excluded[sentence.section] === 1 || wordCounts[i] === 0) {
+      unitOf[i] = -1;
+      return;
+    }
+    const unit = units.unitOfSection[sentence.section]!;
+    unitOf[i] = unit;
+    unitWeights.set(unit, (unitWeights.get(unit) ?? 0) + wordCounts[i]!);
+  });
+  return { unitOf, unitWeights };
+}
