@@ -127,7 +127,7 @@ async function main(): Promise<void> {
     const user = JSON.parse(readFileSync(settingsFile, 'utf8')) as Record<string, unknown>;
     const demoNow = readFileSync(join(workspace, DEMO), 'utf8');
     let flagged: { length: number; warnings: number; repairs: number } | undefined;
-    for (let length = 3; length <= 30 && !flagged; length++) {
+    for (let length = 3; length <= 120 && !flagged; length++) {
       const { settings } = parseSettings((key: SettingKey) => (key === 'length.value' ? length : user[`tersely.${key}`]));
       const summary = summarize(demoNow, toEngineOptions(settings, 'markdown', 0));
       if (summary.warnings.length > 0) flagged = { length, warnings: summary.warnings.length, repairs: summary.warnings[0]!.repairs.length };

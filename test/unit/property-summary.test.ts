@@ -34,7 +34,7 @@ describe('property: summaries of generated documents', function () {
   it('keeps them for Markdown with the default options', () => {
     fc.assert(
       fc.property(markdownDocument, (text) => check(text, { format: 'markdown' })),
-      { numRuns: Math.ceil(propertyRuns() / 4) },
+      { numRuns: Math.ceil(propertyRuns() / 10) },
     );
   });
 });

@@ -262,7 +262,7 @@ export function deepFreeze<T>(value: T): T {
  * Cases per property. The default keeps the whole property suite to about three minutes on a slow
  * two-core machine; TERSELY_PROPERTY_RUNS=10000 (or more) gives the larger run.
  */
-export const DEFAULT_PROPERTY_RUNS = 3_000;
+export const DEFAULT_PROPERTY_RUNS = 10_000;
 
 export function propertyRuns(defaultRuns = DEFAULT_PROPERTY_RUNS): number {
   const fromEnv = Number(process.env.TERSELY_PROPERTY_RUNS);
