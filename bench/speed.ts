@@ -53,7 +53,10 @@ interface JobResult {
   readonly runs: readonly number[];
   readonly stages?: { parse: number; analyze: number; rank: number; select: number };
   readonly baselineRssMb: number;
+  /** maxRSS over all the runs of this size (warm-up, timed and staged). */
   readonly peakRssMb: number;
+  /** maxRSS of a fresh process that summarizes once: the memory one summary needs. */
+  readonly singleRunPeakRssMb?: number;
   readonly peakHeapMb: number;
 }
 
@@ -274,8 +277,8 @@ const pad = (text: string, width: number) => text.padStart(width);
 const ms = (value: number | undefined) => (value === undefined || Number.isNaN(value) ? '-' : value >= 100 ? value.toFixed(0) : value.toFixed(1));
 
 function printTable(results: readonly (JobResult | { error: string; label: string; format: string })[]): void {
-  const header = ['size', 'format', 'sentences', 'median ms', 'ms/KB', 'parse', 'analyze', 'rank', 'select+check', 'peak RSS MB', 'peak heap MB'];
-  const widths = [18, 9, 9, 9, 6, 7, 7, 7, 12, 11, 12];
+  const header = ['size', 'format', 'sentences', 'median ms', 'ms/KB', 'parse', 'analyze', 'rank', 'select+check', 'RSS 1 run', 'RSS all runs', 'heap MB'];
+  const widths = [18, 9, 9, 9, 6, 7, 7, 7, 12, 9, 12, 7];
   console.log(header.map((h, i) => pad(h, widths[i]!)).join(' '));
   for (const r of results) {
     if ('error' in r) {
@@ -292,14 +295,16 @@ function printTable(results: readonly (JobResult | { error: string; label: strin
       ms(r.stages?.analyze),
       ms(r.stages?.rank),
       ms(r.stages?.select),
+      r.singleRunPeakRssMb === undefined ? '-' : r.singleRunPeakRssMb.toFixed(0),
       `${r.peakRssMb.toFixed(0)} (${r.baselineRssMb.toFixed(0)})`,
       r.peakHeapMb.toFixed(0),
     ];
     console.log(row.map((c, i) => pad(c, widths[i]!)).join(' '));
   }
   console.log('  median ms: summarize() end to end, median of the runs after warm-up; stage columns: medians of separate staged runs.');
-  console.log('  peak RSS: maxRSS of the child process for that size (in brackets: RSS with the input loaded, before summarizing);');
-  console.log('  peak heap: largest heapUsed seen between runs (after each run, so a lower bound of the true peak).');
+  console.log('  RSS 1 run: peak resident memory (MB) of a fresh process that loads the input and summarizes it once;');
+  console.log('  RSS all runs: the same over all warm-up, timed and staged runs (in brackets: with the input loaded, before any run);');
+  console.log('  heap MB: largest heapUsed seen between runs (read after each run, so a lower bound of the true peak).');
 }
 
 export async function run(args: readonly string[] = []): Promise<number> {
@@ -327,7 +332,13 @@ export async function run(args: readonly string[] = []): Promise<number> {
     console.log(`Engine: method blend (default options), corpus ${corpus}`);
     for (const job of jobsFor(quick, full)) {
       const result = runInChild(job, corpus);
-      results.push('error' in result ? { ...result, label: job.label, format: job.format } : result);
+      if ('error' in result) {
+        results.push({ ...result, label: job.label, format: job.format });
+        continue;
+      }
+      // Repeated runs leave garbage V8 collects lazily; one run in a fresh process shows the real need.
+      const single = job.warmups === 0 && job.runs === 1 && !job.stages ? result : runInChild({ ...job, warmups: 0, runs: 1, stages: false }, corpus);
+      results.push('error' in single ? result : { ...result, singleRunPeakRssMb: single.peakRssMb });
     }
     printTable(results);
 
@@ -345,7 +356,7 @@ export async function run(args: readonly string[] = []): Promise<number> {
     if (small && big) {
       console.log(`Targets: 20 KB ≤ ${TARGETS.smallMs} ms → ${ms(small.medianMs)} ms ${small.medianMs <= TARGETS.smallMs ? 'met' : 'NOT met'}; ` +
         `1 MB ≤ ${TARGETS.megabyteMs} ms → ${ms(big.medianMs)} ms ${big.medianMs <= TARGETS.megabyteMs ? 'met' : 'NOT met'}; ` +
-        `1 MB peak RSS ≤ ${TARGETS.megabyteRssMb} MB → ${big.peakRssMb.toFixed(0)} MB ${big.peakRssMb <= TARGETS.megabyteRssMb ? 'met' : 'NOT met'}`);
+        `1 MB peak RSS (one run) ≤ ${TARGETS.megabyteRssMb} MB → ${(big.singleRunPeakRssMb ?? big.peakRssMb).toFixed(0)} MB ${(big.singleRunPeakRssMb ?? big.peakRssMb) <= TARGETS.megabyteRssMb ? 'met' : 'NOT met'}`);
     }
     const bigDoc = corpusText(corpus, 10 * MB);
     const started = performance.now();
