@@ -8,6 +8,7 @@
  * half is for tuning (its table goes to bench/out/).
  */
 import { seededRandom } from './seeded-random';
+import { RESULTS_FILE, writeResultsBlock } from './results-file';
 import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { analyze, resolveLanguage } from '../src/core/analyze';
@@ -337,7 +338,8 @@ export async function run(argv: readonly string[] = process.argv.slice(3)): Prom
   }
   const text = report(args, corpus, documents, totals, (performance.now() - started) / 1000);
   await mkdir(dirname(args.out), { recursive: true });
-  await writeFile(args.out, text);
+  if (args.out === RESULTS_FILE) writeResultsBlock(args.out, 'quality', text);
+  else await writeFile(args.out, text);
   console.log(text);
   console.log(`\nwritten to ${args.out}`);
   return 0;

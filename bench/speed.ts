@@ -12,6 +12,8 @@
  * --quick: fewer runs and no 2 MB / 10 MB rows; --full: also a 10 MB Markdown document with the
  * size cap raised (minutes, and a lot of memory).
  */
+import os from 'node:os';
+import { RESULTS_FILE, writeResultsBlock } from './results-file';
 import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -319,6 +321,21 @@ export async function run(args: readonly string[] = []): Promise<number> {
     return 0;
   }
 
+  // Everything printed from here on is also kept for bench/RESULTS.md (full default runs only).
+  const printed: string[] = [];
+  const print = console.log;
+  console.log = (...parts: unknown[]) => {
+    printed.push(parts.map(String).join(' '));
+    print(...parts);
+  };
+  try {
+    return await report(args, printed);
+  } finally {
+    console.log = print;
+  }
+}
+
+async function report(args: readonly string[], printed: string[]): Promise<number> {
   const corpus = corpusDirectory(args);
   if (!existsSync(corpus)) {
     console.log(`speed: corpus folder not found at ${corpus}; skipping the engine figures (pass --corpus PATH or set TERSELY_CORPUS).`);
@@ -380,5 +397,18 @@ export async function run(args: readonly string[] = []): Promise<number> {
   }
   if (activationError !== null) console.log(`  activation: not measurable in Node (${activationError}); see the editor tests`);
   else console.log(`  activation in Node with a stand-in vscode API (require + activate, fresh process): median ${ms(median(activations))} ms of ${activations.length}`);
+  if (!args.includes('--quick') && existsSync(corpus)) {
+    const date = new Date().toISOString().slice(0, 10);
+    writeResultsBlock(
+      RESULTS_FILE,
+      'speed',
+      `# Speed and footprint\n\nGenerated ${date} by \`npm run bench:speed\` on this project's 2-core machine (load average at the start: ${loadAverage()}); do not edit by hand.\n\n\`\`\`\n${printed.join('\n')}\n\`\`\`\n`,
+    );
+    console.log(`\nwritten to ${RESULTS_FILE}`);
+  }
   return 0;
+}
+
+function loadAverage(): string {
+  return os.loadavg().map((x) => x.toFixed(2)).join(', ');
 }

@@ -6,20 +6,13 @@
  */
 
 import type { Blockquote, Heading, List, Nodes, Paragraph, RootContent, Table } from 'mdast';
-import { fromMarkdown } from 'mdast-util-from-markdown';
-import { frontmatterFromMarkdown } from 'mdast-util-frontmatter';
-import { gfmFromMarkdown } from 'mdast-util-gfm';
-import { frontmatter } from 'micromark-extension-frontmatter';
-import { gfm } from 'micromark-extension-gfm';
 import type { BlockKind, ParsedDocument, SkipReason } from '../types';
 import { imageParagraphKind, isMetadataRun, isTaskItem, listSkipReason } from './boilerplate';
 import { DocumentBuilder } from './document-builder';
 import { frontMatterTitle } from './front-matter';
 import { InlineTextBuilder, singleLine } from './inline-text';
 import { appendPhrasing, nodeEnd, nodeStart, type InlineSource } from './markdown-inline';
-import { restoreMissingPositions } from './restore-positions';
-
-const FRONT_MATTER_KINDS = ['yaml', 'toml'] as const;
+import { parseMarkdownTree } from './markdown-tree';
 
 export interface MarkdownOptions {
   readonly baseOffset: number;
@@ -42,11 +35,7 @@ export function parseMarkdown(text: string, options: MarkdownOptions): ParsedDoc
   // micromark drops a leading byte order mark and counts offsets without it.
   const shift = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   const body = shift === 0 ? text : text.slice(shift);
-  const tree = fromMarkdown(body, {
-    extensions: [gfm(), frontmatter([...FRONT_MATTER_KINDS])],
-    mdastExtensions: [gfmFromMarkdown(), frontmatterFromMarkdown([...FRONT_MATTER_KINDS])],
-  });
-  restoreMissingPositions(tree, body);
+  const tree = parseMarkdownTree(body);
   const walker = new MarkdownWalker({ text, shift }, new DocumentBuilder(text, options.baseOffset, 'markdown'), options);
   walker.walkBlocks(tree.children, ROOT_CONTEXT);
   return walker.finish();
