@@ -7,7 +7,7 @@
  * multi-line HTML, always starts a new top-level block in CommonMark, so cutting there gives the
  * same blocks. Link reference definitions are the one thing that crosses the cut: every piece is
  * parsed with the document's definition lines appended, and whatever those produce is dropped.
- * If any block of a piece runs past its end, the document is parsed whole instead.
+ * A piece whose last block runs past its end is joined to the next piece and parsed again.
  */
 import type { Root, RootContent } from 'mdast';
 import { fromMarkdown } from 'mdast-util-from-markdown';
@@ -35,23 +35,45 @@ export function parseMarkdownTree(text: string, pieceLength = PIECE_LENGTH): Roo
   if (text.length <= pieceLength) return parseWhole(text);
   const { cuts, definitions } = scanLines(text, pieceLength);
   if (cuts.length === 0) return parseWhole(text);
-  const appendix = definitions.length > 0 ? '\n\n' + definitions.join('\n') + '\n' : '';
+  // A blank line between definitions: a line that only looks like one would otherwise swallow the rest as a paragraph.
+  const appendix = definitions.length > 0 ? '\n\n' + definitions.join('\n\n') + '\n' : '';
   const children: RootContent[] = [];
   const bounds = [0, ...cuts, text.length];
-  for (let k = 0; k + 1 < bounds.length; k++) {
+  let k = 0;
+  while (k + 1 < bounds.length) {
     const start = bounds[k]!;
-    const piece = text.slice(start, bounds[k + 1]!);
-    const tree = parseWhole(piece + appendix);
-    for (const node of tree.children) {
-      const nodeStart = node.position?.start.offset ?? 0;
-      const nodeEnd = node.position?.end.offset ?? 0;
-      if (nodeStart >= piece.length) continue; // produced by the appended definitions
-      if (nodeEnd > piece.length) return parseWhole(text); // a block crossed the cut: be exact instead
+    // A block that runs past its piece's end (an unclosed fence, say) joins the piece to the next one.
+    let next = k + 1;
+    let kept: RootContent[] | null = null;
+    while (kept === null) {
+      const piece = text.slice(start, bounds[next]!);
+      kept = pieceBlocks(piece, appendix);
+      if (kept !== null) break;
+      // The document's last block ran into the appended definitions: it is open to the end anyway.
+      if (next === bounds.length - 1) kept = parseWhole(piece).children;
+      else next++;
+    }
+    for (const node of kept) {
       shiftPositions(node, start, new Set());
       children.push(node);
     }
+    k = next;
   }
   return { type: 'root', children, position: { start: { line: 1, column: 1, offset: 0 }, end: { line: 1, column: 1, offset: text.length } } };
+}
+
+/** The blocks of one piece, or null when one of them runs past the piece's end. */
+function pieceBlocks(piece: string, appendix: string): RootContent[] | null {
+  const tree = parseWhole(piece + appendix);
+  const kept: RootContent[] = [];
+  for (const node of tree.children) {
+    const nodeStart = node.position?.start.offset ?? 0;
+    const nodeEnd = node.position?.end.offset ?? 0;
+    if (nodeStart >= piece.length) continue; // produced by the appended definitions
+    if (nodeEnd > piece.length) return null;
+    kept.push(node);
+  }
+  return kept;
 }
 
 /** Offsets where pieces may start, and the definition lines every piece needs. */
@@ -67,11 +89,12 @@ function scanLines(text: string, pieceLength: number): { cuts: number[]; definit
     if (lineEnd < 0) lineEnd = text.length;
     const line = text.slice(lineStart, lineEnd).replace(/\r$/, '');
     if (fence !== null) {
-      if (new RegExp(`^ {0,3}${fence[0] === '`' ? '`' : '~'}{${fence.length},}\\s*$`).test(line)) fence = null;
+      // Inside a list item the closing fence is indented like the item's content, so any indent counts.
+      if (new RegExp(`^\\s*${fence[0] === '`' ? '`' : '~'}{${fence.length},}\\s*$`).test(line)) fence = null;
     } else if (htmlEnd !== null) {
       if (htmlEnd.test(line)) htmlEnd = null;
     } else {
-      const open = /^ {0,3}(`{3,}|~{3,})/.exec(line);
+      const open = /^\s*(`{3,}|~{3,})/.exec(line);
       if (open) {
         fence = open[1]!;
       } else if (/^ {0,3}<!--/.test(line) && !/-->/.test(line.slice(line.indexOf('<!--') + 4))) {

@@ -43,14 +43,14 @@ export function alignValue(
   source: string,
   start: number,
   end: number,
-  lineEndingAsSpace = false,
+  codeSpan = false,
 ): Alignment {
   const starts = new Int32Array(value.length);
   const ends = new Int32Array(value.length);
   let p = start;
   let i = 0;
   while (i < value.length) {
-    const matched = matchAt(value, i, source, p, end, lineEndingAsSpace);
+    const matched = matchAt(value, i, source, p, end, codeSpan);
     if (matched !== null) {
       const [units, sourceLength] = matched;
       for (let k = 0; k < units; k++) {
@@ -63,7 +63,7 @@ export function alignValue(
     }
     // Skip source characters the parser removed (escapes' backslashes, indentation, '>' markers).
     let q = p + 1;
-    while (q < end && matchAt(value, i, source, q, end, lineEndingAsSpace) === null) q++;
+    while (q < end && matchAt(value, i, source, q, end, codeSpan) === null) q++;
     if (q < end) {
       p = q;
       continue;
@@ -84,13 +84,14 @@ function matchAt(
   source: string,
   p: number,
   end: number,
-  lineEndingAsSpace: boolean,
+  codeSpan: boolean,
 ): [number, number] | null {
   const c = value[i]!;
   const s = source[p];
   if (s === undefined || p >= end) return null;
-  if (s === '\\' && p + 1 < end && source[p + 1] === c && ASCII_PUNCTUATION.test(c)) return [1, 2];
-  if (s === '&') {
+  // Code spans are literal: no backslash escapes, no character references (CommonMark 6.1).
+  if (!codeSpan && s === '\\' && p + 1 < end && source[p + 1] === c && ASCII_PUNCTUATION.test(c)) return [1, 2];
+  if (!codeSpan && s === '&') {
     REFERENCE.lastIndex = p;
     const reference = REFERENCE.exec(source);
     if (reference !== null && p + reference[0].length <= end) {
@@ -103,8 +104,8 @@ function matchAt(
   if (s === c) return [1, 1];
   // A CRLF line ending is a single '\n' in the value.
   if (c === '\n' && s === '\r') return p + 1 < end && source[p + 1] === '\n' ? [1, 2] : [1, 1];
-  // Inline code turns its line endings into spaces.
-  if (lineEndingAsSpace && c === ' ' && (s === '\n' || s === '\r')) {
+  // A code span turns its line endings into spaces.
+  if (codeSpan && c === ' ' && (s === '\n' || s === '\r')) {
     return s === '\r' && p + 1 < end && source[p + 1] === '\n' ? [1, 2] : [1, 1];
   }
   return null;
