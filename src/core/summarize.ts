@@ -38,7 +38,8 @@ export function summarize(text: string, request: SummarizeRequest = {}): Summary
 export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, options: SummaryOptions): Summary {
   const { doc } = analyzed;
   const wordCounts = analyzed.words.map((w) => w.length);
-  const { unitOf, unitWeights } = candidateUnits(doc, wordCounts, options);
+  const candidates = candidateUnits(doc, wordCounts, options);
+  const { unitOf, unitWeights } = candidates;
 
   const selection = selectSentences({
     scores: applyFitness(ranked.scores, sentenceFitness(analyzed)),
@@ -71,7 +72,7 @@ export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, 
     edited = repaired.edited;
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
-  return describeSummary({ analyzed, ranked, options, picked, unitOf, quotas: selection.quotas, edited, warnings });
+  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings });
 }
 
 function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {

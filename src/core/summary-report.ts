@@ -3,7 +3,7 @@
  * rank and the features behind the score; figures; each balance unit's share of document and summary.
  */
 import type { SummaryOptions } from './options';
-import { topSectionDepth } from './select/units';
+import { topSectionDepth, type Candidates } from './select/units';
 import type {
   AnalyzedDocument,
   PickedSentence,
@@ -22,8 +22,10 @@ export interface ReportInput {
   readonly options: SummaryOptions;
   /** Picked sentence indices in document order. */
   readonly picked: readonly number[];
-  /** Balance unit of each sentence (-1 = not a candidate). */
-  readonly unitOf: Int32Array;
+  /** Word count of each sentence, as the selector counted them. */
+  readonly wordCounts: readonly number[];
+  /** Balance unit of each sentence (-1 = not a candidate) and each unit's content words. */
+  readonly candidates: Candidates;
   readonly quotas: ReadonlyMap<number, number>;
   /** Display text for sentences edited by a repair. */
   readonly edited?: ReadonlyMap<number, string>;
@@ -32,9 +34,9 @@ export interface ReportInput {
 }
 
 export function describeSummary(input: ReportInput): Summary {
-  const { analyzed, ranked, options, picked, unitOf } = input;
+  const { analyzed, ranked, options, picked, wordCounts } = input;
+  const { unitOf, unitWeights: unitWords } = input.candidates;
   const { doc } = analyzed;
-  const wordCounts = analyzed.words.map((w) => w.length);
   const ranks = rankOrder(ranked.scores, unitOf);
   const topDepth = topSectionDepth(doc);
 
@@ -54,15 +56,10 @@ export function describeSummary(input: ReportInput): Summary {
     };
   });
 
-  const unitWords = new Map<number, number>();
   const unitPickedWords = new Map<number, number>();
   const unitPicked = new Map<number, number>();
   let candidateWords = 0;
-  unitOf.forEach((unit, i) => {
-    if (unit < 0) return;
-    unitWords.set(unit, (unitWords.get(unit) ?? 0) + wordCounts[i]!);
-    candidateWords += wordCounts[i]!;
-  });
+  for (const words of unitWords.values()) candidateWords += words;
   let wordsOut = 0;
   for (const i of picked) {
     const unit = unitOf[i]!;

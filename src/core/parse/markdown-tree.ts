@@ -80,7 +80,7 @@ function pieceBlocks(piece: string, appendix: string): RootContent[] | null {
 function scanLines(text: string, pieceLength: number): { cuts: number[]; definitions: string[] } {
   const cuts: number[] = [];
   const definitions: string[] = [];
-  let fence: string | null = null;
+  let fenceEnd: RegExp | null = null;
   let htmlEnd: RegExp | null = null;
   let lastCut = 0;
   let lineStart = 0;
@@ -88,15 +88,16 @@ function scanLines(text: string, pieceLength: number): { cuts: number[]; definit
     let lineEnd = text.indexOf('\n', lineStart);
     if (lineEnd < 0) lineEnd = text.length;
     const line = text.slice(lineStart, lineEnd).replace(/\r$/, '');
-    if (fence !== null) {
-      // Inside a list item the closing fence is indented like the item's content, so any indent counts.
-      if (new RegExp(`^\\s*${fence[0] === '`' ? '`' : '~'}{${fence.length},}\\s*$`).test(line)) fence = null;
+    if (fenceEnd !== null) {
+      if (fenceEnd.test(line)) fenceEnd = null;
     } else if (htmlEnd !== null) {
       if (htmlEnd.test(line)) htmlEnd = null;
     } else {
       const open = /^\s*(`{3,}|~{3,})/.exec(line);
       if (open) {
-        fence = open[1]!;
+        // Inside a list item the closing fence is indented like the item's content, so any indent counts.
+        const fence = open[1]!;
+        fenceEnd = new RegExp(`^\\s*${fence[0] === '`' ? '`' : '~'}{${fence.length},}\\s*$`);
       } else if (/^ {0,3}<!--/.test(line) && !/-->/.test(line.slice(line.indexOf('<!--') + 4))) {
         htmlEnd = /-->/;
       } else if (/^ {0,3}<(pre|script|style|textarea)\b/i.test(line) && !/<\/(pre|script|style|textarea)>/i.test(line)) {
