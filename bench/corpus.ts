@@ -14,10 +14,7 @@
  */
 import { readdir, readFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
-import { splitReference } from '../src/core/evaluate/reference-split';
-import { parseDocument } from '../src/core/parse/index';
-import { wordTokens } from '../src/core/text/tokens';
-import type { ParsedDocument } from '../src/core/types';
+import { parseDocument, splitReference, wordTokens, type ParsedDocument } from '../src/core/index';
 
 export const DEFAULT_CORPUS = '../shared/corpus/rust-rfcs/docs';
 export const REFERENCE_HEADING = 'Summary';

@@ -11,15 +11,24 @@ import { seededRandom } from './seeded-random';
 import { RESULTS_FILE, writeResultsBlock } from './results-file';
 import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
-import { analyze, resolveLanguage } from '../src/core/analyze';
-import { greedyOracle } from '../src/core/evaluate/oracle';
-import { rougeL, rougeN, tokenizeText, type RougeOptions } from '../src/core/evaluate/rouge';
-import { defaultModel } from '../src/core/learn/model';
-import { METHODS, resolveOptions, type SummaryOptions } from '../src/core/options';
-import { rankWith } from '../src/core/ranking';
-import { excludedSections } from '../src/core/select/units';
-import { summarizeRanked } from '../src/core/summarize';
-import type { AnalyzedDocument, RankerName, Summary } from '../src/core/types';
+import {
+  candidateSentences,
+  defaultModel,
+  finishSummary,
+  greedyOracle,
+  METHOD_NAMES,
+  prepareDocument,
+  rankPrepared,
+  resolveOptions,
+  rougeL,
+  rougeN,
+  tokenizeText,
+  type PreparedDocument,
+  type RankerName,
+  type RougeOptions,
+  type Summary,
+  type SummaryOptions,
+} from '../src/core/index';
 import { corpusDirectory, CorpusMissing, loadCorpus, MIN_BODY_SENTENCES, MIN_REFERENCE_WORDS, type CorpusDocument, type Half } from './corpus';
 
 /** Porter stemming on, stop words kept: the usual way ROUGE is reported (common practice, no source). */
@@ -64,8 +73,8 @@ function parseArgs(args: readonly string[]): QualityArgs {
   };
   const split: Half = value('--split') === 'train' ? 'train' : 'test';
   const limit = Number(value('--limit') ?? Infinity);
-  const methods = (value('--methods')?.split(',') ?? [...METHODS]).filter((m): m is RankerName => (METHODS as readonly string[]).includes(m));
-  const fullTest = split === 'test' && !Number.isFinite(limit) && methods.length === METHODS.length;
+  const methods = (value('--methods')?.split(',') ?? [...METHOD_NAMES]).filter((m): m is RankerName => (METHOD_NAMES as readonly string[]).includes(m));
+  const fullTest = split === 'test' && !Number.isFinite(limit) && methods.length === METHOD_NAMES.length;
   return {
     corpus: corpusDirectory(args),
     split,
@@ -121,23 +130,23 @@ function flaggedCount(summary: Summary): number {
 }
 
 interface DocumentContext {
-  readonly analyzed: AnalyzedDocument;
+  readonly prepared: PreparedDocument;
   readonly wordCounts: readonly number[];
   readonly candidates: readonly number[];
   readonly options: (method: RankerName, extra?: Partial<SummaryOptions>) => SummaryOptions;
 }
 
+/** The engine's own first stages (the same parse and analysis `summarize` makes), at the reference's length. */
 function prepare(doc: CorpusDocument): DocumentContext {
-  const analyzed = analyze(doc.body, resolveLanguage(doc.body, 'auto'));
-  const wordCounts = analyzed.words.map((w) => w.length);
-  const base = resolveOptions({ budget: { unit: 'words', value: doc.referenceWords } });
-  const excluded = excludedSections(doc.body, base.excludeHeadings);
-  const candidates = doc.body.sentences.filter((s) => wordCounts[s.index]! > 0 && excluded[s.section] !== 1).map((s) => s.index);
+  const preparation = prepareDocument(doc.bodyText, { format: 'markdown', budget: { unit: 'words', value: doc.referenceWords } });
+  if (!preparation.ok) throw new Error(`${doc.file}: ${preparation.refused.refused}`);
+  const { prepared } = preparation;
+  const wordCounts = prepared.analyzed.words.map((w) => w.length);
   return {
-    analyzed,
+    prepared,
     wordCounts,
-    candidates,
-    options: (method, extra = {}) => resolveOptions({ ...base, method, ...extra }),
+    candidates: candidateSentences(prepared),
+    options: (method, extra = {}) => resolveOptions({ ...prepared.options, method, ...extra }),
   };
 }
 
@@ -151,22 +160,23 @@ function evaluateDocument(doc: CorpusDocument, methods: readonly RankerName[], t
   const started = performance.now();
   const context = prepare(doc);
   totals.analyzeMilliseconds += performance.now() - started;
-  const { analyzed, wordCounts, candidates } = context;
+  const { prepared, wordCounts, candidates } = context;
+  const body = prepared.analyzed.doc;
   const reference = doc.referenceSentences;
-  const textOf = (picked: readonly number[]) => picked.map((i) => doc.body.sentences[i]!.text);
+  const textOf = (picked: readonly number[]) => picked.map((i) => body.sentences[i]!.text);
   const wordsOf = (picked: readonly number[]) => picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
 
   for (const method of methods) {
     const t0 = performance.now();
     const options = context.options(method);
-    const summary = summarizeRanked(analyzed, rankWith(method, analyzed, options), options);
+    const ranked = rankPrepared(prepared, method);
+    const summary = finishSummary(prepared, ranked, options);
     const elapsed = performance.now() - t0;
     const picked = summary.sentences.map((s) => s.sentence);
     addScores(totals.rows.get(method)!, scoreSentences(summary.sentences.map((s) => s.text), reference), elapsed, wordsOf(picked), picked.length, flaggedCount(summary));
     if (method === DEFAULT_METHOD) {
       const r0 = performance.now();
-      const repairedOptions = context.options(method, { repair: 'auto' });
-      const repaired = summarizeRanked(analyzed, rankWith(method, analyzed, repairedOptions), repairedOptions);
+      const repaired = finishSummary(prepared, ranked, context.options(method, { repair: 'auto' }));
       const repairedPicked = repaired.sentences.map((s) => s.sentence);
       addScores(totals.repaired, scoreSentences(repaired.sentences.map((s) => s.text), reference), performance.now() - r0, wordsOf(repairedPicked), repairedPicked.length, flaggedCount(repaired));
     }
@@ -189,7 +199,7 @@ function evaluateDocument(doc: CorpusDocument, methods: readonly RankerName[], t
     return fillInOrder(order, wordCounts, limit);
   });
   anchor('oracle', () => {
-    const sentences = doc.body.sentences.map((s) => tokenizeText([s.text], ROUGE_OPTIONS).flat());
+    const sentences = body.sentences.map((s) => tokenizeText([s.text], ROUGE_OPTIONS).flat());
     return greedyOracle({ sentences, wordCounts, candidates, reference: tokenizeText(reference, ROUGE_OPTIONS).flat(), wordLimit: limit });
   });
 }

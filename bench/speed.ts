@@ -18,12 +18,8 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join, resolve } from 'node:path';
-import { analyze, resolveLanguage } from '../src/core/analyze';
-import { resolveOptions } from '../src/core/options';
-import { parseDocument } from '../src/core/parse/index';
-import { rankWith } from '../src/core/ranking';
-import { summarize, summarizeRanked } from '../src/core/summarize';
-import type { DocumentFormat, Summary } from '../src/core/types';
+import { parseDocument, resolveOptions, summarize, type SummaryStage } from '../src/core/index';
+import type { DocumentFormat, Summary } from '../src/core/index';
 import { corpusDirectory } from './corpus';
 
 const KB = 1024;
@@ -134,20 +130,20 @@ function runJob(job: Job, corpus: string): JobResult {
     const options = resolveOptions(request);
     const times = { parse: [] as number[], analyze: [] as number[], rank: [] as number[], select: [] as number[] };
     for (let i = 0; i < job.runs; i++) {
-      const t0 = performance.now();
-      const doc = parseDocument(text, { format: job.format, baseOffset: 0, includeTables: options.includeTables });
-      const t1 = performance.now();
-      const analyzed = analyze(doc, resolveLanguage(doc, options.language));
-      const t2 = performance.now();
-      const ranked = rankWith(options.method, analyzed, options);
-      const t3 = performance.now();
-      summarizeRanked(analyzed, ranked, options);
-      const t4 = performance.now();
+      // The parse alone, then the whole pipeline timed at its own stage boundaries.
+      const p0 = performance.now();
+      parseDocument(text, { format: job.format, includeTables: options.includeTables });
+      const parseTime = performance.now() - p0;
+      const at: Partial<Record<SummaryStage | 'end', number>> = {};
+      const start = performance.now();
+      summarize(text, { ...request, onStage: (stage) => (at[stage] = performance.now()) });
+      at.end = performance.now();
       sampleHeap();
-      times.parse.push(t1 - t0);
-      times.analyze.push(t2 - t1);
-      times.rank.push(t3 - t2);
-      times.select.push(t4 - t3);
+      const read = (at.ranking ?? at.end) - (at.reading ?? start);
+      times.parse.push(parseTime);
+      times.analyze.push(Math.max(0, read - parseTime));
+      times.rank.push((at.checking ?? at.end) - (at.ranking ?? at.end));
+      times.select.push(at.end - (at.checking ?? at.end));
     }
     stages = { parse: median(times.parse), analyze: median(times.analyze), rank: median(times.rank), select: median(times.select) };
   }

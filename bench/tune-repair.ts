@@ -10,17 +10,21 @@
  * sentences still flagged, words per summary and how often each repair step was taken.
  * `--show N` prints the first N repair log lines of the shipped strategy, for reading by hand.
  */
-import { analyze, resolveLanguage } from '../src/core/analyze';
-import { findStandAloneProblems, repairAutomatically } from '../src/core/coherence/index';
-import { REPAIR_STRATEGY, type RepairStrategy } from '../src/core/coherence/repair';
-import { rougeNTokens, tokenizeText, type TokenizedText } from '../src/core/evaluate/rouge';
-import { resolveOptions } from '../src/core/options';
-import { rankWith } from '../src/core/ranking';
-import { applyFitness, sentenceFitness } from '../src/core/select/fitness';
-import { excludedSections } from '../src/core/select/units';
-import { summarizeRanked } from '../src/core/summarize';
-import type { ParsedDocument } from '../src/core/types';
+import {
+  candidateSentences,
+  finishSummary,
+  prepareDocument,
+  rankPrepared,
+  rougeNTokens,
+  tokenizeText,
+  tuning,
+  type ParsedDocument,
+  type TokenizedText,
+} from '../src/core/index';
 import { corpusDirectory, loadCorpus, type CorpusDocument } from './corpus';
+
+const { findStandAloneProblems, repairAutomatically, REPAIR_STRATEGY, sentenceFitness, summaryRelevance } = tuning;
+type RepairStrategy = typeof REPAIR_STRATEGY;
 
 const ROUGE_OPTIONS = { stem: true } as const;
 
@@ -59,23 +63,26 @@ const VARIANTS: readonly Variant[] = [
 ];
 
 function prepare(corpusDoc: CorpusDocument): Prepared {
-  const doc = corpusDoc.body;
-  const analyzed = analyze(doc, resolveLanguage(doc, 'auto'));
-  const options = resolveOptions({ budget: { unit: 'words', value: corpusDoc.referenceWords }, method: 'blend' });
-  const ranked = rankWith('blend', analyzed, options);
-  const picked = summarizeRanked(analyzed, ranked, options).sentences.map((s) => s.sentence);
+  const preparation = prepareDocument(corpusDoc.bodyText, { format: 'markdown', budget: { unit: 'words', value: corpusDoc.referenceWords }, method: 'blend' });
+  if (!preparation.ok) throw new Error(`${corpusDoc.file}: ${preparation.refused.refused}`);
+  const { prepared } = preparation;
+  const { analyzed } = prepared;
+  const doc = analyzed.doc;
+  const ranked = rankPrepared(prepared);
+  const picked = finishSummary(prepared, ranked).sentences.map((s) => s.sentence);
   const wordCounts = analyzed.words.map((w) => w.length);
-  const excluded = excludedSections(doc, options.excludeHeadings);
+  const candidates = candidateSentences(prepared);
+  const candidateSet = new Set(candidates);
   const pickedWords = picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
   return {
     doc,
     picked,
     wordCounts,
-    // As summarizeRanked does for a word budget.
+    // As finishSummary does for a word budget.
     wordBudget: Math.max(corpusDoc.referenceWords, pickedWords),
-    isCandidate: (i) => wordCounts[i]! > 0 && excluded[doc.sentences[i]!.section] !== 1,
+    isCandidate: (i) => candidateSet.has(i),
     rankScores: ranked.scores,
-    fitScores: applyFitness(ranked.scores, sentenceFitness(analyzed)),
+    fitScores: summaryRelevance(ranked.scores, sentenceFitness(analyzed), candidates),
     sentenceTokens: doc.sentences.map((s) => tokenizeText([s.text], ROUGE_OPTIONS).flat()),
     reference: tokenizeText(corpusDoc.referenceSentences, ROUGE_OPTIONS),
   };

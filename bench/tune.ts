@@ -6,35 +6,35 @@
  *
  * The trained-model component is cross-fitted: documents whose RFC number is 0 mod 4 are scored
  * by a model trained on those that are 2 mod 4 and the other way round, so it is not judged on the
- * documents it learned from. Scores here come from the selector alone (no stand-alone repair);
- * the benchmark proper (quality) runs the whole pipeline.
+ * documents it learned from. Every configuration is scored through the engine's own selection stage
+ * (`finishSummary`: fitness, balance, MMR and the stand-alone check), so it tunes what ships.
  */
-import { analyze, resolveLanguage } from '../src/core/analyze';
-import { greedyOracle } from '../src/core/evaluate/oracle';
-import { rougeNTokens, tokenizeText } from '../src/core/evaluate/rouge';
-import { sentenceFeatures } from '../src/core/learn/features';
-import { labelSentences } from '../src/core/learn/labels';
-import { rankBayes } from '../src/core/learn/model';
-import { modelFromLabelled } from '../src/core/learn/train-model';
-import { resolveOptions, type SummaryOptions } from '../src/core/options';
-import { headingPriorScores } from '../src/core/rank/heading-prior';
-import { BLEND_WEIGHTS, RANKERS } from '../src/core/rank/index';
-import { titleComponent } from '../src/core/rank/edmundson';
-import { normalize } from '../src/core/rank/normalize';
-import { selectSentences } from '../src/core/select/select';
-import { candidateUnits } from '../src/core/select/units';
-import type { AnalyzedDocument } from '../src/core/types';
+import {
+  BLEND_WEIGHTS,
+  candidateSentences,
+  finishSummary,
+  greedyOracle,
+  prepareDocument,
+  resolveOptions,
+  rougeNTokens,
+  tokenizeText,
+  tuning,
+  type AnalyzedDocument,
+  type PreparedDocument,
+  type SummaryOptions,
+} from '../src/core/index';
 import { corpusDirectory, loadCorpus, type CorpusDocument } from './corpus';
+
+const { RANKERS, headingPriorScores, labelSentences, modelFromLabelled, normalize, rankBayes, sentenceFeatures, titleComponent } = tuning;
 
 const COMPONENTS = ['centroid', 'lexrank', 'textrank', 'position', 'luhn', 'edmundson', 'title', 'bayes'] as const;
 type Component = (typeof COMPONENTS)[number];
 
 interface Prepared {
   readonly doc: CorpusDocument;
+  readonly prepared: PreparedDocument;
   readonly analyzed: AnalyzedDocument;
   readonly wordCounts: number[];
-  readonly unitOf: Int32Array;
-  readonly unitWeights: Map<number, number>;
   readonly sentenceTokens: (readonly string[])[];
   readonly referenceTokens: readonly (readonly string[])[];
   readonly components: Record<Component, Float64Array>;
@@ -53,8 +53,6 @@ export interface Config {
   readonly balance?: boolean;
   readonly mmrLambda?: number;
   readonly minPerSection?: number;
-  /** Experiment: sentences under 5 words, or ending in a colon, are not candidates. */
-  readonly dropFragments?: boolean;
 }
 
 function rouge12(picked: readonly number[], p: Prepared): { r1: number; r2: number } {
@@ -62,26 +60,8 @@ function rouge12(picked: readonly number[], p: Prepared): { r1: number; r2: numb
   return { r1: rougeNTokens(candidate, p.referenceTokens, 1).f1, r2: rougeNTokens(candidate, p.referenceTokens, 2).f1 };
 }
 
-function select(p: Prepared, scores: Float64Array, options: SummaryOptions, dropFragments = false): number[] {
-  let unitOf = p.unitOf;
-  if (dropFragments) {
-    unitOf = Int32Array.from(p.unitOf);
-    p.analyzed.doc.sentences.forEach((s, i) => {
-      if (p.wordCounts[i]! < 5 || /:\s*$/.test(s.text)) unitOf[i] = -1;
-    });
-  }
-  return selectSentences({
-    scores,
-    wordCounts: p.wordCounts,
-    terms: p.analyzed.terms,
-    unitOf,
-    unitWeights: p.unitWeights,
-    budget: options.budget,
-    minSentences: options.minSentences,
-    minPerSection: options.minPerSection,
-    balance: options.balance,
-    mmrLambda: options.mmrLambda,
-  }).picked;
+function select(p: Prepared, scores: Float64Array, options: SummaryOptions): number[] {
+  return finishSummary(p.prepared, { scores }, options).sentences.map((s) => s.sentence);
 }
 
 export function evaluate(prepared: readonly Prepared[], config: Config): { r1: number; r2: number; beats: number; gap: number } {
@@ -109,7 +89,7 @@ export function evaluate(prepared: readonly Prepared[], config: Config): { r1: n
       mmrLambda: config.mmrLambda ?? 0.7,
       minPerSection: config.minPerSection ?? 1,
     });
-    const scored = rouge12(select(p, scores, options, config.dropFragments), p);
+    const scored = rouge12(select(p, scores, options), p);
     r1 += scored.r1;
     r2 += scored.r2;
     if (scored.r1 > p.leadR1) beats++;
@@ -121,12 +101,13 @@ export function evaluate(prepared: readonly Prepared[], config: Config): { r1: n
 }
 
 function prepare(doc: CorpusDocument): Prepared {
-  const analyzed = analyze(doc.body, resolveLanguage(doc.body, 'auto'));
+  const preparation = prepareDocument(doc.bodyText, { format: 'markdown' });
+  if (!preparation.ok) throw new Error(`${doc.file}: ${preparation.refused.refused}`);
+  const { prepared: engineDocument } = preparation;
+  const { analyzed } = engineDocument;
   const wordCounts = analyzed.words.map((w) => w.length);
-  const base = resolveOptions({});
-  const { unitOf, unitWeights } = candidateUnits(doc.body, wordCounts, base);
   const rougeOptions = { stem: true };
-  const sentenceTokens = doc.body.sentences.map((s) => tokenizeText([s.text], rougeOptions).flat());
+  const sentenceTokens = analyzed.doc.sentences.map((s) => tokenizeText([s.text], rougeOptions).flat());
   const referenceTokens = tokenizeText(doc.referenceSentences, rougeOptions);
   const scaled = (scores: Float64Array) => normalize(scores, 'minmax');
   const components = {
@@ -139,10 +120,10 @@ function prepare(doc: CorpusDocument): Prepared {
     title: scaled(titleComponent(analyzed)),
     bayes: new Float64Array(analyzed.doc.sentences.length),
   };
-  const candidates = doc.body.sentences.filter((s) => unitOf[s.index]! >= 0).map((s) => s.index);
+  const candidates = candidateSentences(engineDocument);
   const prepared: Prepared = {
-    doc, analyzed, wordCounts, unitOf, unitWeights, sentenceTokens, referenceTokens, components,
-    prior: headingPriorScores(doc.body), leadR1: 0, oracleR1: 0,
+    doc, prepared: engineDocument, analyzed, wordCounts, sentenceTokens, referenceTokens, components,
+    prior: headingPriorScores(analyzed.doc), leadR1: 0, oracleR1: 0,
   };
   const lead: number[] = [];
   let words = 0;
@@ -177,7 +158,7 @@ function addBayes(prepared: readonly Prepared[], oracleLabels: boolean): void {
   }
 }
 
-/** The blend as shipped (src/core/rank/index.ts), the starting point of every search. */
+/** The blend as shipped (src/core/rank/blend.ts), the starting point of every search. */
 const CURRENT: Partial<Record<Component, number>> = { ...BLEND_WEIGHTS };
 
 const EXPERIMENTS: readonly Config[] = [
@@ -194,10 +175,7 @@ const EXPERIMENTS: readonly Config[] = [
   { label: 'current + bayes 0.5', weights: { ...CURRENT, bayes: 0.5 } },
   { label: 'current + bayes 0.5, prior^2', weights: { ...CURRENT, bayes: 0.5 }, priorPower: 2 },
   { label: 'current, mmr 0.9', weights: CURRENT, mmrLambda: 0.9 },
-  { label: 'current, no fragments', weights: CURRENT, dropFragments: true },
-  { label: 'current, no fragments, no balance', weights: CURRENT, dropFragments: true, balance: false },
   { label: 'bayes + lexrank 0.3 + centroid 0.1, no balance', weights: { bayes: 1, lexrank: 0.3, centroid: 0.1 }, balance: false },
-  { label: 'bayes + lexrank 0.3 + centroid 0.1, no balance, no fragments', weights: { bayes: 1, lexrank: 0.3, centroid: 0.1 }, balance: false, dropFragments: true },
   { label: 'current, minPerSection 0', weights: CURRENT, minPerSection: 0 },
 ];
 

@@ -17,15 +17,6 @@ export function parseCommandArgs<const T extends OptionSpec>(args: string[], opt
   }
 }
 
-export function numberFlag(name: string, raw: string | undefined, min: number, max: number, integer: boolean): number | undefined {
-  if (raw === undefined) return undefined;
-  const value = Number(raw);
-  if (!Number.isFinite(value) || value < min || value > max || (integer && !Number.isInteger(value))) {
-    throw new UsageError(`--${name} takes ${integer ? 'a whole number' : 'a number'} from ${min} to ${max}, not "${raw}"`);
-  }
-  return value;
-}
-
 export function choiceFlag<T extends string>(name: string, raw: string | undefined, choices: readonly T[]): T | undefined {
   if (raw === undefined) return undefined;
   if (!choices.includes(raw as T)) throw new UsageError(`--${name} takes one of ${choices.join(', ')}, not "${raw}"`);

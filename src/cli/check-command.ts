@@ -1,31 +1,37 @@
 /** `tersely check FILE [--abstract-heading TEXT | --abstract FILE] [--format text|json]` */
-import { checkAbstract, type AbstractReport } from '../core/check/abstract';
-import { LineIndex } from '../core/lines';
-import { choiceFlag, parseCommandArgs, UsageError } from './args';
+import { checkAbstract, LineIndex, type AbstractReport, type AbstractSource } from '../core/index';
+import { choiceFlag, UsageError } from './args';
+import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
 import { styleFor, type Style } from './style';
+import { forcedFormat } from './summarize-command';
+
+/** How the command line names the abstract, added to the engine's message when none was found. */
+const HOW_TO_NAME_ABSTRACT = 'Name its heading with --abstract-heading TEXT, or give it in a file with --abstract FILE.';
 
 export async function runCheck(args: string[]): Promise<number> {
-  const { values, positionals } = parseCommandArgs(args, {
+  const { options, extra, positionals, notes } = parseFlags('check', args, {
     'abstract-heading': { type: 'string' },
     abstract: { type: 'string' },
     format: { type: 'string' },
-    lang: { type: 'string' },
+    'input-format': { type: 'string' },
   });
   if (positionals.length !== 1) throw new UsageError('check takes exactly one FILE');
-  if (values['abstract-heading'] !== undefined && values.abstract !== undefined) {
-    throw new UsageError('choose one of --abstract-heading and --abstract');
-  }
-  const format = choiceFlag('format', values.format, ['text', 'json'] as const) ?? 'text';
-  const input = await readInput(positionals[0]!);
-  let abstract: Parameters<typeof checkAbstract>[1]['abstract'];
-  if (values['abstract-heading'] !== undefined) abstract = { kind: 'heading', heading: values['abstract-heading'] };
-  if (values.abstract !== undefined) {
-    const file = await readInput(values.abstract);
+  const heading = extra['abstract-heading'] as string | undefined;
+  const abstractFile = extra.abstract as string | undefined;
+  if (heading !== undefined && abstractFile !== undefined) throw new UsageError('choose one of --abstract-heading and --abstract');
+  const format = choiceFlag('format', extra.format as string | undefined, ['text', 'json'] as const) ?? 'text';
+  const inputFormat = forcedFormat(extra, notes);
+  for (const note of notes) process.stderr.write(`tersely: ${note}\n`);
+  const input = await readInput(positionals[0]!, inputFormat ?? 'markdown');
+  let abstract: AbstractSource | undefined;
+  if (heading !== undefined) abstract = { kind: 'heading', heading };
+  if (abstractFile !== undefined) {
+    const file = await readInput(abstractFile);
     abstract = { kind: 'text', text: file.text, format: file.format };
   }
-  const report = checkAbstract(input.text, { format: input.format, ...(abstract ? { abstract } : {}), ...(values.lang ? { language: values.lang } : {}) });
-  if (!report.ok) throw new InputError(report.error);
+  const report = checkAbstract(input.text, { ...options, format: inputFormat ?? input.format, ...(abstract ? { abstract } : {}) });
+  if (!report.ok) throw new InputError(report.reason === 'noAbstract' || report.reason === 'missingHeading' ? `${report.error} ${HOW_TO_NAME_ABSTRACT}` : report.error);
   if (format === 'json') process.stdout.write(JSON.stringify({ file: input.name, ...report }) + '\n');
   else process.stdout.write(renderCheck(input.name, input.text, report, styleFor(process.stdout)));
   return 0;
@@ -37,7 +43,7 @@ function pct(x: number): string {
 
 export function renderCheck(name: string, text: string, report: Extract<AbstractReport, { ok: true }>, style: Style): string {
   const lines = new LineIndex(text);
-  const at = (offset: number) => `line ${lines.position(offset).line}`;
+  const at = (offset: number) => `line ${lines.lineNumber(offset)}`;
   const out: string[] = [];
   const where = report.abstract.heading ? `the "${report.abstract.heading}" section` : 'the separate abstract';
   out.push(style.bold(`Abstract check: ${name}`), style.dim(`Checking ${where} (${report.abstract.words} words, ${report.abstract.sentences.length} sentences) against the body.`));

@@ -1,8 +1,9 @@
 /** The `tersely` command line: one table of commands, one place that turns errors into messages. */
+import { OptionsError, SUMMARY_OPTIONS, HOST_OPTIONS } from '../core/index';
 import { UsageError } from './args';
 import { InputError } from './read-input';
 import { runSummarize } from './summarize-command';
-import { HELP } from './help';
+import { helpText } from './help';
 
 declare const TERSELY_VERSION: string | undefined;
 
@@ -17,7 +18,7 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
 export async function main(argv: string[]): Promise<number> {
   const [name, ...rest] = argv;
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
-    process.stdout.write(HELP);
+    process.stdout.write(helpText());
     return name === undefined ? 2 : 0;
   }
   if (name === '--version' || name === '-v') {
@@ -30,7 +31,7 @@ export async function main(argv: string[]): Promise<number> {
     return 2;
   }
   if (rest.includes('--help') || rest.includes('-h')) {
-    process.stdout.write(HELP);
+    process.stdout.write(helpText());
     return 0;
   }
   try {
@@ -40,10 +41,21 @@ export async function main(argv: string[]): Promise<number> {
       process.stderr.write(`tersely ${name}: ${error.message} (see tersely --help)\n`);
       return 2;
     }
+    if (error instanceof OptionsError) {
+      for (const problem of error.problems) process.stderr.write(`tersely ${name}: ${flagFor(problem.key)}: ${problem.reason}\n`);
+      return 2;
+    }
     if (error instanceof InputError) {
       process.stderr.write(`tersely ${name}: ${error.message}\n`);
       return 1;
     }
     throw error;
   }
+}
+
+/** The flag people typed for a schema key ("budget" → "--length"), for messages. */
+function flagFor(key: string): string {
+  if (key === 'model') return '--model';
+  const definition = (SUMMARY_OPTIONS as Record<string, { cli?: { flag: string } }>)[key] ?? (HOST_OPTIONS as Record<string, { cli?: { flag: string } }>)[key];
+  return definition?.cli ? `--${definition.cli.flag}` : key;
 }

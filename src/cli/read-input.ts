@@ -2,8 +2,7 @@
  * Reads a file (or standard input for "-") as text, refusing what is not text with a one-line reason.
  */
 import { readFile, stat } from 'node:fs/promises';
-import { extname } from 'node:path';
-import type { DocumentFormat } from '../core/types';
+import { formatForFileName, GENERIC_FORMAT, type DocumentFormat } from '../core/index';
 
 export interface InputText {
   readonly name: string;
@@ -13,10 +12,9 @@ export interface InputText {
 
 export class InputError extends Error {}
 
-const MARKDOWN_EXTENSIONS = new Set(['.md', '.markdown', '.mdown', '.mkd', '.mdx']);
-
+/** A file's format by its extension; a file no format claims is read as plain text. */
 export function formatForPath(path: string): DocumentFormat {
-  return MARKDOWN_EXTENSIONS.has(extname(path).toLowerCase()) ? 'markdown' : 'plaintext';
+  return formatForFileName(path)?.id ?? GENERIC_FORMAT;
 }
 
 async function readStdin(): Promise<Buffer> {

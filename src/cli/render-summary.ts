@@ -1,6 +1,5 @@
 /** Terminal and JSON views of a summary. */
-import { LineIndex } from '../core/lines';
-import type { Summary } from '../core/types';
+import { LineIndex, type Summary } from '../core/index';
 import type { Style } from './style';
 
 export const EXTRACTIVE_NOTE = 'Extractive summary: every line is quoted from the text and may lose the context around it.';
@@ -9,10 +8,15 @@ function percent(x: number): string {
   return `${Math.round(x * 100)}%`;
 }
 
+/** "about 2 min", "under 1 min". */
+export function minutes(value: number): string {
+  return value < 1 ? 'under 1 min' : `about ${Math.round(value).toLocaleString('en-US')} min`;
+}
+
 export function renderText(name: string, summary: Summary, style: Style): string {
   const { stats } = summary;
   const lines = new LineIndex(summary.document.text);
-  const lineOf = (offset: number) => lines.position(offset - summary.document.baseOffset).line;
+  const lineOf = (offset: number) => lines.lineNumber(offset - summary.document.baseOffset);
   const out: string[] = [];
   const title = summary.document.title ? `${summary.document.title} (${name})` : name;
   out.push(style.bold(title));
@@ -20,7 +24,7 @@ export function renderText(name: string, summary: Summary, style: Style): string
     style.dim(
       `${stats.wordsOut.toLocaleString('en-US')} of ${stats.wordsIn.toLocaleString('en-US')} words (${percent(stats.compression)}) · ` +
         `${stats.sentencesOut} of ${stats.sentencesIn} sentences · ${stats.sectionsCovered} of ${stats.sectionsWithContent} sections covered · ` +
-        `about ${Math.round(stats.minutesSaved)} min of reading saved · method ${summary.method}`,
+        `reads in ${minutes(stats.minutesToRead)} (document ${minutes(stats.documentMinutesToRead)}) · method ${summary.method}`,
     ),
   );
   out.push(style.dim(EXTRACTIVE_NOTE));
@@ -62,7 +66,13 @@ export function summaryToJson(name: string, summary: Summary): object {
       rank: p.rank,
       ...(p.edited ? { edited: p.edited.reason } : {}),
     })),
-    stats: { ...summary.stats, compression: round(summary.stats.compression), minutesSaved: round(summary.stats.minutesSaved) },
+    stats: {
+      ...summary.stats,
+      compression: round(summary.stats.compression),
+      minutesToRead: round(summary.stats.minutesToRead),
+      documentMinutesToRead: round(summary.stats.documentMinutesToRead),
+    },
+    ranking: summary.ranking,
     sections: summary.shares.map((s) => ({
       heading: s.heading,
       documentShare: round(s.documentShare),

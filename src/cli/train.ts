@@ -4,31 +4,20 @@
  * folder and writes the result; labelling, features and counting are the engine's (src/core/learn).
  */
 import { readdir, readFile, writeFile } from 'node:fs/promises';
-import { extname, join, relative } from 'node:path';
-import { exampleFromDocument, trainModel, type TrainingExample } from '../core/learn/train-model';
-import { FEATURES } from '../core/learn/features';
-import { valueLogOdds } from '../core/learn/naive-bayes';
-import type { BayesModel } from '../core/learn/model';
-import type { DocumentFormat } from '../core/types';
-import { parseCommandArgs, UsageError } from './args';
+import { join, relative } from 'node:path';
+import { exampleFromDocument, FORMATS, formatForFileName, modelFeatureReport, trainModel, type BayesModel, type TrainingExample } from '../core/index';
+import { UsageError } from './args';
+import { parseFlags } from './option-flags';
 import { InputError } from './read-input';
 
-const TRAIN_OPTIONS = {
+const TRAIN_FLAGS = {
   'reference-heading': { type: 'string' },
   out: { type: 'string' },
   match: { type: 'string' },
-  lang: { type: 'string' },
   quiet: { type: 'boolean' },
 } as const;
 
-const FORMATS: Readonly<Record<string, DocumentFormat>> = {
-  '.md': 'markdown',
-  '.markdown': 'markdown',
-  '.mdown': 'markdown',
-  '.mkd': 'markdown',
-  '.mdx': 'markdown',
-  '.txt': 'plaintext',
-};
+const KNOWN_EXTENSIONS = FORMATS.flatMap((f) => f.extensions).join(', ');
 
 /** Document files under `root`, sorted, skipping hidden folders and node_modules. */
 export async function documentFiles(root: string): Promise<string[]> {
@@ -39,7 +28,7 @@ export async function documentFiles(root: string): Promise<string[]> {
       if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
       const path = join(folder, entry.name);
       if (entry.isDirectory()) await walk(path);
-      else if (entry.isFile() && FORMATS[extname(entry.name).toLowerCase()]) found.push(path);
+      else if (entry.isFile() && formatForFileName(entry.name)) found.push(path);
     }
   };
   try {
@@ -52,15 +41,7 @@ export async function documentFiles(root: string): Promise<string[]> {
 
 /** The feature values that most raise or lower the odds, for a one-screen report. */
 export function strongestValues(model: BayesModel, count = 6): string[] {
-  const rows: { label: string; odds: number }[] = [];
-  for (const feature of FEATURES) {
-    const counts = model.features[feature.name];
-    if (!counts) continue;
-    valueLogOdds(counts, model.classes.positive, model.classes.negative, model.smoothing).forEach((odds, v) => {
-      rows.push({ label: `${feature.name} = ${feature.values[v]}`, odds });
-    });
-  }
-  rows.sort((a, b) => b.odds - a.odds);
+  const rows = [...modelFeatureReport(model)].sort((a, b) => b.odds - a.odds);
   const show = (r: { label: string; odds: number }) => `  ${r.odds >= 0 ? '+' : ''}${r.odds.toFixed(2)}  ${r.label}`;
   return ['raises the odds most:', ...rows.slice(0, count).map(show), 'lowers them most:', ...rows.slice(-count).reverse().map(show)];
 }
@@ -76,32 +57,32 @@ export function modelJson(model: BayesModel): string {
 }
 
 export async function runTrain(args: string[]): Promise<number> {
-  const { values, positionals } = parseCommandArgs(args, TRAIN_OPTIONS);
+  const { options, extra: values, positionals } = parseFlags('train', args, TRAIN_FLAGS);
   if (positionals.length !== 1) throw new UsageError('train takes one folder of documents');
   const root = positionals[0]!;
-  const heading = values['reference-heading'];
+  const heading = values['reference-heading'] as string | undefined;
   if (!heading) throw new UsageError('--reference-heading names the section that holds each document’s own summary (e.g. Summary)');
-  const out = values.out;
+  const out = values.out as string | undefined;
   if (!out) throw new UsageError('--out names the model file to write (e.g. model.json)');
   let match: RegExp | null = null;
-  if (values.match !== undefined) {
+  if (typeof values.match === 'string') {
     try {
       match = new RegExp(values.match);
     } catch {
       throw new UsageError(`--match takes a regular expression over file names, not "${values.match}"`);
     }
   }
-  const language = values.lang ?? 'auto';
+  const language = (options.language as string | undefined) ?? 'auto';
   const say = (line: string) => {
     if (!values.quiet) process.stderr.write(line);
   };
 
   const files = (await documentFiles(root)).filter((path) => match === null || match.test(relative(root, path)));
-  if (files.length === 0) throw new InputError(`no .md, .markdown or .txt files in ${root}${match ? ` whose name matches ${match}` : ''}`);
+  if (files.length === 0) throw new InputError(`no ${KNOWN_EXTENSIONS} files in ${root}${match ? ` whose name matches ${match}` : ''}`);
   const examples: TrainingExample[] = [];
   const skipped: Record<string, number> = {};
   for (const [index, path] of files.entries()) {
-    const format = FORMATS[extname(path).toLowerCase()]!;
+    const format = formatForFileName(path)!.id;
     const example = exampleFromDocument(await readFile(path, 'utf8'), { referenceHeading: heading, format, language });
     if ('skipped' in example) skipped[example.skipped] = (skipped[example.skipped] ?? 0) + 1;
     else examples.push(example);

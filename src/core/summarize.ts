@@ -1,50 +1,117 @@
 /**
- * The pipeline, in one visible place: parse → analyze → rank → select → check.
+ * The pipeline, in one visible place: read → analyze → rank → select → check.
+ *
+ * `summarize` runs it whole. The stages are exported too (`prepareDocument`, `rankPrepared`,
+ * `finishSummary`) so the benchmarks time and tune exactly what ships, and reuse one ranking for
+ * several lengths, instead of composing a pipeline of their own.
  */
 import { analyze, resolveLanguage } from './analyze';
-import { resolveOptions, type SummaryOptions } from './options';
-import { parseDocument } from './parse/index';
-import { rankWith } from './ranking';
-import { candidateUnits } from './select/units';
-import { selectSentences } from './select/select';
-import { applyFitness, sentenceFitness } from './select/fitness';
-import { describeSummary } from './summary-report';
-import { inputProblem } from './input-guard';
 import { findStandAloneProblems, repairAutomatically } from './coherence/index';
-import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankResult, Summary } from './types';
+import { FORMAT_IDS } from './formats/catalog';
+import { parseDocument } from './formats/registry';
+import { inputProblem } from './input-guard';
+import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOptions } from './options/resolve';
+import { SUMMARY_OPTIONS } from './options/schema';
+import type { RankOptions } from './rank/blend';
+import { rankWith } from './rank/registry';
+import { sentenceFitness, summaryRelevance } from './select/fitness';
+import { selectSentences } from './select/select';
+import { candidateUnits } from './select/units';
+import { describeSummary } from './summary/report';
+import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
+import { sentenceVectorsOf, termIndexOf } from './vectors';
 
-export interface SummarizeRequest extends Partial<Record<keyof SummaryOptions, unknown>> {
+/** What the engine is doing, for progress shown to people. */
+export type SummaryStage = 'reading' | 'ranking' | 'checking';
+
+export interface SummarizeRequest extends SummaryRequestOptions {
+  /** The text's format (see formats/registry.ts); Markdown when absent. */
   readonly format?: DocumentFormat;
   /** Offset of `text` in the whole document when summarizing a selection. */
   readonly baseOffset?: number;
+  /** Called as each stage starts. */
+  readonly onStage?: (stage: SummaryStage) => void;
+}
+
+/** Request fields besides the schema's options. */
+const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'format', 'baseOffset', 'onStage']);
+
+/** A document read and analysed, with the options it is summarized under. */
+export interface PreparedDocument {
+  readonly analyzed: AnalyzedDocument;
+  readonly options: SummaryOptions;
+}
+
+export type Preparation = { readonly ok: true; readonly prepared: PreparedDocument } | { readonly ok: false; readonly refused: Summary };
+
+/** Checks the request and the input, then reads and analyses the text. Throws OptionsError on invalid options. */
+export function prepareDocument(text: string, request: SummarizeRequest = {}): Preparation {
+  const { options, problems } = checkOptions(request);
+  const format = request.format ?? 'markdown';
+  const allProblems = [...problems];
+  // A key the engine does not know is a caller's mistake (a renamed option, a typo); say so.
+  for (const key of Object.keys(request)) {
+    if (!(key in SUMMARY_OPTIONS) && !REQUEST_KEYS.has(key)) allProblems.push({ key, reason: 'is not an option of a summary' });
+  }
+  if (!FORMAT_IDS.includes(format)) allProblems.push({ key: 'format', reason: `expected one of ${FORMAT_IDS.join(', ')}` });
+  const baseOffset = request.baseOffset ?? 0;
+  if (!(Number.isInteger(baseOffset) && baseOffset >= 0)) allProblems.push({ key: 'baseOffset', reason: 'expected a whole number of at least 0' });
+  if (allProblems.length > 0) throw new OptionsError(allProblems);
+
+  const problem = inputProblem(text, options.maxChars);
+  if (problem) return { ok: false, refused: refusedSummary(text, format, baseOffset, options, problem) };
+  request.onStage?.('reading');
+  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables });
+  const analyzed = analyze(doc, resolveLanguage(doc, options.language));
+  return { ok: true, prepared: { analyzed, options } };
+}
+
+/** The options a ranker sees. */
+export function rankOptionsOf(options: SummaryOptions): RankOptions {
+  return {
+    cueWords: { bonus: options.preferPhrases, stigma: options.avoidPhrases },
+    ...(options.model ? { model: options.model } : {}),
+  };
+}
+
+/** Scores every sentence with the options' method (or another one, for the benchmark). */
+export function rankPrepared(prepared: PreparedDocument, method: RankerName = prepared.options.method, extra: RankOptions = {}): RankResult {
+  return rankWith(method, prepared.analyzed, { ...rankOptionsOf(prepared.options), ...extra });
 }
 
 export function summarize(text: string, request: SummarizeRequest = {}): Summary {
-  const options = resolveOptions(request);
-  const format: DocumentFormat = request.format === 'plaintext' ? 'plaintext' : 'markdown';
-  const baseOffset = typeof request.baseOffset === 'number' && request.baseOffset >= 0 ? Math.floor(request.baseOffset) : 0;
-
-  const problem = inputProblem(text, options.maxChars);
-  if (problem) return refusedSummary(text, format, baseOffset, options, problem);
-
-  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables });
-  const language = resolveLanguage(doc, options.language);
-  const analyzed = analyze(doc, language);
-  const ranked = rankWith(options.method, analyzed, options);
-  return summarizeRanked(analyzed, ranked, options);
+  const preparation = prepareDocument(text, request);
+  if (!preparation.ok) return preparation.refused;
+  const { prepared } = preparation;
+  request.onStage?.('ranking');
+  const ranked = rankPrepared(prepared);
+  request.onStage?.('checking');
+  return finishSummary(prepared, ranked);
 }
 
-/** Selection and checks for already-ranked sentences (the benchmark reuses one ranking for several budgets). */
-export function summarizeRanked(analyzed: AnalyzedDocument, ranked: RankResult, options: SummaryOptions): Summary {
+/** The sentences a summary may pick (prose with words, outside excluded sections), in document order. */
+export function candidateSentences(prepared: PreparedDocument, options: SummaryOptions = prepared.options): number[] {
+  const { analyzed } = prepared;
+  const { unitOf } = candidateUnits(analyzed.doc, analyzed.words.map((w) => w.length), options);
+  const list: number[] = [];
+  for (let i = 0; i < unitOf.length; i++) if (unitOf[i]! >= 0) list.push(i);
+  return list;
+}
+
+/** Selection and checks for ranked sentences: fitness, balance, MMR, the stand-alone check and repairs. */
+export function finishSummary(prepared: PreparedDocument, ranked: RankResult, options: SummaryOptions = prepared.options): Summary {
+  const { analyzed } = prepared;
   const { doc } = analyzed;
   const wordCounts = analyzed.words.map((w) => w.length);
   const candidates = candidateUnits(doc, wordCounts, options);
   const { unitOf, unitWeights } = candidates;
+  const candidateList = candidateSentences(prepared, options);
 
   const selection = selectSentences({
-    scores: applyFitness(ranked.scores, sentenceFitness(analyzed)),
+    relevance: summaryRelevance(ranked.scores, sentenceFitness(analyzed), candidateList),
     wordCounts,
-    terms: analyzed.terms,
+    vectors: sentenceVectorsOf(analyzed),
+    vocabularySize: termIndexOf(analyzed).vocabulary.size,
     unitOf,
     unitWeights,
     budget: options.budget,
@@ -92,8 +159,9 @@ function refusedSummary(text: string, format: DocumentFormat, baseOffset: number
     language: options.language === 'auto' ? 'en' : options.language,
     sentences: [],
     shares: [],
-    stats: { wordsIn: 0, wordsOut: 0, compression: 0, sentencesIn: 0, sentencesOut: 0, sectionsCovered: 0, sectionsWithContent: 0, minutesSaved: 0 },
+    stats: { wordsIn: 0, wordsOut: 0, compression: 0, sentencesIn: 0, sentencesOut: 0, sectionsCovered: 0, sectionsWithContent: 0, minutesToRead: 0, documentMinutesToRead: 0 },
     warnings: [],
+    ranking: {},
     notices: [reason],
     refused: reason,
   };

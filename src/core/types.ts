@@ -202,8 +202,15 @@ export interface SummaryStats {
   readonly sectionsCovered: number;
   /** Balance units that have any content sentence. */
   readonly sectionsWithContent: number;
-  /** Estimated minutes of reading saved at 230 words per minute (common practice, no source). */
-  readonly minutesSaved: number;
+  /** Minutes the summary and the whole document take to read at 230 words per minute (common practice, no source). */
+  readonly minutesToRead: number;
+  readonly documentMinutesToRead: number;
+}
+
+/** How the ranking went: iterative methods (LexRank, TextRank) report whether they converged. */
+export interface RankingReport {
+  readonly converged?: boolean;
+  readonly iterations?: number;
 }
 
 /** One balance unit: a section at the balance depth with its sub-sections rolled up. */
@@ -227,6 +234,7 @@ export interface Summary {
   readonly shares: readonly SectionShare[];
   readonly stats: SummaryStats;
   readonly warnings: readonly StandAloneWarning[];
+  readonly ranking: RankingReport;
   /** Plain-language notices (e.g. "the document has no prose sentences"). */
   readonly notices: readonly string[];
   /** Set when no summary was attempted (too large, binary content); the reason, for people. */

@@ -2,8 +2,8 @@
  * How an abstract check shows: a headline and findings for the panel, and findings with spans for
  * the Problems view. Pure; the report comes from the engine worker as plain data.
  */
-import type { AbstractReport } from '../core/check/abstract';
-import type { Span } from '../core/types';
+import type { AbstractReport } from '../core/index';
+import type { Span } from '../core/index';
 import type { PanelAbstractCheck } from './messages';
 import { UNTITLED_SECTION } from './panel-model';
 

@@ -4,7 +4,7 @@
  * SUMMARY through a command; they never carry an edit to the document.
  */
 import * as vscode from 'vscode';
-import type { StandAloneWarning, Summary } from '../core/types';
+import type { StandAloneWarning, Summary } from '../core/index';
 import { DIAGNOSTIC_SOURCE, STAND_ALONE_CODE } from './ids';
 import { repairLabel } from './panel-model';
 import { checkedSpan } from './ranges';

@@ -1,6 +1,6 @@
 /** Messages between the extension host and the engine worker. */
-import type { AbstractReport } from '../core/check/abstract';
-import type { Summary } from '../core/types';
+import type { AbstractReport } from '../core/index';
+import type { Summary } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
 export type EngineTask =

@@ -5,9 +5,9 @@
  * bundle itself carries no engine code.
  */
 import { parentPort } from 'node:worker_threads';
-import { checkAbstract } from '../core/check/abstract';
-import { loadModel } from '../core/learn/model';
-import { summarize } from '../core/summarize';
+import { checkAbstract } from '../core/index';
+import { loadModel } from '../core/index';
+import { summarize } from '../core/index';
 import type { EngineJob, EngineReply } from './engine-protocol';
 
 function runJob(job: EngineJob): EngineReply {

@@ -1,6 +1,6 @@
 /** The hover on a highlighted sentence: its rank, score and the features behind the score. Pure. */
-import { escapeMarkdown } from '../core/format/markdown';
-import type { PickedSentence } from '../core/types';
+import { escapeMarkdown } from '../core/index';
+import type { PickedSentence } from '../core/index';
 
 const MAX_FEATURES = 8;
 

@@ -4,7 +4,7 @@
  * or malformed messages are rejected with a reason (the caller logs it and does nothing else).
  * No editor API here: the webview bundle imports these types too.
  */
-import type { RankerName, SummaryStats } from '../core/types';
+import type { RankerName, SummaryStats } from '../core/index';
 import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from './settings';
 
 // ---------- what the panel shows (extension → webview) ----------

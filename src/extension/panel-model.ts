@@ -3,23 +3,15 @@
  * shares, figures and the coherence warnings with their repair buttons. Pure, so it is tested
  * under Node; the webview only renders what this returns.
  */
-import type { Repair, StandAloneWarning, Summary } from '../core/types';
+import type { Repair, StandAloneWarning, Summary } from '../core/index';
 import type { PanelGroup, PanelRepair, PanelSentence, PanelSummary, PanelWarning } from './messages';
 
 export const UNTITLED_SECTION = '(before the first heading)';
 
 /** The balance unit (a section index listed in `summary.shares`) that contains a section, or -1. */
-export function unitOfSection(summary: Summary, section: number): number {
-  const units = new Set(summary.shares.map((share) => share.section));
-  const sections = summary.document.sections;
-  let current: number | null = section;
-  // Bounded walk: a malformed parent chain must not loop forever.
-  for (let steps = 0; current !== null && steps <= sections.length; steps++) {
-    if (units.has(current)) return current;
-    current = sections[current]?.parent ?? null;
-  }
-  return -1;
-}
+import { unitOfSection } from '../core/index';
+
+export { unitOfSection };
 
 export function repairLabel(repair: Repair, warning: StandAloneWarning): string {
   switch (repair.kind) {
@@ -97,7 +89,8 @@ export function buildPanelSummary(summary: Summary, id: number, documentName: st
       sentencesOut: stats.sentencesOut,
       sectionsCovered: stats.sectionsCovered,
       sectionsWithContent: stats.sectionsWithContent,
-      minutesSaved: stats.minutesSaved,
+      minutesToRead: stats.minutesToRead,
+      documentMinutesToRead: stats.documentMinutesToRead,
     },
     notices: summary.refused ? [summary.refused, ...summary.notices.filter((n) => n !== summary.refused)] : [...summary.notices],
   };

@@ -4,7 +4,7 @@
  * as anything with `positionAt`, and `LineIndex` does the same conversion for tests and for code
  * that only has a string.
  */
-import type { Span } from '../core/types';
+import type { Span } from '../core/index';
 
 export interface LinePosition {
   /** 0-based line. */

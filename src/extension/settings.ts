@@ -3,7 +3,7 @@
  * validated and clamped here. Free of the editor API so the parsing can be tested under Node;
  * the caller passes a getter over the configuration.
  */
-import type { DocumentFormat, RankerName } from '../core/types';
+import type { DocumentFormat, RankerName } from '../core/index';
 
 export type LengthUnit = 'sentences' | 'percent' | 'words';
 
@@ -173,7 +173,8 @@ export interface EngineRequestOptions {
   readonly balanceDepth: number;
   readonly minPerSection: number;
   readonly excludeHeadings: readonly string[];
-  readonly cueWords: { readonly bonus: readonly string[]; readonly stigma: readonly string[] };
+  readonly preferPhrases: readonly string[];
+  readonly avoidPhrases: readonly string[];
   readonly language: string;
   readonly repair: 'suggest' | 'auto';
   readonly maxChars: number;
@@ -194,7 +195,8 @@ export function toEngineOptions(settings: TerselySettings, format: DocumentForma
     balanceDepth: settings.balance.depth,
     minPerSection: settings.balance.minPerSection,
     excludeHeadings: settings.excludeHeadings,
-    cueWords: settings.cueWords,
+    preferPhrases: settings.cueWords.bonus,
+    avoidPhrases: settings.cueWords.stigma,
     language: settings.language,
     repair: settings.repair,
     maxChars: settings.maxDocumentSize,

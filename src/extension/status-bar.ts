@@ -1,6 +1,6 @@
 /** Status bar item shown while a summary is on screen: compression and sections covered. */
 import * as vscode from 'vscode';
-import type { SummaryStats } from '../core/types';
+import type { SummaryStats } from '../core/index';
 import { VIEW_ID } from './ids';
 
 export function statusText(stats: SummaryStats, live: boolean): { text: string; tooltip: string } {

@@ -2,8 +2,8 @@
  * Text that leaves the panel: the Markdown for Copy Summary and the single edit Insert Summary
  * makes. Pure; the command only applies the returned edit.
  */
-import { summaryToMarkdown } from '../core/format/markdown';
-import type { DocumentFormat, Summary } from '../core/types';
+import { summaryToMarkdown } from '../core/index';
+import type { DocumentFormat, Summary } from '../core/index';
 
 export function summaryForClipboard(summary: Summary): string {
   return summaryToMarkdown(summary, { grouped: true });

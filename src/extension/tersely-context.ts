@@ -5,7 +5,7 @@
  */
 import * as vscode from 'vscode';
 import { Worker } from 'node:worker_threads';
-import type { Span, Summary } from '../core/types';
+import type { Span, Summary } from '../core/index';
 import { SummaryHighlights } from './decorations';
 import { RepairQuickFixes, standAloneDiagnostics, type RepairArgs } from './diagnostics';
 import { describePick } from './hover-text';
@@ -16,7 +16,7 @@ import { ModelFiles } from './model-file';
 import { buildPanelSummary } from './panel-model';
 import { SummaryPanel } from './panel-provider';
 import { checkedSpan, spanAt } from './ranges';
-import { applyRepair } from './repairs';
+import { applyRepair } from '../core/index';
 import { Debouncer, RequestSequencer } from './scheduling';
 import { formatFor, parseSettings, toEngineOptions, type SettingKey, type TerselySettings } from './settings';
 import { SummaryStatus } from './status-bar';

@@ -160,7 +160,7 @@ function renderFigures(summary: PanelSummary): HTMLElement {
     figure('words', 'Words', `${integer.format(f.wordsIn)} → ${integer.format(f.wordsOut)}`),
     figure('compression', 'Compression', percent(f.compression)),
     figure('sections', 'Sections covered', `${f.sectionsCovered} / ${f.sectionsWithContent}`),
-    figure('saved', 'Reading time saved', `≈ ${integer.format(Math.max(0, f.minutesSaved))} min`),
+    figure('reading', 'Reads in', `about ${integer.format(Math.max(1, Math.round(f.minutesToRead)))} min (document about ${integer.format(Math.max(1, Math.round(f.documentMinutesToRead)))} min)`),
   ]);
 }
 

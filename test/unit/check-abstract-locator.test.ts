@@ -6,7 +6,7 @@ import {
   NO_ABSTRACT_MESSAGE,
   sectionWithDescendants,
 } from '../../src/core/check/abstract-locator';
-import { parseDocument } from '../../src/core/parse/index';
+import { parseDocument } from '../../src/core/formats/registry';
 
 const parse = (text: string) => parseDocument(text, { format: 'markdown' });
 const headingOf = (text: string, heading?: string) => {
@@ -50,19 +50,26 @@ describe('check: locating the abstract', () => {
     const text = '# Doc\n\n## Summary\n\nThe ferry runs late. It stops at noon.\n\n## Timetable\n\nThe ferry leaves at nine.\n';
     const analyzed = analyze(parse(text), 'en');
     const located = locateAbstract(analyzed, undefined, 'en');
-    assert.ok(typeof located !== 'string');
+    assert.ok(!('error' in located));
     assert.deepEqual(located.sentences.map((s) => text.slice(s.span!.start, s.span!.end)), ['The ferry runs late.', 'It stops at noon.']);
-    assert.equal(locateAbstract(analyze(parse('# Doc\n\n## Body\n\nText.\n'), 'en'), undefined, 'en'), NO_ABSTRACT_MESSAGE);
-    assert.match(locateAbstract(analyzed, { kind: 'heading', heading: 'Nope' }, 'en') as string, /"Nope"/);
-    assert.match(locateAbstract(analyze(parse('# Doc\n\n## Summary\n\n```\ncode\n```\n\n## Body\n\nText.\n'), 'en'), undefined, 'en') as string, /no sentences/);
+    assert.deepEqual(located.sentences.map((s) => s.sentence), [0, 1]);
+    assert.deepEqual(locateAbstract(analyze(parse('# Doc\n\n## Body\n\nText.\n'), 'en'), undefined, 'en'), { reason: 'noAbstract', error: NO_ABSTRACT_MESSAGE });
+    const missing = locateAbstract(analyzed, { kind: 'heading', heading: 'Nope' }, 'en');
+    assert.ok('error' in missing && missing.reason === 'missingHeading');
+    assert.match(missing.error, /"Nope"/);
+    const empty = locateAbstract(analyze(parse('# Doc\n\n## Summary\n\n```\ncode\n```\n\n## Body\n\nText.\n'), 'en'), undefined, 'en');
+    assert.ok('error' in empty && empty.reason === 'emptyAbstract');
+    assert.match(empty.error, /no sentences/);
   });
 
   it('reads an abstract given as separate text, without spans', () => {
     const analyzed = analyze(parse('# Doc\n\n## Body\n\nText here.\n'), 'en');
     const located = locateAbstract(analyzed, { kind: 'text', text: 'First claim. Second claim.' }, 'en');
-    assert.ok(typeof located !== 'string');
+    assert.ok(!('error' in located));
     assert.equal(located.origin, 'text');
     assert.deepEqual(located.sentences.map((s) => [s.text, s.span]), [['First claim.', null], ['Second claim.', null]]);
-    assert.match(locateAbstract(analyzed, { kind: 'text', text: '   ' }, 'en') as string, /no sentences/);
+    const blank = locateAbstract(analyzed, { kind: 'text', text: '   ' }, 'en');
+    assert.ok('error' in blank);
+    assert.match(blank.error, /no sentences/);
   });
 });

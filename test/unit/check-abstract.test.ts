@@ -127,8 +127,10 @@ describe('check: abstract against body', () => {
 
   it('returns a clear error when the document has no abstract section', () => {
     const report = checkAbstract(demo('bike-share-rebalancing.md'), { format: 'markdown', language: 'en' });
-    assert.deepEqual(report, { ok: false, error: NO_ABSTRACT_MESSAGE });
-    assert.equal(NO_ABSTRACT_MESSAGE, 'No section headed Summary/Abstract/TL;DR found; pass --abstract-heading or --abstract');
+    assert.deepEqual(report, { ok: false, reason: 'noAbstract', error: NO_ABSTRACT_MESSAGE });
+    // Said in words both the editor and the command line can show (each adds how to name an abstract there).
+    assert.equal(NO_ABSTRACT_MESSAGE, 'No section headed Summary, Abstract or TL;DR was found, so there is no abstract to check.');
+    assert.doesNotMatch(NO_ABSTRACT_MESSAGE, /--/);
   });
 
   it('prefers a Summary over an Overview, and takes an Overview when it is all there is', () => {

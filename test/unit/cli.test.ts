@@ -57,19 +57,58 @@ describe('command line', function () {
     const unknown = tersely(['summarize', 'x.md', '--shorter']);
     assert.equal(unknown.code, 2);
     assert.match(unknown.stderr, /unknown option --shorter/);
-    const bad = tersely(['summarize', 'x.md', '--ratio', '3']);
+    const bad = tersely(['summarize', 'x.md', '--length', '300%']);
     assert.equal(bad.code, 2);
-    assert.match(bad.stderr, /--ratio takes a number from 0.01 to 1/);
-    const both = tersely(['summarize', 'x.md', '--ratio', '0.2', '--words', '50']);
-    assert.match(both.stderr, /choose one of/);
+    assert.match(bad.stderr, /--length takes a length such as 15% .*: 300% is outside 1%\.\.100%/);
+    const oldBad = tersely(['summarize', 'x.md', '--ratio', '3']);
+    assert.equal(oldBad.code, 2);
+    assert.match(oldBad.stderr, /--ratio \(now --length 300%\): 300% is outside 1%\.\.100%/);
+    const both = tersely(['summarize', 'x.md', '--length', '20%', '--words', '50']);
+    assert.equal(both.code, 2);
+    assert.match(both.stderr, /choose one length \(got --length and --words\)/);
     assert.equal(tersely(['frobnicate']).code, 2);
   });
 
-  it('lists every option in --help', () => {
+  it('takes counts in decimal digits only, each flag once, and languages it knows', () => {
+    for (const [args, pattern] of [
+      [['--balance-depth', '0x2'], /--balance-depth takes a whole number from 1 to 6/],
+      [['--min-sentences', '1e2'], /--min-sentences takes a whole number/],
+      [['--method', 'lexrank', '--method', 'luhn'], /--method was given 2 times; give it once/],
+      [['--lang', 'xx'], /--lang takes auto, or one of en, de/],
+    ] as const) {
+      const run = tersely(['summarize', 'x.md', ...args]);
+      assert.equal(run.code, 2, args.join(' '));
+      assert.match(run.stderr, pattern);
+    }
+  });
+
+  it('reads --length in the one grammar, and still reads the old length flags with a deprecation note', () => {
+    const file = join('media', 'demo', 'bike-share-rebalancing.md');
+    const grammar = tersely(['summarize', file, '--format', 'json', '--length', '4s']);
+    assert.equal(grammar.code, 0, grammar.stderr);
+    assert.equal((JSON.parse(grammar.stdout) as { sentences: unknown[] }).sentences.length, 4);
+    assert.equal(grammar.stderr, '');
+    const old = tersely(['summarize', file, '--format', 'json', '--sentences', '4']);
+    assert.equal(old.code, 0, old.stderr);
+    assert.deepEqual(JSON.parse(old.stdout), JSON.parse(grammar.stdout));
+    assert.match(old.stderr, /--sentences is deprecated .* use --length 4s/);
+  });
+
+  it('refuses a model file that does not validate instead of using the built-in model', () => {
+    const model = join(dir, 'bad-model.json');
+    writeFileSync(model, JSON.stringify({ format: 'tersely-sentence-model', version: 7 }));
+    const run = tersely(['summarize', join('media', 'demo', 'pull-request.md'), '--model', model, '--method', 'bayes']);
+    assert.equal(run.code, 2);
+    assert.match(run.stderr, /--model: invalid sentence model: model version 7 is not supported/);
+    assert.equal(run.stdout, '');
+  });
+
+  it('lists every option in --help, from the option schema', () => {
     const run = tersely(['--help']);
     assert.equal(run.code, 0);
-    for (const flag of ['--sentences', '--words', '--ratio', '--method', '--no-balance', '--format', '--lang', '--abstract-heading', '--abstract', '--reference-heading', '--out']) {
+    for (const flag of ['--length', '--method', '--no-balance', '--exclude', '--prefer', '--avoid', '--format', '--input-format', '--lang', '--max-size', '--abstract-heading', '--abstract', '--reference-heading', '--out', '--model']) {
       assert.ok(run.stdout.includes(flag), flag);
     }
+    assert.match(run.stdout, /--length LENGTH .*\(default: 15%\)/s);
   });
 });

@@ -29,3 +29,22 @@ describe('engine boundary', () => {
     });
   }
 });
+
+describe('engine face', () => {
+  // Everything outside the engine reaches it through src/core/index.ts only (tests of single
+  // modules excepted), so the engine's inside can change without touching its callers.
+  const callers = ['src/cli', 'src/extension', 'src/webview', 'bench'].flatMap(files);
+  const CORE_IMPORT = /from\s+['"]((?:\.\.\/)+(?:src\/)?core(?:\/[^'"]*)?)['"]/g;
+
+  it('finds the callers', () => {
+    assert.ok(callers.length > 20);
+  });
+
+  for (const file of callers) {
+    it(`${file} imports the engine only through core/index`, () => {
+      const text = readFileSync(file, 'utf8');
+      const deep = [...text.matchAll(CORE_IMPORT)].map((m) => m[1]!).filter((path) => !/\/core\/index$/.test(path));
+      assert.deepEqual(deep, []);
+    });
+  }
+});

@@ -18,7 +18,7 @@ describe('extension abstract view', () => {
   });
 
   it('shows the engine’s reason when there is no abstract to check', () => {
-    const view = abstractView({ ok: false, error: 'No section headed Summary or Abstract.' }, 'x.md');
+    const view = abstractView({ ok: false, reason: 'noAbstract', error: 'No section headed Summary or Abstract.' }, 'x.md');
     assert.equal(view.panel.headline, 'No section headed Summary or Abstract.');
     assert.deepEqual(view.findings, []);
   });

@@ -82,7 +82,7 @@ export function ferrySummary(text: string = FERRY_TEXT, extra: { sentence?: stri
       { section: 2, heading: 'Fares', documentShare: 0.4, summaryShare: 0.5, picked: 2, quota: 2 },
       { section: 4, heading: 'Safety', documentShare: 0.2, summaryShare: 0.25, picked: 1, quota: 1 },
     ],
-    stats: { wordsIn: 28, wordsOut: 18, compression: 18 / 28, sentencesIn: 6, sentencesOut: 4, sectionsCovered: 3, sectionsWithContent: 3, minutesSaved: 0 },
+    stats: { wordsIn: 28, wordsOut: 18, compression: 18 / 28, sentencesIn: 6, sentencesOut: 4, sectionsCovered: 3, sectionsWithContent: 3, minutesToRead: 18 / 230, documentMinutesToRead: 28 / 230 },
     warnings: [
       {
         sentence: 3,
@@ -98,6 +98,7 @@ export function ferrySummary(text: string = FERRY_TEXT, extra: { sentence?: stri
         ],
       },
     ],
+    ranking: {},
     notices: [],
   };
 }

@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Heading, List, Paragraph, RootContent } from 'mdast';
 import { buildPanelSummary, UNTITLED_SECTION } from '../../src/extension/panel-model';
-import { applyRepair, countWords } from '../../src/extension/repairs';
+import { applyRepair, countWords } from '../../src/core/index';
 import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
 import { describePick } from '../../src/extension/hover-text';
 import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';

@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
-import { METHODS, resolveOptions } from '../../src/core/options';
+import { METHOD_NAMES as METHODS, resolveOptions } from '../../src/core/index';
 import { DEFAULT_SETTINGS, METHOD_NAMES, SETTING_KEYS, formatFor, parseSettings, toEngineOptions, type SettingKey } from '../../src/extension/settings';
 
 const manifest = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8'));
@@ -75,7 +75,7 @@ describe('extension settings: to the engine', () => {
     assert.equal(resolved.method, 'lexrank');
     assert.equal(resolved.balance, false);
     assert.equal(resolved.balanceDepth, 2);
-    assert.deepEqual(resolved.cueWords.stigma, ['perhaps']);
+    assert.deepEqual(resolved.avoidPhrases, ['perhaps']);
     assert.equal(resolved.maxChars, settings.maxDocumentSize);
   });
 

@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { escapeMarkdown } from '../../src/core/format/markdown';
+import { escapeMarkdown } from '../../src/core/render/markdown';
 
 describe('escapeMarkdown', () => {
   it('neutralises markup characters and list markers in quoted prose', () => {

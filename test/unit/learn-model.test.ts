@@ -1,10 +1,10 @@
 import assert from 'node:assert/strict';
 import { analyze } from '../../src/core/analyze';
-import { FEATURES, rankBins, sentenceFeatures } from '../../src/core/learn/features';
-import { labelSentences, termOverlapF1 } from '../../src/core/learn/labels';
-import { defaultModel, loadModel, rankBayes, validateModel, ModelError } from '../../src/core/learn/model';
-import { exampleFromDocument, trainModel, type TrainingExample } from '../../src/core/learn/train-model';
-import { parseDocument } from '../../src/core/parse/index';
+import { FEATURES, rankBins, sentenceFeatures } from '../../src/core/rank/trained/features';
+import { labelSentences, termOverlapF1 } from '../../src/core/rank/trained/labels';
+import { defaultModel, loadModel, rankBayes, validateModel, ModelError } from '../../src/core/rank/trained/model';
+import { exampleFromDocument, trainModel, type TrainingExample } from '../../src/core/rank/trained/train-model';
+import { parseDocument } from '../../src/core/formats/registry';
 
 // Invented documents (a neighbourhood tool-lending library), each with its own Summary section.
 const DOCS = [

@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
-import type { FeatureMatrix } from '../../src/core/learn/features';
-import { countFeatureValues, scoreNaiveBayes, valueLogOdds } from '../../src/core/learn/naive-bayes';
+import type { FeatureMatrix } from '../../src/core/rank/trained/features';
+import { countFeatureValues, scoreNaiveBayes, valueLogOdds } from '../../src/core/rank/trained/naive-bayes';
 
 const close = (actual: number, expected: number, tolerance = 1e-12) =>
   assert.ok(Math.abs(actual - expected) <= tolerance, `expected ${expected}, got ${actual}`);

@@ -3,7 +3,7 @@ import { mkdtemp, mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { documentFiles, runTrain, shellWord } from '../../src/cli/train';
-import { validateModel } from '../../src/core/learn/model';
+import { validateModel } from '../../src/core/rank/trained/model';
 import { UsageError } from '../../src/cli/args';
 import { InputError } from '../../src/cli/read-input';
 

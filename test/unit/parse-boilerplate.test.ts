@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { isMetadataRun } from '../../src/core/parse/boilerplate';
-import { parseDocument } from '../../src/core/parse/index';
+import { parseDocument } from '../../src/core/formats/registry';
 import type { ParsedDocument, SkipReason } from '../../src/core/types';
 
 const md = (text: string): ParsedDocument => parseDocument(text, { format: 'markdown' });

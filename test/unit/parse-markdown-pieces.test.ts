@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
-import { parseDocument } from '../../src/core/parse/index';
-import { parseMarkdownTree } from '../../src/core/parse/markdown-tree';
+import { parseDocument } from '../../src/core/formats/registry';
+import { parseMarkdownTree } from '../../src/core/formats/markdown/markdown-tree';
 import { corpusFiles } from './helpers/corpus';
 
 // Parsing a long document in pieces must give exactly the document parsing it whole gives.

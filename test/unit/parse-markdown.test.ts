@@ -3,7 +3,7 @@ import { toString } from 'mdast-util-to-string';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import { gfmFromMarkdown } from 'mdast-util-gfm';
 import { gfm } from 'micromark-extension-gfm';
-import { formatForFile, parseDocument } from '../../src/core/parse/index';
+import { parseDocument } from '../../src/core/formats/registry';
 import type { ParsedDocument } from '../../src/core/types';
 
 const md = (text: string, includeTables = false): ParsedDocument =>
@@ -17,17 +17,6 @@ const texts = (doc: ParsedDocument): string[] => doc.sentences.map((s) => s.text
 
 describe('parse: Markdown', () => {
   describe('public API', () => {
-    it('chooses the format from a file name or language id', () => {
-      assert.equal(formatForFile('notes/Plan.MD'), 'markdown');
-      assert.equal(formatForFile('a.markdown'), 'markdown');
-      assert.equal(formatForFile('page.mdx'), 'markdown');
-      assert.equal(formatForFile('markdown'), 'markdown');
-      assert.equal(formatForFile('notes.txt'), 'plaintext');
-      assert.equal(formatForFile('guide.rst'), 'plaintext');
-      assert.equal(formatForFile('plaintext'), 'plaintext');
-      assert.equal(formatForFile('md'), 'plaintext');
-    });
-
     it('returns an empty document for empty input, with the root section', () => {
       const doc = md('');
       assert.equal(doc.sentences.length, 0);

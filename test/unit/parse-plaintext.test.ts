@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { parseDocument } from '../../src/core/parse/index';
+import { parseDocument } from '../../src/core/formats/registry';
 import type { ParsedDocument } from '../../src/core/types';
 
 const plain = (text: string, baseOffset = 0): ParsedDocument => parseDocument(text, { format: 'plaintext', baseOffset });

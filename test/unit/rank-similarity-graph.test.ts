@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
 import { linkCounts, similarityGraph, termsOverBudget, type CsrGraph } from '../../src/core/rank/similarity-graph';
-import { buildTermIndex, dot, inverseSentenceFrequency, invertedIndex, presenceVectors, tfidfVectors } from '../../src/core/rank/sparse-vectors';
+import { buildTermIndex, dot, inverseFrequency, invertedIndex, presenceVectors, tfidfVectors } from '../../src/core/vectors';
 
 /** Edge map {"i,j": w} of a CSR graph, checking symmetry, row order and self-loops on the way. */
 function edgeMap(graph: CsrGraph): Map<string, number> {
@@ -32,7 +32,7 @@ describe('rank/similarity-graph', () => {
     fc.assert(
       fc.property(termLists(12, 25), (lists) => {
         const index = buildTermIndex(lists);
-        const vectors = tfidfVectors(index, inverseSentenceFrequency(index));
+        const vectors = tfidfVectors(index, inverseFrequency(index, 'sentence'));
         const edges = edgeMap(similarityGraph(vectors, index.vocabulary.size, product, 0));
         for (let i = 0; i < lists.length; i++) {
           for (let j = 0; j < lists.length; j++) {

@@ -1,11 +1,17 @@
 import assert from 'node:assert/strict';
 import { selectSentences, type SelectionInput } from '../../src/core/select/select';
+import { buildTermIndex, inverseFrequency, tfidfVectors } from '../../src/core/vectors';
 
-function input(overrides: Partial<Omit<SelectionInput, 'scores'>> & { scores: number[] }): SelectionInput {
-  const n = overrides.scores.length;
+type InputOverrides = Partial<Omit<SelectionInput, 'relevance' | 'vectors' | 'vocabularySize'>> & { scores: number[]; terms?: string[][] };
+
+/** `scores` are used as the relevance directly (already in [0, 1]); `terms` become tf·idf vectors. */
+function input({ scores, terms, ...overrides }: InputOverrides): SelectionInput {
+  const n = scores.length;
+  const index = buildTermIndex(terms ?? Array.from({ length: n }, (_, i) => [`t${i}`, `u${i}`]));
   return {
     wordCounts: new Array(n).fill(10),
-    terms: Array.from({ length: n }, (_, i) => [`t${i}`, `u${i}`]),
+    vectors: tfidfVectors(index, inverseFrequency(index, 'sentence')),
+    vocabularySize: index.vocabulary.size,
     unitOf: new Int32Array(n),
     unitWeights: new Map([[0, n * 10]]),
     budget: { unit: 'sentences', value: 2 },
@@ -14,7 +20,7 @@ function input(overrides: Partial<Omit<SelectionInput, 'scores'>> & { scores: nu
     balance: true,
     mmrLambda: 0.7,
     ...overrides,
-    scores: Float64Array.from(overrides.scores),
+    relevance: Float64Array.from(scores),
   };
 }
 

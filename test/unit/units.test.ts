@@ -1,5 +1,6 @@
 import assert from 'node:assert/strict';
-import { balanceUnits, excludedSections, normalizeHeading, topSectionDepth } from '../../src/core/select/units';
+import { balanceUnits, excludedSections, topSectionDepth } from '../../src/core/select/units';
+import { normalizeHeading } from '../../src/core/text/headings';
 import type { ParsedDocument, Section } from '../../src/core/types';
 
 function docWith(sections: Array<[heading: string, depth: number, parent: number | null]>): ParsedDocument {

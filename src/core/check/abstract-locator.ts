@@ -2,21 +2,17 @@
  * Finds the section that holds a document's own abstract.
  */
 import { analyze } from '../analyze';
-import { parseDocument } from '../parse/index';
-import { normalizeHeading, topSectionDepth } from '../select/units';
+import { parseDocument } from '../formats/registry';
+import { topSectionDepth } from '../select/units';
+import { FALLBACK_ABSTRACT_HEADINGS, HEADING_CLASSES, normalizeHeading } from '../text/headings';
 import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
 import type { AbstractSource } from './abstract-report';
 
-/** Headings that name an abstract outright, compared after `normalizeHeading` ("TL;DR" → "tl dr"). */
-export const ABSTRACT_HEADINGS: readonly string[] = ['summary', 'abstract', 'tl dr', 'tldr', 'executive summary', 'synopsis'];
+/** Headings that name an abstract outright (the heading vocabulary's abstract class). */
+export const ABSTRACT_HEADINGS: readonly string[] = HEADING_CLASSES.abstract.phrases;
 
-/**
- * Tried only when none of the above is present: an "Overview" is often an introduction rather
- * than a summary, so it should never win over a real "Summary".
- */
-export const FALLBACK_ABSTRACT_HEADINGS: readonly string[] = ['overview'];
-
-export const NO_ABSTRACT_MESSAGE = 'No section headed Summary/Abstract/TL;DR found; pass --abstract-heading or --abstract';
+/** Said the same way in the editor and on the command line; each adds how to name the abstract there. */
+export const NO_ABSTRACT_MESSAGE = 'No section headed Summary, Abstract or TL;DR was found, so there is no abstract to check.';
 
 /**
  * Index of the abstract section, or null. With `heading` the first section with that heading
@@ -47,10 +43,12 @@ export function sectionWithDescendants(doc: ParsedDocument, root: number): Uint8
 }
 
 export function missingHeadingMessage(heading: string): string {
-  return `No section headed "${heading}" found; pass --abstract-heading with an existing heading or --abstract`;
+  return `No section headed "${heading}" was found.`;
 }
 
 export interface AbstractSentence {
+  /** Index into the checked document's sentences; null for an abstract given as separate text. */
+  readonly sentence: number | null;
   readonly text: string;
   readonly span: Span | null;
   readonly terms: readonly string[];
@@ -67,24 +65,29 @@ export interface LocatedAbstract {
   readonly sentences: readonly AbstractSentence[];
 }
 
-/** The abstract's sentences, or an error message for people. */
-export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSource | undefined, language: string): LocatedAbstract | string {
+export interface LocateFailure {
+  readonly reason: 'noAbstract' | 'missingHeading' | 'emptyAbstract';
+  readonly error: string;
+}
+
+/** The abstract's sentences, or why there are none (with a message for people). */
+export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSource | undefined, language: string): LocatedAbstract | LocateFailure {
   const { doc } = analyzed;
   if (source?.kind === 'text') {
     const parsed = analyze(parseDocument(source.text, { format: source.format ?? 'plaintext' }), language);
-    const sentences = parsed.doc.sentences.map((s, i) => ({ text: s.text, span: null, terms: parsed.terms[i]!, words: parsed.words[i]!.length }));
-    if (sentences.length === 0) return 'The abstract text has no sentences to check.';
+    const sentences = parsed.doc.sentences.map((s, i) => ({ sentence: null, text: s.text, span: null, terms: parsed.terms[i]!, words: parsed.words[i]!.length }));
+    if (sentences.length === 0) return { reason: 'emptyAbstract', error: 'The abstract text has no sentences to check.' };
     return { origin: 'text', heading: null, section: null, span: null, sections: new Uint8Array(doc.sections.length), sentences };
   }
 
   const wanted = source?.kind === 'heading' ? source.heading : undefined;
   const index = findAbstractSection(doc, wanted);
-  if (index === null) return wanted === undefined ? NO_ABSTRACT_MESSAGE : missingHeadingMessage(wanted);
+  if (index === null) return wanted === undefined ? { reason: 'noAbstract', error: NO_ABSTRACT_MESSAGE } : { reason: 'missingHeading', error: missingHeadingMessage(wanted) };
   const section = doc.sections[index]!;
   const sections = sectionWithDescendants(doc, index);
   const sentences = doc.sentences
     .filter((s) => sections[s.section] === 1)
-    .map((s) => ({ text: s.text, span: s.span, terms: analyzed.terms[s.index]!, words: analyzed.words[s.index]!.length }));
-  if (sentences.length === 0) return `The section "${section.heading}" has no sentences to check.`;
+    .map((s) => ({ sentence: s.index, text: s.text, span: s.span, terms: analyzed.terms[s.index]!, words: analyzed.words[s.index]!.length }));
+  if (sentences.length === 0) return { reason: 'emptyAbstract', error: `The section "${section.heading}" has no sentences to check.` };
   return { origin: 'section', heading: section.heading, section: index, span: section.span, sections, sentences };
 }

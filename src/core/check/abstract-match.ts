@@ -1,16 +1,16 @@
 /**
  * Matches an abstract against the body it summarizes, sentence by sentence, with the tf-idf cosine
- * of stemmed content terms (term-vectors.ts); idf is counted over the document's sentences.
+ * of stemmed content terms (vectors.ts, 'smoothed' idf counted over the document's sentences, so a
+ * claim that shares only common words still finds its support).
  *   - A body section (balance unit) is covered when its best-matching sentence reaches
  *     `covered` similarity with some abstract sentence.
  *   - An abstract sentence is supported when its best-matching body sentence reaches `supported`.
  */
-import { DEFAULT_OPTIONS } from '../options';
 import { balanceUnits, excludedSections } from '../select/units';
 import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
 import type { LocatedAbstract, AbstractSentence } from './abstract-locator';
 import type { AbstractSentenceCheck, AbstractThresholds, SectionCoverage, UnjudgedSection } from './abstract-report';
-import { idfTable, similarities, termVector, topMatches } from './term-vectors';
+import { buildTermIndex, inverseFrequency, similarities, tfidfVectors, topMatches } from '../vectors';
 
 /**
  * Thresholds, tuned by hand on the demo documents and on every fourth Rust RFC in the shared
@@ -48,21 +48,32 @@ export interface AbstractMatch {
 }
 
 /** Null when the document has no prose outside the abstract. */
-export function matchAbstract(analyzed: AnalyzedDocument, located: LocatedAbstract, thresholds: AbstractThresholds): AbstractMatch | null {
+export function matchAbstract(
+  analyzed: AnalyzedDocument,
+  located: LocatedAbstract,
+  thresholds: AbstractThresholds,
+  excludeHeadings: readonly string[],
+): AbstractMatch | null {
   const body = bodySentences(analyzed, located.sections);
   if (body.length === 0) return null;
 
-  // One idf table for everything compared, so abstract and body weights are on the same scale.
+  // One term index for everything compared, so abstract and body weights are on the same scale:
+  // the document's sentences, then (for an abstract given as separate text) the abstract's.
   const extraTerms = located.origin === 'text' ? located.sentences.map((s) => s.terms) : [];
-  const table = idfTable([...analyzed.terms, ...extraTerms]);
-  const bodyVectors = body.map((i) => termVector(analyzed.terms[i]!, table));
+  const index = buildTermIndex([...analyzed.terms, ...extraTerms]);
+  const vectors = tfidfVectors(index, inverseFrequency(index, 'smoothed'));
+  const bodyVectors = body.map((i) => vectors[i]!);
+  const abstractVectors =
+    located.origin === 'text'
+      ? located.sentences.map((_, k) => vectors[analyzed.terms.length + k]!)
+      : located.sentences.map((s) => vectors[s.sentence!]!);
   // similarity[a][p]: abstract sentence a against body sentence body[p]; computed once, read twice.
-  const similarity = located.sentences.map((s) => similarities(termVector(s.terms, table), bodyVectors));
+  const similarity = abstractVectors.map((v) => similarities(v, bodyVectors));
 
   const units = balanceUnits(analyzed.doc, 1).unitOfSection;
   const sentences = supportOf(analyzed.doc, located.sentences, similarity, body, units, thresholds);
   const skipRoot = opensDocument(analyzed.doc, located.section);
-  const { sections, unjudged } = coverageOf(analyzed, body, similarity, units, skipRoot, thresholds);
+  const { sections, unjudged } = coverageOf(analyzed, body, similarity, units, skipRoot, thresholds, excludeHeadings);
   return { sentences, sections, unjudged };
 }
 
@@ -135,10 +146,11 @@ function coverageOf(
   units: Int32Array,
   skipRoot: boolean,
   thresholds: AbstractThresholds,
+  excludeHeadings: readonly string[],
 ): { sections: SectionCoverage[]; unjudged: UnjudgedSection[] } {
   const { doc } = analyzed;
   // Reference lists and change logs are not prose an abstract is expected to cover.
-  const excluded = excludedSections(doc, DEFAULT_OPTIONS.excludeHeadings);
+  const excluded = excludedSections(doc, excludeHeadings);
   const members = new Map<number, number[]>(); // unit → positions in `body`
   body.forEach((sentenceIndex, position) => {
     const section = doc.sentences[sentenceIndex]!.section;

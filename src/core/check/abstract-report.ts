@@ -122,8 +122,12 @@ export interface AbstractCheck {
   readonly notices: readonly string[];
 }
 
+/** Why no check was made: `noAbstract` when the document has no abstract section to find (the caller says how to name one). */
+export type AbstractCheckFailure = 'noAbstract' | 'missingHeading' | 'emptyAbstract' | 'noBody' | 'refused';
+
 export interface AbstractCheckError {
   readonly ok: false;
+  readonly reason: AbstractCheckFailure;
   readonly error: string;
 }
 

@@ -10,13 +10,9 @@
  * flagged, and a claim that reuses the body's words with a changed number passes. The report says
  * "may", and shows the evidence so a person can judge.
  */
-import { analyze, resolveLanguage } from '../analyze';
-import { inputProblem } from '../input-guard';
-import { DEFAULT_OPTIONS, resolveOptions } from '../options';
-import { parseDocument } from '../parse/index';
-import { rankWith } from '../ranking';
-import { summarizeRanked } from '../summarize';
-import type { AnalyzedDocument, DocumentFormat } from '../types';
+import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOptions } from '../options/resolve';
+import { finishSummary, prepareDocument, rankPrepared, type PreparedDocument } from '../summarize';
+import type { DocumentFormat } from '../types';
 import { locateAbstract, type LocatedAbstract } from './abstract-locator';
 import { ABSTRACT_CHECK_DEFAULTS, matchAbstract } from './abstract-match';
 import type { AbstractCheck, AbstractReport, AbstractRougeComparison, AbstractSource, AbstractThresholds } from './abstract-report';
@@ -25,32 +21,32 @@ import { compareWithSummary } from './abstract-rouge';
 export type { AbstractReport, AbstractSource } from './abstract-report';
 export { ABSTRACT_CHECK_DEFAULTS } from './abstract-match';
 
-export interface CheckAbstractOptions {
-  readonly format: DocumentFormat;
+/** The same options as a summary (size cap, excluded headings, tables, language), plus where the abstract is. */
+export interface CheckAbstractRequest extends SummaryRequestOptions {
+  readonly format?: DocumentFormat;
   /** Default: the first section headed Summary, Abstract, TL;DR (or, failing those, Overview). */
   readonly abstract?: AbstractSource;
-  /** 'auto' (default) or an ISO 639-1 code. */
-  readonly language?: string;
   readonly thresholds?: Partial<AbstractThresholds>;
 }
 
-export function checkAbstract(documentText: string, options: CheckAbstractOptions): AbstractReport {
-  const thresholds = { ...ABSTRACT_CHECK_DEFAULTS, ...validThresholds(options.thresholds) };
-  const problem = inputProblem(documentText, DEFAULT_OPTIONS.maxChars);
-  if (problem !== null) return { ok: false, error: problem };
-  const doc = parseDocument(documentText, { format: options.format });
-  const language = resolveLanguage(doc, options.language ?? 'auto');
-  const analyzed = analyze(doc, language);
+/** Throws OptionsError when an option is invalid, as `summarize` does. */
+export function checkAbstract(documentText: string, request: CheckAbstractRequest = {}): AbstractReport {
+  const thresholds = { ...ABSTRACT_CHECK_DEFAULTS, ...validThresholds(request.thresholds) };
+  const { abstract, thresholds: _thresholds, ...summaryRequest } = request;
+  const preparation = prepareDocument(documentText, summaryRequest);
+  if (!preparation.ok) return { ok: false, reason: 'refused', error: preparation.refused.refused ?? 'The document was not read.' };
+  const { prepared } = preparation;
+  const { analyzed, options } = prepared;
 
-  const located = locateAbstract(analyzed, options.abstract, language);
-  if (typeof located === 'string') return { ok: false, error: located };
+  const located = locateAbstract(analyzed, abstract, analyzed.language);
+  if ('error' in located) return { ok: false, reason: located.reason, error: located.error };
 
-  const match = matchAbstract(analyzed, located, thresholds);
-  if (match === null) return { ok: false, error: 'The document has no prose outside the abstract to check it against.' };
+  const match = matchAbstract(analyzed, located, thresholds, options.excludeHeadings);
+  if (match === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
   const { sentences, sections, unjudged } = match;
 
   const notices: string[] = [];
-  const rouge = rougeComparison(analyzed, located, notices);
+  const rouge = rougeComparison(prepared, located, notices);
 
   const result: AbstractCheck = {
     ok: true,
@@ -86,18 +82,16 @@ function validThresholds(partial: Partial<AbstractThresholds> | undefined): Part
 }
 
 /** Tersely's own summary at the abstract's length, compared with the abstract both ways. */
-function rougeComparison(analyzed: AnalyzedDocument, located: LocatedAbstract, notices: string[]): AbstractRougeComparison | null {
+function rougeComparison(prepared: PreparedDocument, located: LocatedAbstract, notices: string[]): AbstractRougeComparison | null {
+  const { analyzed } = prepared;
   const words = located.sentences.reduce((sum, s) => sum + s.words, 0);
   // The summary must not simply copy the abstract back, so the abstract section is left out.
-  const excludeHeadings = located.heading === null ? DEFAULT_OPTIONS.excludeHeadings : [...DEFAULT_OPTIONS.excludeHeadings, located.heading];
-  const options = resolveOptions({
-    language: analyzed.language,
-    budget: { unit: 'words', value: Math.max(1, words) },
-    minSentences: 1,
-    excludeHeadings,
-  });
+  const excludeHeadings = located.heading === null ? prepared.options.excludeHeadings : [...prepared.options.excludeHeadings, located.heading];
+  const checked = checkOptions({ budget: { unit: 'words', value: Math.max(1, words) }, minSentences: 1 });
+  if (checked.problems.length > 0) throw new OptionsError(checked.problems);
+  const options: SummaryOptions = { ...prepared.options, budget: checked.options.budget, minSentences: 1, excludeHeadings };
   // Reuses the parse already made: summarize() would parse the whole document a second time.
-  const summary = summarizeRanked(analyzed, rankWith(options.method, analyzed, options), options);
+  const summary = finishSummary(prepared, rankPrepared(prepared), options);
   if (summary.sentences.length === 0) {
     notices.push('No comparison summary: the document has no sentences outside the abstract to pick.');
     return null;

@@ -3,7 +3,8 @@
  * reference, the rest of the document the body to summarize. Used by the quality benchmark and by
  * training, so both read documents the same way.
  */
-import { parseDocument } from '../parse/index';
+import { sameHeading } from '../text/headings';
+import { parseDocument } from '../formats/registry';
 import type { DocumentFormat, ParsedDocument, Section } from '../types';
 
 export interface ReferenceSplit {
@@ -16,10 +17,6 @@ export interface ReferenceSplit {
 }
 
 /** Headings compare case-insensitively, ignoring surrounding space and a trailing colon. */
-export function sameHeading(a: string, b: string): boolean {
-  const clean = (s: string) => s.trim().replace(/:$/, '').trim().toLowerCase();
-  return clean(a) === clean(b);
-}
 
 /** The first section headed `heading`, split off; null when there is none. */
 export function splitReference(

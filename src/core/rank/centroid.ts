@@ -10,7 +10,7 @@
  * favours long sentences — the cosine removes that length bias.
  */
 import type { AnalyzedDocument, RankResult } from '../types';
-import { cosine, inverseSentenceFrequency, makeVector, termIndexOf, tfidfVectors, type SparseVector } from './sparse-vectors';
+import { cosine, inverseFrequency, makeVector, sentenceVectorsOf, termIndexOf, type SparseVector } from '../vectors';
 
 export interface CentroidSettings {
   /** How many of the largest centroid terms to keep; Infinity keeps them all. */
@@ -30,7 +30,7 @@ export interface CentroidOptions {
 export function documentCentroid(a: AnalyzedDocument, settings: CentroidSettings = CENTROID_DEFAULTS): SparseVector {
   const index = termIndexOf(a);
   const n = index.counts.length;
-  const idf = inverseSentenceFrequency(index);
+  const idf = inverseFrequency(index, 'sentence');
   const entries: { id: number; value: number }[] = [];
   idf.forEach((weight, id) => {
     const value = (weight * index.totalCount[id]!) / n;
@@ -45,8 +45,7 @@ export function centroidRank(a: AnalyzedDocument, options: CentroidOptions = {})
   const settings: CentroidSettings = { ...CENTROID_DEFAULTS, ...options.centroid };
   const n = a.terms.length;
   if (n === 1) return { scores: Float64Array.of(1), features: { centroid: Float64Array.of(1) } };
-  const index = termIndexOf(a);
-  const vectors = tfidfVectors(index, inverseSentenceFrequency(index));
+  const vectors = sentenceVectorsOf(a);
   const centroid = documentCentroid(a, settings);
   // A zero centroid (empty document, or every term in every sentence) leaves all scores at 0.
   const scores = Float64Array.from(vectors, (vector) => cosine(vector, centroid));

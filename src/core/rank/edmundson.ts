@@ -14,6 +14,7 @@
  * He found cue + title + location best and key weakest (from memory); key is kept with a lower
  * weight because Markdown documents rarely carry enough cue words to rank on their own.
  */
+import { headingClassesOf, type HeadingClass } from '../text/headings';
 import type { AnalyzedDocument, CueWords, RankResult } from '../types';
 import { isProseBlock } from './position';
 
@@ -31,8 +32,8 @@ export interface EdmundsonSettings {
   /** Weight of a title word; Edmundson weighted title words above heading words (from memory). */
   readonly titleWordWeight: number;
   readonly headingWordWeight: number;
-  /** Heading words that mark a summarising section (matched against the heading's lower-cased words). */
-  readonly locationHeadings: readonly string[];
+  /** Kinds of heading (text/headings.ts) that mark a section stating the problem or the proposal. */
+  readonly locationClasses: readonly HeadingClass[];
   /** When false, only the caller's cue words are used. */
   readonly useDefaultCueWords: boolean;
 }
@@ -48,7 +49,7 @@ export const EDMUNDSON_DEFAULTS: EdmundsonSettings = {
   keyMinCount: 2,
   titleWordWeight: 2,
   headingWordWeight: 1,
-  locationHeadings: ['abstract', 'introduction', 'overview', 'summary', 'purpose', 'motivation', 'background', 'conclusion', 'conclusions', 'results', 'findings', 'discussion'],
+  locationClasses: ['abstract', 'introduction', 'proposal'],
   useDefaultCueWords: true,
 };
 
@@ -135,10 +136,9 @@ export function titleComponent(a: AnalyzedDocument, titleWordWeight = EDMUNDSON_
   });
 }
 
-export function locationComponent(a: AnalyzedDocument, locationHeadings: readonly string[]): Float64Array {
+export function locationComponent(a: AnalyzedDocument, locationClasses: readonly HeadingClass[]): Float64Array {
   const { doc } = a;
-  const wanted = new Set(locationHeadings.map((w) => w.toLowerCase()));
-  const summarising = doc.sections.map((section) => section.heading.toLowerCase().split(/[^\p{L}\p{N}]+/u).some((w) => wanted.has(w)));
+  const summarising = doc.sections.map((section) => headingClassesOf(section.heading).some((c) => locationClasses.includes(c)));
   const withSentences = doc.paragraphs.filter((p) => p.sentences.length > 0);
   const firstParagraph = withSentences[0]?.index ?? -1;
   const lastParagraph = withSentences.length > 1 ? withSentences[withSentences.length - 1]!.index : -1;
@@ -168,7 +168,7 @@ export function edmundsonRank(a: AnalyzedDocument, options: EdmundsonOptions = {
     cue: scaleByMaxAbs(cueComponent(a, cues)),
     key: scaleByMaxAbs(keyComponent(a, settings.keyMinCount)),
     title: scaleByMaxAbs(titleComponent(a, settings.titleWordWeight, settings.headingWordWeight)),
-    location: scaleByMaxAbs(locationComponent(a, settings.locationHeadings)),
+    location: scaleByMaxAbs(locationComponent(a, settings.locationClasses)),
   };
   const { weights } = settings;
   const scores = features.cue.map(

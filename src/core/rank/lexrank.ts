@@ -19,7 +19,7 @@
 import type { AnalyzedDocument, RankResult } from '../types';
 import { pageRank, PAGERANK_DEFAULTS, trivialRanking, type PageRankSettings } from './power-iteration';
 import { GRAPH_BUDGET_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphBudget } from './similarity-graph';
-import { inverseSentenceFrequency, termIndexOf, tfidfVectors } from './sparse-vectors';
+import { sentenceVectorsOf, termIndexOf } from '../vectors';
 
 export type LexRankVariant = 'threshold' | 'continuous';
 
@@ -43,7 +43,8 @@ export interface LexRankOptions {
 /** The sentence graph LexRank walks; exported so tests can hand the same graph to a reference PageRank. */
 export function lexRankGraph(a: AnalyzedDocument, settings: LexRankSettings = LEXRANK_DEFAULTS): CsrGraph {
   const index = termIndexOf(a);
-  const vectors = tfidfVectors(index, inverseSentenceFrequency(index));
+  // LexRank's idf-modified cosine: tf·idf with idf = log(N / sf), the 'sentence' variant.
+  const vectors = sentenceVectorsOf(a);
   // Same value as cosine(vectors[i], vectors[j]), from the accumulated dot product.
   const cosineOf = (i: number, j: number, dot: number) => Math.min(1, dot / (vectors[i]!.norm * vectors[j]!.norm));
   if (settings.variant === 'continuous') return similarityGraph(vectors, index.vocabulary.size, cosineOf, 0, settings);

@@ -18,7 +18,7 @@
  * analyzer): 4.8 M pair visits; 0.8 M links at LexRank's 0.1 threshold (exact), 4.1 M links with
  * any overlap (continuous LexRank and TextRank keep the strongest 2 M). Budget values: ours.
  */
-import { dot, invertedIndex, makeVector, type SparseVector } from './sparse-vectors';
+import { dot, invertedIndex, makeVector, type SparseVector } from '../vectors';
 
 export const GRAPH_BUDGET_DEFAULTS = {
   maxPairVisits: 10_000_000,

@@ -16,7 +16,7 @@
 import type { AnalyzedDocument, RankResult } from '../types';
 import { pageRank, PAGERANK_DEFAULTS, trivialRanking, type PageRankSettings } from './power-iteration';
 import { GRAPH_BUDGET_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphBudget } from './similarity-graph';
-import { presenceVectors, termIndexOf } from './sparse-vectors';
+import { presenceVectors, termIndexOf } from '../vectors';
 
 export interface TextRankSettings extends PageRankSettings, GraphBudget {
   /** Smallest allowed denominator of the overlap similarity. */

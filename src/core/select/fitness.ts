@@ -4,6 +4,7 @@
  * ("Driver acceptance.") says little without its paragraph. Such lines are demoted, not banned,
  * so a document made only of them still gets a summary.
  */
+import { minMax } from '../scale';
 import type { AnalyzedDocument } from '../types';
 
 export const FITNESS_DEFAULTS = {
@@ -23,15 +24,12 @@ export function sentenceFitness(a: AnalyzedDocument, settings = FITNESS_DEFAULTS
   return fitness;
 }
 
-/** Ranker scores scaled to [0, 1] and multiplied by fitness; the order among fit sentences is unchanged. */
-export function applyFitness(scores: Float64Array, fitness: Float64Array): Float64Array {
-  let min = Infinity;
-  let max = -Infinity;
-  for (const s of scores) {
-    if (!Number.isFinite(s)) continue;
-    if (s < min) min = s;
-    if (s > max) max = s;
-  }
-  const range = max - min;
-  return scores.map((s, i) => (Number.isFinite(s) ? (range > 0 ? (s - min) / range : 1) : 0) * (fitness[i] ?? 1));
+/**
+ * What the selector compares: ranker scores scaled to [0, 1] over the candidates (scale.ts, once)
+ * and multiplied by fitness; the order among equally fit sentences is the ranker's.
+ */
+export function summaryRelevance(scores: Float64Array, fitness: Float64Array, candidates: readonly number[]): Float64Array {
+  const relevance = minMax(scores, candidates);
+  for (const i of candidates) relevance[i] = relevance[i]! * (fitness[i] ?? 1);
+  return relevance;
 }

@@ -2,45 +2,24 @@
  * Redundancy tracking for Maximal Marginal Relevance (Carbonell & Goldstein 1998):
  * keeps, for every sentence, its highest cosine similarity to any sentence picked so far.
  *
- * Adding a pick walks only the postings of the pick's own terms (an inverted index), so the
- * cost is proportional to the overlap, never to n²: a 1 MB document stays fast and small.
+ * Sentences are compared in the same tf·idf space LexRank and the centroid use (vectors.ts).
+ * Adding a pick walks only the postings of the pick's own terms (an inverted index), so the cost is
+ * proportional to the overlap, never to n²: a 1 MB document stays fast and small.
  */
+import { invertedIndex, type InvertedIndex, type SparseVector } from '../vectors';
+
 export class RedundancyTracker {
   private readonly maxSim: Float64Array;
   private readonly accumulator: Float64Array;
-  private readonly postings = new Map<string, { sentences: number[]; weights: number[] }>();
-  private readonly vectors: { terms: string[]; weights: Float64Array }[];
+  private readonly postings: InvertedIndex;
 
-  constructor(terms: readonly (readonly string[])[]) {
-    const n = terms.length;
-    this.maxSim = new Float64Array(n);
-    this.accumulator = new Float64Array(n);
-    const documentFrequency = new Map<string, number>();
-    for (const sentenceTerms of terms) {
-      for (const term of new Set(sentenceTerms)) documentFrequency.set(term, (documentFrequency.get(term) ?? 0) + 1);
-    }
-    this.vectors = terms.map((sentenceTerms, sentence) => {
-      const counts = new Map<string, number>();
-      for (const term of sentenceTerms) counts.set(term, (counts.get(term) ?? 0) + 1);
-      const unique = [...counts.keys()];
-      const weights = new Float64Array(unique.length);
-      let norm = 0;
-      unique.forEach((term, k) => {
-        const idf = Math.log(n / (documentFrequency.get(term) ?? 1)) + 1;
-        const w = (counts.get(term) ?? 0) * idf;
-        weights[k] = w;
-        norm += w * w;
-      });
-      norm = Math.sqrt(norm) || 1;
-      unique.forEach((term, k) => {
-        weights[k] = weights[k]! / norm;
-        let list = this.postings.get(term);
-        if (!list) this.postings.set(term, (list = { sentences: [], weights: [] }));
-        list.sentences.push(sentence);
-        list.weights.push(weights[k]!);
-      });
-      return { terms: unique, weights };
-    });
+  constructor(
+    private readonly vectors: readonly SparseVector[],
+    vocabularySize: number,
+  ) {
+    this.maxSim = new Float64Array(vectors.length);
+    this.accumulator = new Float64Array(vectors.length);
+    this.postings = invertedIndex(vectors, vocabularySize);
   }
 
   /** Highest cosine similarity of `sentence` to any pick so far (0 before the first pick). */
@@ -50,19 +29,21 @@ export class RedundancyTracker {
 
   addPick(sentence: number): void {
     const vector = this.vectors[sentence];
-    if (!vector) return;
+    if (!vector || vector.norm === 0) return;
+    const { offsets, sentences, values } = this.postings;
     const touched: number[] = [];
-    vector.terms.forEach((term, k) => {
-      const list = this.postings.get(term)!;
-      const w = vector.weights[k]!;
-      for (let p = 0; p < list.sentences.length; p++) {
-        const other = list.sentences[p]!;
+    vector.ids.forEach((id, k) => {
+      const w = vector.values[k]!;
+      for (let p = offsets[id]!; p < offsets[id + 1]!; p++) {
+        const other = sentences[p]!;
         if (this.accumulator[other] === 0) touched.push(other);
-        this.accumulator[other] = this.accumulator[other]! + w * list.weights[p]!;
+        this.accumulator[other] = this.accumulator[other]! + w * values[p]!;
       }
     });
     for (const other of touched) {
-      if (this.accumulator[other]! > this.maxSim[other]!) this.maxSim[other] = this.accumulator[other]!;
+      // Rounding can push identical vectors a hair above 1.
+      const similarity = Math.min(1, this.accumulator[other]! / (vector.norm * this.vectors[other]!.norm));
+      if (similarity > this.maxSim[other]!) this.maxSim[other] = similarity;
       this.accumulator[other] = 0;
     }
   }

@@ -7,14 +7,19 @@
 import { apportionHamilton } from './apportion';
 import { RedundancyTracker } from './redundancy';
 import type { Budget } from '../types';
+import type { SparseVector } from '../vectors';
 
 export interface SelectionInput {
-  /** Ranker scores, one per sentence. */
-  readonly scores: Float64Array;
+  /**
+   * How good a summary line each sentence is, in [0, 1] over the candidates (ranker scores scaled
+   * once and multiplied by sentence fitness; see fitness.ts), so λ means the same for every ranker.
+   */
+  readonly relevance: Float64Array;
   /** Word count of each sentence. */
   readonly wordCounts: readonly number[];
-  /** Stemmed content terms of each sentence (for redundancy). */
-  readonly terms: readonly (readonly string[])[];
+  /** Term vectors of the sentences and the size of their vocabulary (for redundancy). */
+  readonly vectors: readonly SparseVector[];
+  readonly vocabularySize: number;
   /** Balance unit of each sentence, or -1 when the sentence is not a candidate. */
   readonly unitOf: Int32Array;
   /** Weight of each balance unit (index = unit id); used only when balancing. */
@@ -67,7 +72,7 @@ function limitsFor(input: SelectionInput, candidateCount: number, candidateWords
 }
 
 export function selectSentences(input: SelectionInput): Selection {
-  const n = input.scores.length;
+  const n = input.relevance.length;
   const candidates: number[] = [];
   let candidateWords = 0;
   for (let i = 0; i < n; i++) {
@@ -79,8 +84,8 @@ export function selectSentences(input: SelectionInput): Selection {
   const limits = limitsFor(input, candidates.length, candidateWords);
   if (candidates.length === 0 || limits.maxSentences === 0) return { picked: [], quotas: new Map(), wordLimit: limits.wordLimit };
 
-  const relevance = normalizedRelevance(input.scores, candidates);
-  const tracker = new RedundancyTracker(input.terms);
+  const relevance = input.relevance;
+  const tracker = new RedundancyTracker(input.vectors, input.vocabularySize);
   const picked = new Set<number>();
   const perUnit = new Map<number, number>();
   let words = 0;
@@ -168,22 +173,4 @@ function planQuotas(input: SelectionInput, candidates: readonly number[], limits
     input.minPerSection,
   );
   return new Map(units.map((u, k) => [u, allocation[k]!]));
-}
-
-/** Min-max scaled scores over the candidates, so λ means the same for every ranker. */
-function normalizedRelevance(scores: Float64Array, candidates: readonly number[]): Float64Array {
-  let min = Infinity;
-  let max = -Infinity;
-  for (const i of candidates) {
-    const s = Number.isFinite(scores[i]!) ? scores[i]! : 0;
-    if (s < min) min = s;
-    if (s > max) max = s;
-  }
-  const out = new Float64Array(scores.length);
-  const range = max - min;
-  for (const i of candidates) {
-    const s = Number.isFinite(scores[i]!) ? scores[i]! : 0;
-    out[i] = range > 0 ? (s - min) / range : 1;
-  }
-  return out;
 }

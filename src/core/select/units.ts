@@ -3,6 +3,7 @@
  * depth roll up into their ancestor; text before the first section heading (and directly under a
  * lone title) forms the root unit.
  */
+import { normalizeHeading } from '../text/headings';
 import type { ParsedDocument, Section } from '../types';
 
 export interface BalanceUnits {
@@ -42,23 +43,20 @@ function unitFor(sections: readonly Section[], section: Section, topDepth: numbe
   return 0;
 }
 
-/** Headings compared without numbering, punctuation or case: "7. References" matches "references". */
-export function normalizeHeading(heading: string): string {
-  return heading
-    .toLowerCase()
-    .replace(/^\s*(?:\d+(?:\.\d+)*\.?|[ivxlc]+\.)\s+/u, '')
-    .replace(/[^\p{L}\p{N}]+/gu, ' ')
-    .trim();
-}
-
-/** Sections whose own heading, or an ancestor's, is in the exclusion list. */
+/**
+ * Sections whose own heading, or an ancestor's, is in the exclusion list (whole heading, numbering,
+ * case and punctuation ignored). The document's title is never excluded: a document titled
+ * "Changelog" is a change log to summarize, not a section to leave out.
+ */
 export function excludedSections(doc: ParsedDocument, excludeHeadings: readonly string[]): Uint8Array {
   const excluded = new Uint8Array(doc.sections.length);
   if (excludeHeadings.length === 0) return excluded;
   const names = new Set(excludeHeadings.map(normalizeHeading));
+  const topDepth = topSectionDepth(doc);
   for (const section of doc.sections) {
     const parentExcluded = section.parent !== null && excluded[section.parent] === 1;
-    if (parentExcluded || (section.depth > 0 && names.has(normalizeHeading(section.heading)))) excluded[section.index] = 1;
+    const isTitle = section.depth > 0 && section.depth < topDepth;
+    if (parentExcluded || (section.depth > 0 && !isTitle && names.has(normalizeHeading(section.heading)))) excluded[section.index] = 1;
   }
   return excluded;
 }

@@ -25,6 +25,7 @@ import { spa } from 'stopword/src/stopwords_spa.js';
 import { swe } from 'stopword/src/stopwords_swe.js';
 import { ukr } from 'stopword/src/stopwords_ukr.js';
 import { zho } from 'stopword/src/stopwords_zho.js';
+import type { LanguageCode } from './language-codes';
 import porterDe from 'natural/lib/natural/stemmers/porter_stemmer_de.js';
 import porterEn from 'natural/lib/natural/stemmers/porter_stemmer.js';
 import porterEs from 'natural/lib/natural/stemmers/porter_stemmer_es.js';
@@ -43,7 +44,7 @@ export type Script = 'latin' | 'cyrillic' | 'arabic' | 'han' | 'kana' | 'hangul'
 
 export interface Language {
   /** ISO 639-1 code. */
-  readonly code: string;
+  readonly code: LanguageCode;
   readonly script: Script;
   readonly stopWords: readonly string[];
   /** null: no stemmer available (natural's Polish stemmer, for one, returns words unchanged). */
@@ -94,7 +95,7 @@ export const LANGUAGES: readonly Language[] = [
   { code: 'ko', script: 'hangul', stopWords: kor, stem: null },
 ];
 
-const BY_CODE = new Map(LANGUAGES.map((language) => [language.code, language]));
+const BY_CODE: ReadonlyMap<string, Language> = new Map(LANGUAGES.map((language) => [language.code, language]));
 
 /** The language for an ISO 639-1 code (region suffixes such as "en-GB" ignored), or undefined. */
 export function languageFor(code: string): Language | undefined {

@@ -2,10 +2,11 @@
  * Word tokens, stop words, stems and content terms: the token views every ranker shares.
  */
 
+import { LANGUAGE_CODES } from './language-codes';
 import { LANGUAGES, languageFor, type Language, type Script } from './languages';
 
 /** ISO 639-1 codes the engine has stop words for (stemming where `natural` has a stemmer). */
-export const SUPPORTED_LANGUAGES: readonly string[] = LANGUAGES.map((language) => language.code);
+export const SUPPORTED_LANGUAGES: readonly string[] = LANGUAGE_CODES;
 
 /**
  * A word: letters, marks and digits, joined across an inner apostrophe, hyphen or period
@@ -189,4 +190,9 @@ function mostStopWords(tokens: readonly string[], candidates: readonly Language[
     }
   }
   return bestCode;
+}
+
+/** Words in a text, counted the way every figure in a summary counts them (the word tokens above). */
+export function countWords(text: string): number {
+  return wordTokens(text).length;
 }

@@ -1,0 +1,30 @@
+/** Binds every format of catalog.ts to its reader. */
+import type { DocumentFormat, ParsedDocument } from '../types';
+import { parseMarkdown } from './markdown/markdown';
+import { parsePlainText } from './plaintext/plaintext';
+
+export interface ReadOptions {
+  /** Offset of the text in the whole document (for a selection); every span includes it. */
+  readonly baseOffset: number;
+  /** Read table cells as paragraphs instead of skipping tables. */
+  readonly includeTables: boolean;
+}
+
+export type Reader = (text: string, options: ReadOptions) => ParsedDocument;
+
+const READERS: Readonly<Record<DocumentFormat, Reader>> = {
+  markdown: parseMarkdown,
+  plaintext: (text, options) => parsePlainText(text, { baseOffset: options.baseOffset }),
+};
+
+export interface ParseOptions {
+  readonly format: DocumentFormat;
+  readonly baseOffset?: number;
+  readonly includeTables?: boolean;
+}
+
+export function parseDocument(text: string, options: ParseOptions): ParsedDocument {
+  const read = READERS[options.format];
+  if (!read) throw new Error(`unknown document format "${String(options.format)}"`);
+  return read(text, { baseOffset: options.baseOffset ?? 0, includeTables: options.includeTables ?? false });
+}

@@ -1,0 +1,4 @@
+export * from './kinds';
+export * from './length';
+export * from './schema';
+export * from './resolve';

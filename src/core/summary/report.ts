@@ -1,0 +1,132 @@
+/**
+ * Turns a selection into the `Summary` callers see: picked sentences with their section path,
+ * rank and the features behind the score; figures; each balance unit's share of document and summary.
+ */
+import type { SummaryOptions } from '../options/resolve';
+import type { Candidates } from '../select/units';
+import { sectionPath } from './sections';
+import type {
+  AnalyzedDocument,
+  PickedSentence,
+  RankResult,
+  SectionShare,
+  StandAloneWarning,
+  Summary,
+} from '../types';
+
+/** Silent reading speed for "reads in about N min" (common practice, no source). */
+export const WORDS_PER_MINUTE = 230;
+
+export function minutesToRead(words: number): number {
+  return words / WORDS_PER_MINUTE;
+}
+
+export interface ReportInput {
+  readonly analyzed: AnalyzedDocument;
+  readonly ranked: RankResult;
+  readonly options: SummaryOptions;
+  /** Picked sentence indices in document order. */
+  readonly picked: readonly number[];
+  /** Word count of each sentence, as the selector counted them. */
+  readonly wordCounts: readonly number[];
+  /** Balance unit of each sentence (-1 = not a candidate) and each unit's content words. */
+  readonly candidates: Candidates;
+  readonly quotas: ReadonlyMap<number, number>;
+  /** Display text for sentences edited by a repair. */
+  readonly edited?: ReadonlyMap<number, string>;
+  readonly warnings?: readonly StandAloneWarning[];
+  readonly notices?: readonly string[];
+}
+
+export function describeSummary(input: ReportInput): Summary {
+  const { analyzed, ranked, options, picked, wordCounts } = input;
+  const { unitOf, unitWeights: unitWords } = input.candidates;
+  const { doc } = analyzed;
+  const ranks = rankOrder(ranked.scores, unitOf);
+
+  const sentences: PickedSentence[] = picked.map((i) => {
+    const sentence = doc.sentences[i]!;
+    const editedText = input.edited?.get(i);
+    return {
+      sentence: i,
+      text: editedText ?? sentence.text,
+      span: sentence.span,
+      sectionPath: sectionPath(doc, sentence.section),
+      section: sentence.section,
+      score: ranked.scores[i] ?? 0,
+      rank: ranks[i] ?? 0,
+      features: featuresOf(ranked, i),
+      ...(editedText !== undefined ? { edited: { reason: 'leading connective removed' } } : {}),
+    };
+  });
+
+  const unitPickedWords = new Map<number, number>();
+  const unitPicked = new Map<number, number>();
+  let candidateWords = 0;
+  for (const words of unitWords.values()) candidateWords += words;
+  let wordsOut = 0;
+  for (const i of picked) {
+    const unit = unitOf[i]!;
+    wordsOut += wordCounts[i]!;
+    unitPicked.set(unit, (unitPicked.get(unit) ?? 0) + 1);
+    unitPickedWords.set(unit, (unitPickedWords.get(unit) ?? 0) + wordCounts[i]!);
+  }
+  const wordsIn = wordCounts.reduce((a, b) => a + b, 0);
+
+  const shares: SectionShare[] = [...unitWords.keys()]
+    .sort((a, b) => a - b)
+    .map((unit) => ({
+      section: unit,
+      heading: unit === 0 ? doc.title ?? '' : doc.sections[unit]!.heading,
+      documentShare: candidateWords > 0 ? unitWords.get(unit)! / candidateWords : 0,
+      summaryShare: wordsOut > 0 ? (unitPickedWords.get(unit) ?? 0) / wordsOut : 0,
+      picked: unitPicked.get(unit) ?? 0,
+      quota: input.quotas.get(unit) ?? 0,
+    }));
+
+  const notices = [...(input.notices ?? [])];
+  if (doc.sentences.length === 0) notices.push('No prose sentences were found (headings, code, tables and lists of links are not summarized).');
+
+  return {
+    document: doc,
+    method: options.method,
+    language: analyzed.language,
+    sentences,
+    shares,
+    stats: {
+      wordsIn,
+      wordsOut,
+      compression: wordsIn > 0 ? wordsOut / wordsIn : 0,
+      sentencesIn: doc.sentences.length,
+      sentencesOut: picked.length,
+      sectionsCovered: shares.filter((s) => s.picked > 0).length,
+      sectionsWithContent: shares.length,
+      minutesToRead: minutesToRead(wordsOut),
+      documentMinutesToRead: minutesToRead(wordsIn),
+    },
+    ranking: {
+      ...(ranked.converged !== undefined ? { converged: ranked.converged } : {}),
+      ...(ranked.iterations !== undefined ? { iterations: ranked.iterations } : {}),
+    },
+    warnings: input.warnings ?? [],
+    notices,
+  };
+}
+
+/** 1-based rank of every candidate by score (ties broken by document order); 0 for non-candidates. */
+function rankOrder(scores: Float64Array, unitOf: Int32Array): Int32Array {
+  const order: number[] = [];
+  for (let i = 0; i < scores.length; i++) if (unitOf[i]! >= 0) order.push(i);
+  order.sort((a, b) => scores[b]! - scores[a]! || a - b);
+  const ranks = new Int32Array(scores.length);
+  order.forEach((sentence, k) => {
+    ranks[sentence] = k + 1;
+  });
+  return ranks;
+}
+
+function featuresOf(ranked: RankResult, i: number): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const [name, values] of Object.entries(ranked.features ?? {})) out[name] = values[i] ?? 0;
+  return out;
+}
