@@ -15,8 +15,12 @@ export class InputError extends Error {}
 
 const MARKDOWN_EXTENSIONS = new Set(['.md', '.markdown', '.mdown', '.mkd', '.mdx']);
 
+const RESTRUCTUREDTEXT_EXTENSIONS = new Set(['.rst', '.rest']);
+
 export function formatForPath(path: string): DocumentFormat {
-  return MARKDOWN_EXTENSIONS.has(extname(path).toLowerCase()) ? 'markdown' : 'plaintext';
+  const extension = extname(path).toLowerCase();
+  if (RESTRUCTUREDTEXT_EXTENSIONS.has(extension)) return 'restructuredtext';
+  return MARKDOWN_EXTENSIONS.has(extension) ? 'markdown' : 'plaintext';
 }
 
 async function readStdin(): Promise<Buffer> {

@@ -21,7 +21,7 @@ export interface SummarizeRequest extends Partial<Record<keyof SummaryOptions, u
 
 export function summarize(text: string, request: SummarizeRequest = {}): Summary {
   const options = resolveOptions(request);
-  const format: DocumentFormat = request.format === 'plaintext' ? 'plaintext' : 'markdown';
+  const format: DocumentFormat = request.format === 'plaintext' || request.format === 'restructuredtext' ? request.format : 'markdown';
   const baseOffset = typeof request.baseOffset === 'number' && request.baseOffset >= 0 ? Math.floor(request.baseOffset) : 0;
 
   const problem = inputProblem(text, options.maxChars);

@@ -3,6 +3,7 @@
  * sentences with exact source spans, and the stretches that were left out.
  */
 
+import { parseRestructuredText } from '../formats/rst/index';
 import type { DocumentFormat, ParsedDocument } from '../types';
 import { parseMarkdown } from './markdown';
 import { parsePlainText } from './plaintext';
@@ -19,6 +20,9 @@ export function parseDocument(text: string, options: ParseOptions): ParsedDocume
   const baseOffset = options.baseOffset ?? 0;
   if (options.format === 'markdown') {
     return parseMarkdown(text, { baseOffset, includeTables: options.includeTables ?? false });
+  }
+  if (options.format === 'restructuredtext') {
+    return parseRestructuredText(text, { baseOffset, includeTables: options.includeTables ?? false });
   }
   return parsePlainText(text, { baseOffset });
 }
