@@ -173,11 +173,19 @@ describe('rst: body elements', () => {
 
     it('reads body cells as table cells when tables are included, leaving header rows out', () => {
       assert.deepEqual(texts(rst(grid, { includeTables: true })), ['cell', 'Body cell.', 'two', 'Spans.', 'Two.']);
-      assert.deepEqual(texts(rst(simple, { includeTables: true })), ['one', 'Body cell.', 'two', 'Second row continues.']);
+      // Side-by-side cells over several lines are read line by line, so ranges never overlap.
+      assert.deepEqual(texts(rst(simple, { includeTables: true })), ['one', 'Body cell.', 'two', 'Second row', 'continues.']);
       assert.deepEqual(texts(rst(listTable, { includeTables: true })), ['one', 'List cell.']);
       const csv = rst(csvTable, { includeTables: true });
       assert.deepEqual(texts(csv), ['one', 'CSV cell, quoted.']);
       assert.ok(kinds(csv).every((k) => k === 'tableCell'));
+    });
+
+    it('reads side-by-side grid cells over several lines in reading order, without overlapping ranges', () => {
+      const table = ['+-----------+-----------+', '| Left one  | Right one |', '| left two. | right two |', '+-----------+-----------+'].join('\n');
+      const doc = rst(table, { includeTables: true });
+      assert.deepEqual(texts(doc), ['Left one', 'Right one', 'left two.', 'right two']);
+      // (rst() has checked the span invariant: increasing, non-overlapping ranges.)
     });
 
     it('reports a grid table without a bottom border as malformed', () => {

@@ -1,7 +1,13 @@
 /**
  * Tables: grid tables, simple tables, `list-table` and `csv-table`. Each is found the way the
- * specification delimits it; it is skipped as a whole unless tables are read, in which case every
- * body cell is parsed as body elements and the header rows are left out (labels, not statements).
+ * specification delimits it; it is skipped as a whole unless tables are read, in which case the
+ * header rows are left out (labels, not statements) and the body cells are read:
+ * - `list-table` and `csv-table` cells are stretches of their own in the source: parsed as body
+ *   elements;
+ * - grid and simple table cells sit side by side, so a cell over several lines has the text of
+ *   its neighbours between its lines. Each line of such a cell is read as a paragraph of its own,
+ *   in reading order, so that sentence ranges never overlap (a sentence that wraps inside a cell
+ *   is cut at the line end).
  */
 import type { Block, Spanned, TableBlock } from './blocks';
 import type { BodyParser } from './body-parser';
@@ -39,12 +45,12 @@ export function gridTable(parser: BodyParser, r: Region, i: number, out: Block[]
     }
   }
   if (!parser.settings.includeTables) parser.skip('table', r, i, bottom, out);
-  else out.push(gridCells(parser, r.slice(i, bottom)));
+  else out.push(gridCells(r.slice(i, bottom)));
   return bottom;
 }
 
 /** Finds the cells of a grid table by following each cell's border clockwise from its top-left corner. */
-function gridCells(parser: BodyParser, t: Region): TableBlock {
+function gridCells(t: Region): TableBlock {
   const lines = Array.from({ length: t.length }, (_, k) => t.text(k));
   const headSeparator = lines.findIndex((line) => HEAD_SEPARATOR.test(line));
   if (headSeparator >= 0) lines[headSeparator] = lines[headSeparator]!.replace(/=/g, '-');
@@ -53,19 +59,40 @@ function gridCells(parser: BodyParser, t: Region): TableBlock {
   const at = (row: number, col: number) => lines[row]![col] ?? ' ';
   const done = new Array<number>(right + 1).fill(-1);
   const corners: [number, number][] = [[0, 0]];
-  const cells: Block[][] = [];
+  const lineCells: LineCell[] = [];
   while (corners.length > 0) {
     const [top, left] = corners.shift()!;
     if (top === bottom || left === right || top <= done[left]!) continue;
     const cell = scanCell(at, top, left, bottom, right);
     if (cell === null) continue;
     for (let col = left; col < cell.right; col++) done[col] = cell.bottom - 1;
-    if (top >= headSeparator) cells.push(parser.parse(cellRegion(t, top + 1, cell.bottom, left + 1, cell.right)));
+    if (top >= headSeparator) lineCells.push(...cellLines(cellRegion(t, top + 1, cell.bottom, left + 1, cell.right), top + 1, left));
     corners.push([top, cell.right], [cell.bottom, left]);
     corners.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
   }
   const span = t.span(0, t.length)!;
-  return { kind: 'table', cells, header: headSeparator > 0 ? t.span(0, headSeparator + 1) : null, ...span };
+  return { kind: 'table', cells: inReadingOrder(lineCells), header: headSeparator > 0 ? t.span(0, headSeparator + 1) : null, ...span };
+}
+
+/** One line of a side-by-side cell, with its place in the table (row of the line, left column of the cell). */
+interface LineCell {
+  readonly row: number;
+  readonly col: number;
+  readonly block: Block;
+}
+
+function cellLines(cell: Region, firstRow: number, col: number): LineCell[] {
+  const out: LineCell[] = [];
+  for (let k = 0; k < cell.length; k++) {
+    if (cell.blank(k)) continue;
+    const line = cell.slice(k, k + 1);
+    out.push({ row: firstRow + k, col, block: { kind: 'paragraph', text: { region: line, cut: 0 }, start: line.startOffset(0), end: line.endOffset(0) } });
+  }
+  return out;
+}
+
+function inReadingOrder(cells: LineCell[]): Block[][] {
+  return [...cells].sort((a, b) => a.row - b.row || a.col - b.col).map((c) => [c.block]);
 }
 
 type CellAt = (row: number, col: number) => string;
@@ -145,12 +172,12 @@ export function simpleTable(parser: BodyParser, r: Region, i: number, out: Block
     return to;
   }
   if (!parser.settings.includeTables) parser.skip('table', r, i, end + 1, out);
-  else out.push(simpleCells(parser, r.slice(i, end + 1)));
+  else out.push(simpleCells(r.slice(i, end + 1)));
   return end + 1;
 }
 
 /** Columns come from the top border; a line with an empty first column continues the row above. */
-function simpleCells(parser: BodyParser, t: Region): TableBlock {
+function simpleCells(t: Region): TableBlock {
   const columns: number[] = [];
   for (const m of t.text(0).matchAll(/=+/g)) columns.push(m.index!);
   const borders: number[] = [];
@@ -165,13 +192,13 @@ function simpleCells(parser: BodyParser, t: Region): TableBlock {
     if (current !== undefined && current.to === k && (text.length === 0 || firstCell.length === 0)) current.to = k + 1;
     else if (text.length > 0) rows.push({ header: k < headSeparator, from: k, to: k + 1 });
   }
-  const cells: Block[][] = [];
+  const lineCells: LineCell[] = [];
   for (const row of rows) {
     if (row.header) continue;
-    columns.forEach((left, c) => cells.push(parser.parse(cellRegion(t, row.from, row.to, left, columns[c + 1]))));
+    columns.forEach((left, c) => lineCells.push(...cellLines(cellRegion(t, row.from, row.to, left, columns[c + 1]), row.from, left)));
   }
   const span = t.span(0, t.length)!;
-  return { kind: 'table', cells, header: headSeparator > 0 ? t.span(0, headSeparator + 1) : null, ...span };
+  return { kind: 'table', cells: inReadingOrder(lineCells), header: headSeparator > 0 ? t.span(0, headSeparator + 1) : null, ...span };
 }
 
 function headerRows(parts: DirectiveParts): number {
