@@ -16,8 +16,13 @@ import type { Region } from './source-lines';
 import { gridTable, simpleTable } from './tables';
 import { columnWidth } from './text-width';
 
-/** A paragraph's text ends with an unescaped `::`: a literal block follows. */
-const LITERAL_MARKER = /(?<!\\)(?:\\\\)*::$/;
+/** A paragraph's text ends with an unescaped `::` (an even number of backslashes before it): a literal block follows. */
+function endsWithLiteralMarker(data: string): boolean {
+  if (!data.endsWith('::')) return false;
+  let backslashes = 0;
+  while (data[data.length - 3 - backslashes] === '\\') backslashes++;
+  return backslashes % 2 === 0;
+}
 /** The first character of a quoted literal block (any 7-bit punctuation, repeated on each line). */
 const QUOTE_CHAR = new RegExp(`^${ADORNMENT_CHAR}`);
 /** `--`, `---` or an em dash opening a block quote's attribution. */
@@ -259,7 +264,7 @@ export class BodyParser {
   private paragraph(r: Region, from: number, to: number, out: Block[]): number {
     const lines = r.slice(from, to);
     const data = Array.from({ length: lines.length }, (_, k) => lines.text(k)).join('\n');
-    if (!LITERAL_MARKER.test(data)) {
+    if (!endsWithLiteralMarker(data)) {
       out.push({ kind: 'paragraph', text: { region: lines, cut: 0 }, start: r.startOffset(from), end: r.endOffset(to - 1) });
       return to;
     }

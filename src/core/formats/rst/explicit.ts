@@ -36,9 +36,12 @@ export function explicitMarkup(parser: BodyParser, r: Region, i: number, out: Bl
   return comment(parser, r, i, out);
 }
 
+/** Lines a target's name may run over; a longer block is no target (it keeps the check linear). */
+const MAX_TARGET_NAME_LINES = 50;
+
 function isTarget(block: Region): boolean {
   let joined = '';
-  for (let k = 0; k < block.length; k++) {
+  for (let k = 0; k < Math.min(block.length, MAX_TARGET_NAME_LINES); k++) {
     joined += block.text(k).replace(/\\./g, (e) => `\x00${e[1]}`);
     if (TARGET_NAME.test(joined)) return true;
   }

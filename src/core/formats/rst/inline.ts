@@ -11,7 +11,8 @@
  * The result is a list of pieces (index ranges of the paragraph text) in document order; markup
  * characters, URLs of embedded links and footnote references are simply not in any piece.
  */
-import { CLOSERS, CLOSING_DELIMITERS, DELIMITER, ESCAPE, matchingPair, OPENERS, SIMPLE_NAME } from './patterns';
+import { EndStrings, type EndKind } from './end-strings';
+import { DELIMITER, END_SUFFIX, ESCAPE, matchingPair, OPENERS, SIMPLE_NAME } from './patterns';
 import { roleText } from './roles';
 
 export type PieceKind = 'text' | 'emphasis' | 'strong' | 'literal' | 'interpreted' | 'reference' | 'target' | 'substitution' | 'problematic';
@@ -28,7 +29,7 @@ export interface Piece {
 }
 
 const START = String.raw`(?:^|(?<=\s|[${OPENERS}]|${DELIMITER}))`;
-const END = String.raw`(?:$|(?=\s|[\x00${CLOSING_DELIMITERS}${CLOSERS}]|${DELIMITER}))`;
+const END = END_SUFFIX;
 
 const INITIAL = new RegExp(
   START +
@@ -41,15 +42,6 @@ const INITIAL = new RegExp(
     ')',
   'u',
 );
-
-const END_PATTERNS = {
-  emphasis: new RegExp(String.raw`(?<![\s\x00])(\*)${END}`, 'u'),
-  strong: new RegExp(String.raw`(?<![\s\x00])(\*\*)${END}`, 'u'),
-  literal: new RegExp(String.raw`(?<!\s)(\x60\x60)${END}`, 'u'),
-  target: new RegExp(String.raw`(?<![\s\x00])(\x60)${END}`, 'u'),
-  substitution: new RegExp(String.raw`(?<![\s\x00])(\|_{0,2})${END}`, 'u'),
-  interpreted: new RegExp(String.raw`(?<!(?<!\x00)[\s\x00])(\x60(?<suffix>(?<role>:${SIMPLE_NAME}:)?(?<refend>__?)?))${END}`, 'u'),
-};
 
 /** `text <target>` at the end of a phrase reference: the embedded URI or alias. */
 const EMBEDDED_LINK = /(?:[ \n]+|^)<(?!\s)((?:[^<>]|\x00[<>])+)(?<![\s\x00])>$/;
@@ -84,13 +76,14 @@ interface Step {
 /** The visible pieces of one paragraph (or title, term, cell) text. */
 export function inlinePieces(text: string): Piece[] {
   const w = escapeToPlaceholder(text);
+  const scan: Scan = { w, ends: new EndStrings(w) };
   const out: Piece[] = [];
   let textStart = 0;
   let pos = 0;
   while (pos < w.length) {
     const match = INITIAL.exec(w.slice(pos));
     if (match === null) break;
-    const step = dispatch(w, pos, match);
+    const step = dispatch(scan, pos, match);
     if (step.pieces !== null) {
       let before = step.before;
       if (step.trimBefore) while (before > textStart && /\s/.test(w[before - 1]!)) before--;
@@ -104,18 +97,24 @@ export function inlinePieces(text: string): Piece[] {
   return out;
 }
 
-function dispatch(w: string, pos: number, match: RegExpExecArray): Step {
+/** The text being scanned (escapes as placeholders) and its end-string table. */
+interface Scan {
+  readonly w: string;
+  readonly ends: EndStrings;
+}
+
+function dispatch(scan: Scan, pos: number, match: RegExpExecArray): Step {
   const g = match.groups!;
   const at = pos + match.index;
   if (g.start !== undefined) {
     const start = g.start;
-    if (start === '**') return inlineObject(w, pos, match, 'strong', END_PATTERNS.strong, false);
-    if (start === '*') return inlineObject(w, pos, match, 'emphasis', END_PATTERNS.emphasis, false);
-    if (start === '``') return inlineObject(w, pos, match, 'literal', END_PATTERNS.literal, true);
-    if (start === '_`') return inlineObject(w, pos, match, 'target', END_PATTERNS.target, false);
-    return inlineObject(w, pos, match, 'substitution', END_PATTERNS.substitution, false);
+    if (start === '**') return inlineObject(scan, pos, match, 'strong', false);
+    if (start === '*') return inlineObject(scan, pos, match, 'emphasis', false);
+    if (start === '``') return inlineObject(scan, pos, match, 'literal', true);
+    if (start === '_`') return inlineObject(scan, pos, match, 'target', false);
+    return inlineObject(scan, pos, match, 'substitution', false);
   }
-  if (g.backquote !== undefined) return interpreted(w, pos, match);
+  if (g.backquote !== undefined) return interpreted(scan, pos, match);
   const end = at + match[0].length;
   if (g.fnend !== undefined) {
     // Footnote and citation references are dropped, with the space before them.
@@ -132,13 +131,14 @@ function quotedStart(w: string, start: number, end: number, pos: number): boolea
   return matchingPair(w[start - 1]!, w[end]!);
 }
 
-function inlineObject(w: string, pos: number, match: RegExpExecArray, kind: PieceKind, endPattern: RegExp, literal: boolean): Step {
+function inlineObject(scan: Scan, pos: number, match: RegExpExecArray, kind: PieceKind & EndKind, literal: boolean): Step {
   const start = pos + match.index;
   const afterStart = start + match.groups!.start!.length;
-  if (quotedStart(w, start, afterStart, pos)) return { before: afterStart, pieces: null, next: afterStart };
-  const end = endPattern.exec(w.slice(afterStart));
-  if (end !== null && end.index > 0) {
-    const textEnd = afterStart + end.index;
+  if (quotedStart(scan.w, start, afterStart, pos)) return { before: afterStart, pieces: null, next: afterStart };
+  // The first end-string counts; right after the start-string it leaves nothing inside, so no markup.
+  const end = scan.ends.find(kind, afterStart);
+  if (end !== null && end.index > afterStart) {
+    const textEnd = end.index;
     return { before: start, pieces: [{ from: afterStart, to: textEnd, literal, kind }], next: textEnd + end[1]!.length };
   }
   return problematic(start, afterStart);
@@ -149,7 +149,8 @@ function problematic(start: number, end: number): Step {
   return { before: start, pieces: [{ from: start, to: end, literal: true, kind: 'problematic' }], next: end };
 }
 
-function interpreted(w: string, pos: number, match: RegExpExecArray): Step {
+function interpreted(scan: Scan, pos: number, match: RegExpExecArray): Step {
+  const { w } = scan;
   const roleStart = pos + match.index;
   const prefix = match.groups!.role ?? '';
   const quoteStart = roleStart + prefix.length;
@@ -157,9 +158,9 @@ function interpreted(w: string, pos: number, match: RegExpExecArray): Step {
   let role = prefix.length > 0 ? prefix.slice(1, -1) : null;
   let roleAt = prefix.length > 0 ? roleStart + 1 : -1;
   if (role === null && quotedStart(w, quoteStart, contentStart, pos)) return { before: contentStart, pieces: null, next: contentStart };
-  const end = END_PATTERNS.interpreted.exec(w.slice(contentStart));
-  if (end === null || end.index === 0) return problematic(quoteStart, contentStart);
-  const contentEnd = contentStart + end.index;
+  const end = scan.ends.find('interpreted', contentStart);
+  if (end === null || end.index === contentStart) return problematic(quoteStart, contentStart);
+  const contentEnd = end.index;
   const next = contentEnd + end[1]!.length;
   const suffixRole = end.groups!.role;
   if (suffixRole !== undefined) {

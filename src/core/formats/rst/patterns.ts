@@ -55,6 +55,9 @@ export const CLOSERS = String.raw`"')>\]}\p{Pe}\p{Pf}\p{Pi}`;
 export const DELIMITER = String.raw`(?:[\\\-\/:\p{Pd}]|(?=[^\x00-\x7f])\p{Po})`;
 export const CLOSING_DELIMITERS = String.raw`\\.,;!?`;
 
+/** What may follow an inline end-string: the end, whitespace, an escape, a closing delimiter, a closer or a delimiter. */
+export const END_SUFFIX = String.raw`(?:$|(?=\s|[\x00${CLOSING_DELIMITERS}${CLOSERS}]|${DELIMITER}))`;
+
 /** Escaped characters are turned into this placeholder followed by the character (as the spec's parser does). */
 export const ESCAPE = '\u0000';
 

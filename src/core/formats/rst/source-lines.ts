@@ -12,7 +12,14 @@ const TAB_WIDTH = 8;
 /** Line terminators (those Python's `splitlines` knows, minus \v and \f, which are spaces here). */
 const LINE_END = /\r\n|[\n\r\x1c-\x1e\x85\u2028\u2029]/g;
 /** Python's `str.isspace` set: what `rstrip()` removes. */
-const TRAILING_BLANKS = /[\t\n\v\f\r\x1c-\x20\x85\xa0\u1680\u2000-\u200a\u2028\u2029\u202f\u205f\u3000]+$/;
+const BLANK = /[\t\n\v\f\r\x1c-\x20\x85\xa0\u1680\u2000-\u200a\u2028\u2029\u202f\u205f\u3000]/;
+
+/** `text` without trailing blanks (a loop: a `[…]+$` pattern retries at every blank of a long line). */
+function trimBlanksEnd(text: string): string {
+  let end = text.length;
+  while (end > 0 && BLANK.test(text[end - 1]!)) end--;
+  return end === text.length ? text : text.slice(0, end);
+}
 
 export interface SourceLine {
   /** Offset of the line's first unit. */
@@ -52,7 +59,7 @@ export class SourceLines {
 function makeLine(source: string, start: number, end: number): SourceLine {
   const raw = source.slice(start, end).replace(/[\v\f]/g, ' ');
   if (!raw.includes('\t')) {
-    const text = raw.replace(TRAILING_BLANKS, '');
+    const text = trimBlanksEnd(raw);
     return { start, end: start + text.length, text, offsets: null };
   }
   let text = '';
@@ -67,7 +74,7 @@ function makeLine(source: string, start: number, end: number): SourceLine {
       offsets.push(start + i);
     }
   }
-  const trimmed = text.replace(TRAILING_BLANKS, '');
+  const trimmed = trimBlanksEnd(text);
   const lastEnd = trimmed.length === 0 ? start : offsets[trimmed.length - 1]! + 1;
   return { start, end: lastEnd, text: trimmed, offsets: Int32Array.from(offsets.slice(0, trimmed.length)) };
 }
@@ -94,7 +101,7 @@ export class Region {
     this.texts = lines.map((l) => {
       const full = src.lines[l.line]!.text;
       const text = l.endCol === undefined ? full.slice(l.col) : full.slice(l.col, l.endCol);
-      return l.endCol === undefined ? text : text.replace(TRAILING_BLANKS, '');
+      return l.endCol === undefined ? text : trimBlanksEnd(text);
     });
   }
 
