@@ -18,12 +18,15 @@
  */
 import { readdir, readFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
-import { parseDocument } from '../src/core/parse/index';
+import { parseRestructuredText } from '../src/core/formats/rst/index';
 import { wordTokens } from '../src/core/text/tokens';
 import type { ParsedDocument } from '../src/core/types';
 import { CorpusMissing, MIN_BODY_SENTENCES, MIN_REFERENCE_WORDS, type CorpusDocument, type CorpusLoad, type Half } from './corpus';
 
 export const NOVA_CORPUS = '../shared/corpus/nova-specs/docs';
+
+/** The engine's rst reader, with tables and footnotes skipped (its defaults). */
+const readRst = (text: string): ParsedDocument => parseRestructuredText(text, { baseOffset: 0, includeTables: false });
 
 /** FNV-1a over the UTF-16 units of the name (offset basis 2166136261, prime 16777619). */
 export function nameHash(name: string): number {
@@ -54,7 +57,7 @@ const URL_LINE = /^[ \t]*<?[a-zA-Z][a-zA-Z0-9+.-]*:\/\/\S+>?[ \t]*$/gm;
  * block is the document title (and subtitle) when the first heading is a title holding the other
  * sections; otherwise there is none and the introduction starts at the top.
  */
-export function splitIntroduction(text: string, parsed: ParsedDocument = parseDocument(text, { format: 'restructuredtext' })): IntroductionSplit | null {
+export function splitIntroduction(text: string, parsed: ParsedDocument = readRst(text)): IntroductionSplit | null {
   const headings = parsed.sections.filter((s) => s.headingSpan !== null);
   const [first, second] = headings;
   if (first === undefined) return null;
@@ -78,10 +81,10 @@ export function splitIntroduction(text: string, parsed: ParsedDocument = parseDo
 export function prepareNovaDocument(file: string, text: string): CorpusDocument | { readonly skipped: string } {
   const split = splitIntroduction(text);
   if (!split) return { skipped: 'no section heading after the introduction' };
-  const referenceSentences = parseDocument(split.referenceText, { format: 'restructuredtext' }).sentences.map((s) => s.text);
+  const referenceSentences = readRst(split.referenceText).sentences.map((s) => s.text);
   const referenceWords = referenceSentences.reduce((sum, sentence) => sum + wordTokens(sentence).length, 0);
   if (referenceWords < MIN_REFERENCE_WORDS) return { skipped: `reference under ${MIN_REFERENCE_WORDS} words` };
-  const body = parseDocument(split.bodyText, { format: 'restructuredtext' });
+  const body = readRst(split.bodyText);
   if (body.sentences.length < MIN_BODY_SENTENCES) return { skipped: `body under ${MIN_BODY_SENTENCES} sentences` };
   return { file, number: nameHash(file), half: novaHalfOf(file), bodyText: split.bodyText, body, referenceSentences, referenceWords };
 }

@@ -6,9 +6,9 @@
  */
 import { isMetadataRun } from '../../parse/boilerplate';
 import type { DocumentBuilder } from '../../parse/document-builder';
-import { singleLine } from '../../parse/inline-text';
+import { singleLine, type NormalizedText } from '../../parse/inline-text';
 import type { BlockKind } from '../../types';
-import type { Block, DefinitionListBlock, ListBlock, ParagraphBlock, TableBlock, TextLines, TitleBlock } from './blocks';
+import type { Block, DefinitionListBlock, ListBlock, ParagraphBlock, TableBlock, TitleBlock } from './blocks';
 import type { TitlePlan } from './titles';
 import { isLinkOnly, visibleText, withoutClassifiers, writePieces, type VisibleText } from './visible-text';
 
@@ -90,7 +90,7 @@ export class RstWalker {
     return this.addText(inline.finish(), block.start, block.end, context);
   }
 
-  private addText(text: ReturnType<ReturnType<typeof writePieces>['finish']>, start: number, end: number, context: Context): number | null {
+  private addText(text: NormalizedText, start: number, end: number, context: Context): number | null {
     return this.doc.addParagraph({
       kind: context.kind,
       start,
@@ -158,7 +158,7 @@ function isFieldLike(block: DefinitionListBlock, terms: readonly VisibleText[]):
     const [only, ...rest] = item.body;
     if (only?.kind !== 'paragraph' || rest.length > 0 || only.text.region.length !== 1) return false;
     const term = writePieces(terms[k]!).finish().text;
-    const value = writePieces(visibleText(only.text as TextLines)).finish().text;
+    const value = writePieces(visibleText(only.text)).finish().text;
     lines.push(`${term}${term.endsWith(':') ? '' : ':'} ${value}`);
   }
   return isMetadataRun(lines);
