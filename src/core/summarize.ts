@@ -61,7 +61,7 @@ export function prepareDocument(text: string, request: SummarizeRequest = {}): P
   const problem = inputProblem(text, options.maxChars);
   if (problem) return { ok: false, refused: refusedSummary(text, format, baseOffset, options, problem) };
   request.onStage?.('reading');
-  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables });
+  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes });
   const analyzed = analyze(doc, resolveLanguage(doc, options.language));
   return { ok: true, prepared: { analyzed, options } };
 }

@@ -13,7 +13,7 @@ export interface Span {
   readonly end: number;
 }
 
-export type DocumentFormat = 'markdown' | 'plaintext';
+export type DocumentFormat = 'markdown' | 'plaintext' | 'restructuredtext';
 
 /** What kind of block a sentence came from; rankers and the coherence checker use it. */
 export type BlockKind = 'paragraph' | 'listItem' | 'quote' | 'tableCell';
@@ -33,7 +33,17 @@ export type SkipReason =
   | 'linkList'
   | 'badge'
   | 'comment'
-  | 'excludedSection';
+  | 'excludedSection'
+  /** reStructuredText: a directive whose body is not prose (or that is not known to hold prose). */
+  | 'directive'
+  /** reStructuredText: command-line option lists. */
+  | 'optionList'
+  /** reStructuredText: line blocks (`| ` lines: addresses, verse). */
+  | 'lineBlock'
+  /** reStructuredText: the document subtitle (it belongs to the title, not to a section). */
+  | 'subtitle'
+  /** Markup the format's reference parser rejects (an inconsistent title level, a broken table). */
+  | 'malformed';
 
 export interface Skipped {
   readonly reason: SkipReason;

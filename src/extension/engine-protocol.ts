@@ -1,11 +1,10 @@
 /** Messages between the extension host and the engine worker. */
-import type { AbstractReport } from '../core/index';
-import type { Summary } from '../core/index';
+import type { AbstractReport, DocumentFormat, Summary } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
 export type EngineTask =
   | { readonly kind: 'summarize'; readonly text: string; readonly options: EngineRequestOptions }
-  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: { readonly format: 'markdown' | 'plaintext'; readonly language: string } };
+  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: { readonly format: DocumentFormat; readonly language: string } };
 
 export type EngineJob = EngineTask & { readonly id: number };
 

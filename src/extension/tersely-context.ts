@@ -5,7 +5,7 @@
  */
 import * as vscode from 'vscode';
 import { Worker } from 'node:worker_threads';
-import type { Span, Summary } from '../core/index';
+import type { DocumentFormat, Span, Summary } from '../core/index';
 import { SummaryHighlights } from './decorations';
 import { RepairQuickFixes, standAloneDiagnostics, type RepairArgs } from './diagnostics';
 import { describePick } from './hover-text';
@@ -38,7 +38,7 @@ export interface ShownSummary {
   readonly version: number;
   readonly scope: Scope;
   readonly selection: Span | null;
-  readonly format: 'markdown' | 'plaintext';
+  readonly format: DocumentFormat;
   readonly documentName: string;
   summary: Summary;
   highlighted: boolean;

@@ -17,6 +17,7 @@ export interface FormatInfo {
 
 export const FORMATS: readonly FormatInfo[] = [
   { id: 'markdown', label: 'Markdown', extensions: ['.md', '.markdown', '.mdown', '.mkd', '.mkdn', '.mdx'], languageIds: ['markdown', 'mdx'] },
+  { id: 'restructuredtext', label: 'reStructuredText', extensions: ['.rst', '.rest'], languageIds: ['restructuredtext'] },
   { id: 'plaintext', label: 'plain text', extensions: ['.txt', '.text'], languageIds: ['plaintext'] },
 ];
 

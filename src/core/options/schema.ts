@@ -158,11 +158,18 @@ export const SUMMARY_OPTIONS = {
     setting: { key: 'includeTables', order: 12 },
     cli: { flag: 'include-tables', commands: ['summarize', 'check'] },
   }),
+  includeFootnotes: define({
+    kind: booleanKind,
+    default: false,
+    description: 'Read footnote and citation bodies as prose (reStructuredText).',
+    setting: { key: 'includeFootnotes', order: 13 },
+    cli: { flag: 'include-footnotes', commands: ['summarize', 'check'] },
+  }),
   maxChars: define({
     kind: integerKind(1_000, 20_000_000),
     default: 3_000_000,
     description: 'Largest document (or selection) to read, in characters; larger ones get a message instead.',
-    setting: { key: 'maxDocumentSize', order: 13, restricted: true, scope: 'machine-overridable' },
+    setting: { key: 'maxDocumentSize', order: 14, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check'] },
   }),
   mmrLambda: define({
@@ -180,13 +187,13 @@ export const HOST_OPTIONS = {
     kind: integerKind(50, 5_000),
     default: 300,
     description: 'With the live summary on, how long typing must pause (milliseconds) before the summary follows.',
-    setting: { key: 'live.delay', order: 14 },
+    setting: { key: 'live.delay', order: 15 },
   }),
   modelFile: define({
     kind: textKind(1024),
     default: '',
     description: 'A trained sentence model (JSON from `tersely train`) for the trained method; empty for the built-in one. Relative paths start at the first workspace folder.',
-    setting: { key: 'modelFile', order: 15, restricted: true, scope: 'machine-overridable' },
+    setting: { key: 'modelFile', order: 16, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
   }),
 } as const;
