@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { relatedness, symmetricEigen, termSpace } from '../../src/core/check/related-terms';
+import { LSA_DEFAULTS, relatedness, symmetricEigen, termSpace } from '../../src/core/check/related-terms';
 
 describe('check: related terms (latent semantic analysis, Deerwester et al. 1990)', () => {
   it('decomposes a symmetric matrix exactly (cyclic Jacobi)', () => {
@@ -26,7 +26,8 @@ describe('check: related terms (latent semantic analysis, Deerwester et al. 1990
   ];
 
   it('relates terms the document uses in the same contexts, not terms it keeps apart', () => {
-    const space = termSpace(sentences);
+    // Two latent dimensions for this 14-sentence example (the default, ⌈√14⌉ = 4, keeps ferry and boat apart).
+    const space = termSpace(sentences, { ...LSA_DEFAULTS, dimensions: 2 });
     assert.ok(space);
     // "ferry" and "boat" never share a sentence but share every neighbour: second-order co-occurrence.
     assert.ok(relatedness(space, 'ferry', 'boat') > 0.8, String(relatedness(space, 'ferry', 'boat')));

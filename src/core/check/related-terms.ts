@@ -110,10 +110,10 @@ export function termSpace(sentences: readonly (readonly string[])[], settings = 
   const n = columns.length;
   const m = index.vocabulary.size;
   if (n < settings.minSentences || m < 2) return null;
-  // Few dimensions for few sentences: near full rank, LSA would only repeat the sentences back (no
-  // term would relate to one it never meets). k = ⌈√n / 2⌉, chosen by hand on the small invented
-  // example of the unit tests, not tuned on the corpus.
-  const k = Math.min(settings.dimensions, Math.ceil(Math.sqrt(n) / 2), n - 1, m - 1);
+  // Fewer dimensions for fewer sentences: near full rank, LSA would only repeat the sentences back
+  // (no term would relate to one it never meets); too few, and everything relates. k = ⌈√n⌉, chosen
+  // by hand on the demo documents, not tuned on the corpus.
+  const k = Math.min(settings.dimensions, Math.ceil(Math.sqrt(n)), n - 1, m - 1);
   const l = Math.min(k + settings.oversampling, n, m);
   const next = random(settings.seed);
 

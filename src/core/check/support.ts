@@ -27,9 +27,9 @@ export const SUPPORT_DEFAULTS = {
   /** A claim is supported when its support reaches this share of its weighted terms. */
   supported: 0.2,
   /** Relatedness (LSA cosine) from which a body term stands in for a claim term. */
-  related: 0.8,
+  related: 0.9,
   /** Credit for a claim term matched through a related term, against 1 for the term itself. */
-  relatedCredit: 0.6,
+  relatedCredit: 0.5,
   /** Least gain in support for a second or third sentence to be combined. */
   minGain: 0.04,
   maxSentences: 3,

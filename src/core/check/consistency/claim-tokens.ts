@@ -55,9 +55,13 @@ export function stemOf(word: string, language: string): string {
  */
 export function locate(source: string, sourceSpan: Span | null, phrase: string): Span | null {
   if (sourceSpan === null) return null;
-  const at = source.toLowerCase().indexOf(phrase.toLowerCase());
-  if (at < 0 || phrase === '') return sourceSpan;
-  return { start: sourceSpan.start + at, end: sourceSpan.start + at + phrase.length };
+  const words = phrase.trim().split(/\s+/u).filter((w) => w !== '');
+  if (words.length === 0) return sourceSpan;
+  // Line breaks and runs of spaces in the source stand for the single spaces of the sentence text.
+  const pattern = new RegExp(words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('\\s+'), 'iu');
+  const match = pattern.exec(source);
+  if (!match) return sourceSpan;
+  return { start: sourceSpan.start + match.index, end: sourceSpan.start + match.index + match[0].length };
 }
 
 /** Content terms shared by two sentences, leaving out the given ones. */
