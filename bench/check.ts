@@ -239,7 +239,7 @@ function resultsBlock(figures: CheckFigures & { files: object; skipped: object }
     '',
     '- Abstracts: the Rust RFCs\' "Summary" sections (cut from the body as in the quality benchmark) and the Nova specs\' introductions (the prose between the title block and the first section, read with the plain-text reader since Tersely has no reStructuredText reader yet). Abstracts under 15 words and bodies under 5 sentences are skipped. ' +
       `Files of this half: ${JSON.stringify(figures.files)}; skipped: ${JSON.stringify(figures.skipped)}.`,
-    '- Split by document: RFC number even → train, odd → test; Nova: FNV-1a hash of the file name even → train. Thresholds were tuned on the train half only. **This table: test half.**',
+    '- Split by document: RFC number even → train, odd → test; Nova: FNV-1a hash of the file name even → train. The support threshold and the detectors\' context rules were chosen by looking at train-half figures and false alarms only; the LSA dimension rule and the combination gain were set by hand on the demo. **This table: test half.**',
     '- Perturbations (bench/perturb.ts, seeded): one per document and rule, on a target the body also states (see the file header). A perturbed sentence counts as caught when the check flags it (unsupported or contradicted) and did not flag the unperturbed sentence.',
     '- "before": the same script run on the check as it was on main at 657d8b4 (similarity only; bench/check-baseline.json).',
     '',
