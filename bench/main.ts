@@ -4,14 +4,16 @@
  *   node dist/bench.cjs speed [options]     throughput and memory (bench/speed.ts)
  *   node dist/bench.cjs tune [options]      weight search on the train half (bench/tune.ts)
  *   node dist/bench.cjs tune-repair         repair strategies on the train half (bench/tune-repair.ts)
+ *   node dist/bench.cjs check [options]     the abstract check on perturbed author abstracts (bench/check.ts)
  */
 async function main(): Promise<number> {
   const mode = process.argv[2];
   if (mode === 'quality') return (await import('./quality')).run(process.argv.slice(3));
   if (mode === 'tune') return (await import('./tune')).run(process.argv.slice(3));
   if (mode === 'tune-repair') return (await import('./tune-repair')).run(process.argv.slice(3));
+  if (mode === 'check') return (await import('./check')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
-  console.error('usage: node dist/bench.cjs quality|speed|tune [options]');
+  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check [options]');
   return 2;
 }
 

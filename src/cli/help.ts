@@ -29,6 +29,7 @@ export function helpText(): string {
     ...optionHelp('check'),
     helpLine('--input-format FORMAT', `read the document as ${inputFormats}`),
     helpLine('--format FORMAT', 'output: text (default) or json'),
+    helpLine('--strict', 'exit 1 when a section is not covered or an abstract sentence is unsupported or contradicted (2 on usage errors)'),
     '',
     'train options',
     helpLine('--reference-heading TEXT', 'heading of the section holding each document’s own summary (required)'),

@@ -16,10 +16,16 @@ function expectCheck(report: AbstractReport): AbstractCheck {
 const headingsOf = (check: AbstractCheck, sections: readonly number[]) =>
   sections.map((s) => check.sections.find((c) => c.section === s)!.heading);
 
-// What media/demo/abstract-check.md was written to contain: its Summary leaves out one body section
-// and makes one claim the body never makes.
+// What media/demo/abstract-check.md was written to contain: its Summary leaves out one body section,
+// makes one claim the body never makes, changes one number (310 cancellations → 301) and flips one
+// negation (the body: text reminders "reduce missed appointments").
 const MISSED_SECTION = 'Patients without a mobile phone';
+// Under the one rule a section is covered only when it holds support: the abstract's first sentence
+// draws its support from Background alone, so "What we changed" is reported too.
+const UNCOVERED = ['What we changed', MISSED_SECTION];
 const INVENTED_CLAIM = 'Patient satisfaction scores in the annual survey rose by fifteen points as a result.';
+const CHANGED_NUMBER = 1;
+const FLIPPED_NEGATION = 4;
 const BODY_SECTIONS = ['Background', 'What we changed', 'Results', 'Costs', MISSED_SECTION, 'Next steps'];
 
 describe('check: abstract against body', () => {
@@ -29,7 +35,7 @@ describe('check: abstract against body', () => {
   it('takes the Summary section as the abstract, with spans into the document', () => {
     assert.equal(check.abstract.origin, 'section');
     assert.equal(check.abstract.heading, 'Summary');
-    assert.equal(check.abstract.sentences.length, 5);
+    assert.equal(check.abstract.sentences.length, 6);
     for (const sentence of check.abstract.sentences) {
       assert.ok(sentence.span, 'an in-document abstract sentence has a span');
       const source = text.slice(sentence.span.start, sentence.span.end);
@@ -41,21 +47,63 @@ describe('check: abstract against body', () => {
     assert.deepEqual(check.sections.map((s) => s.heading), BODY_SECTIONS);
   });
 
-  it('reports exactly the left-out section as uncovered', () => {
-    assert.deepEqual(headingsOf(check, check.uncoveredSections), [MISSED_SECTION]);
+  it('reports exactly the sections no abstract sentence draws its support from as uncovered', () => {
+    assert.deepEqual(headingsOf(check, check.uncoveredSections), UNCOVERED);
   });
 
-  it('reports exactly the invented claim as unsupported', () => {
-    const unsupported = check.unsupportedSentences.map((i) => check.abstract.sentences[i]!.text);
+  it('reports exactly the invented claim as unsupported, and the changed number and flipped negation as contradicted', () => {
+    const unsupported = check.abstract.sentences.filter((s) => s.verdict === 'unsupported').map((s) => s.text);
     assert.deepEqual(unsupported, [INVENTED_CLAIM]);
+    assert.deepEqual(check.contradictedSentences, [CHANGED_NUMBER, FLIPPED_NEGATION]);
+    assert.deepEqual([...check.unsupportedSentences].sort(), [CHANGED_NUMBER, 3, FLIPPED_NEGATION].sort());
+  });
+
+  it('says what the abstract says, what the body says and where, for each finding', () => {
+    const [number] = check.abstract.sentences[CHANGED_NUMBER]!.findings;
+    assert.equal(number?.kind, 'number');
+    assert.equal(number?.abstractSays, '301 appointments');
+    assert.equal(number?.bodySays, '310 cancellations');
+    assert.equal(text.slice(number!.abstractSpan!.start, number!.abstractSpan!.end).replace(/\s+/g, ' '), '301 appointments');
+    assert.equal(text.slice(number!.body!.span.start, number!.body!.span.end), '310 cancellations');
+    assert.equal(text.split('\n')[number!.body!.line - 1]!.includes('310 cancellations'), true);
+    const [negation] = check.abstract.sentences[FLIPPED_NEGATION]!.findings;
+    assert.equal(negation?.kind, 'negation');
+    assert.match(negation!.abstractSays, /not reduce/);
+    assert.match(negation!.bodySays ?? '', /^reduce missed/);
+    assert.match(negation!.message, /^abstract: .*not reduce.* — body, line \d+: reduce missed/);
+    assert.deepEqual(check.findings, [number, negation]);
+  });
+
+  it('follows one rule: a section is covered exactly when it holds support of a claim that reached the threshold', () => {
+    const supportSections = new Set(
+      check.abstract.sentences.filter((s) => s.verdict === 'supported' || s.verdict === 'contradicted').flatMap((s) => s.support.map((p) => p.section)),
+    );
+    for (const section of check.sections) assert.equal(section.covered, supportSections.has(section.section), section.heading);
+    for (const sentence of check.abstract.sentences) {
+      assert.equal(sentence.supported, sentence.verdict === 'supported' || sentence.verdict === 'notAClaim');
+      if (sentence.verdict === 'supported') assert.ok(sentence.similarity >= check.thresholds.supported);
+    }
+  });
+
+  it('weighs key content pyramid-style and names what the abstract leaves out', () => {
+    const { content } = check;
+    assert.ok(content.items.length > 0);
+    for (let i = 1; i < content.items.length; i++) assert.ok(content.items[i - 1]!.weight >= content.items[i]!.weight);
+    for (const item of content.items) assert.ok(item.weight >= 2 && item.weight === item.sources.length, item.word);
+    const covered = content.items.filter((i) => i.covered).reduce((sum, i) => sum + i.weight, 0);
+    assert.equal(content.coveredWeight, covered);
+    assert.ok(Math.abs(content.share - covered / content.totalWeight) < 1e-12);
+    // The demo's abstract uses some of the body's repeated terms and not others.
+    assert.ok(content.items.some((i) => i.covered) && content.items.some((i) => !i.covered));
   });
 
   it('lists up to three supporting sentences, best first, pointing into the body', () => {
     for (const sentence of check.abstract.sentences) {
       assert.ok(sentence.support.length <= 3);
-      assert.equal(sentence.similarity, sentence.support[0]?.similarity ?? 0);
+      // Combined support is at least as strong as its best sentence alone.
+      assert.ok(sentence.similarity >= (sentence.support[0]?.similarity ?? 0) - 1e-12);
       for (let i = 1; i < sentence.support.length; i++) {
-        assert.ok(sentence.support[i - 1]!.similarity >= sentence.support[i]!.similarity);
+        assert.ok(sentence.support[0]!.similarity >= sentence.support[i]!.similarity);
       }
       for (const support of sentence.support) {
         assert.notEqual(support.heading, 'Summary', 'the abstract never supports itself');
@@ -69,10 +117,8 @@ describe('check: abstract against body', () => {
 
   it('states its thresholds and keeps every similarity in [0, 1]', () => {
     assert.deepEqual(check.thresholds, ABSTRACT_CHECK_DEFAULTS);
-    for (const section of check.sections) {
-      assert.ok(section.similarity >= 0 && section.similarity <= 1);
-      assert.equal(section.covered, section.similarity >= check.thresholds.covered);
-    }
+    for (const section of check.sections) assert.ok(section.similarity >= 0 && section.similarity <= 1);
+    for (const sentence of check.abstract.sentences) assert.ok(sentence.similarity >= 0 && sentence.similarity <= 1);
   });
 
   it('compares the abstract with a summary of the same length, in both directions', () => {
@@ -112,8 +158,10 @@ describe('check: abstract against body', () => {
     assert.equal(separate.abstract.origin, 'text');
     assert.equal(separate.abstract.span, null);
     assert.ok(separate.abstract.sentences.every((s) => s.span === null));
-    assert.deepEqual(headingsOf(separate, separate.uncoveredSections), [MISSED_SECTION]);
-    assert.deepEqual(separate.unsupportedSentences.map((i) => separate.abstract.sentences[i]!.text), [INVENTED_CLAIM]);
+    assert.deepEqual(headingsOf(separate, separate.uncoveredSections), UNCOVERED);
+    assert.deepEqual(separate.unsupportedSentences, check.unsupportedSentences);
+    assert.deepEqual(separate.contradictedSentences, check.contradictedSentences);
+    assert.ok(separate.findings.every((f) => f.abstractSpan === null && f.body !== null));
   });
 
   it('uses a named heading when asked, and explains a missing one', () => {
@@ -182,14 +230,39 @@ describe('check: abstract options and edge cases', () => {
     assert.deepEqual(check.uncoveredSections, []);
   });
 
-  it('applies caller thresholds, clamped to [0, 1]', () => {
-    const strict = run({ thresholds: { covered: 5, supported: 1 } });
-    assert.deepEqual(strict.thresholds, { ...ABSTRACT_CHECK_DEFAULTS, covered: 1, supported: 1 });
+  it('applies a caller threshold, clamped to [0, 1], to both verdicts at once', () => {
+    const strict = run({ thresholds: { supported: 5 } });
+    assert.deepEqual(strict.thresholds, { ...ABSTRACT_CHECK_DEFAULTS, supported: 1 });
     assert.deepEqual(headingsOf(strict, strict.uncoveredSections), ['Timetable', 'Tickets']);
     assert.deepEqual(strict.unsupportedSentences, [1, 2]);
-    const lax = run({ thresholds: { covered: 0, supported: Number.NaN } });
-    assert.equal(lax.thresholds.covered, 0);
+    const lax = run({ thresholds: { supported: Number.NaN } });
     assert.equal(lax.thresholds.supported, ABSTRACT_CHECK_DEFAULTS.supported);
+  });
+
+  it('marks an abstract sentence that copies the body, with the share of the abstract copied', () => {
+    const copied = doc.replace('- Ticket machines take contactless cards.', '- Ticket machines on every pier now accept contactless cards.');
+    const check = expectCheck(checkAbstract(copied, { format: 'markdown', language: 'en' }));
+    assert.equal(check.abstract.sentences[2]!.copy?.kind, 'verbatim');
+    assert.deepEqual(check.copied.sentences, [2]);
+    const words = check.abstract.sentences.map((s) => s.text.split(/\s+/).length);
+    assert.ok(check.copied.share > 0 && check.copied.share < 1);
+    assert.ok(Math.abs(check.copied.share - words[2]! / words.reduce((a, b) => a + b, 0)) < 0.1);
+  });
+
+  it('tolerates paraphrase by stems and spelled-out numbers', () => {
+    const paraphrased = doc.replace('- The late ferry crossing runs at eleven on Fridays and Saturdays.', '- Late crossings run at 11 on Friday and Saturday.');
+    const check = expectCheck(checkAbstract(paraphrased, { format: 'markdown', language: 'en' }));
+    assert.equal(check.abstract.sentences[1]!.verdict, 'supported', check.abstract.sentences[1]!.reason);
+  });
+
+  it('uses the summary settings: excluded headings are not body', () => {
+    const withRefs = doc + '## References\n\nThe harbour ferry timetable archive lists every crossing since the pier opened in the old town.\n';
+    const check = expectCheck(checkAbstract(withRefs, { format: 'markdown', language: 'en' }));
+    assert.ok(!check.sections.some((s) => s.heading === 'References'));
+    const kept = expectCheck(checkAbstract(withRefs, { format: 'markdown', language: 'en', excludeHeadings: [] }));
+    assert.ok(kept.sections.some((s) => s.heading === 'References') || kept.unjudgedSections.some((s) => s.heading === 'References'));
+    const refused = checkAbstract(withRefs + '\nThe ferry runs late. '.repeat(60), { format: 'markdown', language: 'en', maxChars: 1000 });
+    assert.equal(refused.ok, false);
   });
 
   it('lists sections too short to judge instead of calling them left out', () => {

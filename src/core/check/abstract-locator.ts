@@ -51,7 +51,11 @@ export interface AbstractSentence {
   readonly sentence: number | null;
   readonly text: string;
   readonly span: Span | null;
+  /** The sentence as written, markup kept (code spans stay visible to the identifier check). */
+  readonly source: string;
   readonly terms: readonly string[];
+  /** Word tokens (stop words kept). */
+  readonly wordList: readonly string[];
   readonly words: number;
 }
 
@@ -75,7 +79,15 @@ export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSourc
   const { doc } = analyzed;
   if (source?.kind === 'text') {
     const parsed = analyze(parseDocument(source.text, { format: source.format ?? 'plaintext' }), language);
-    const sentences = parsed.doc.sentences.map((s, i) => ({ sentence: null, text: s.text, span: null, terms: parsed.terms[i]!, words: parsed.words[i]!.length }));
+    const sentences = parsed.doc.sentences.map((s, i) => ({
+      sentence: null,
+      text: s.text,
+      span: null,
+      source: source.text.slice(s.span.start, s.span.end),
+      terms: parsed.terms[i]!,
+      wordList: parsed.words[i]!,
+      words: parsed.words[i]!.length,
+    }));
     if (sentences.length === 0) return { reason: 'emptyAbstract', error: 'The abstract text has no sentences to check.' };
     return { origin: 'text', heading: null, section: null, span: null, sections: new Uint8Array(doc.sections.length), sentences };
   }
@@ -87,7 +99,15 @@ export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSourc
   const sections = sectionWithDescendants(doc, index);
   const sentences = doc.sentences
     .filter((s) => sections[s.section] === 1)
-    .map((s) => ({ sentence: s.index, text: s.text, span: s.span, terms: analyzed.terms[s.index]!, words: analyzed.words[s.index]!.length }));
+    .map((s) => ({
+      sentence: s.index,
+      text: s.text,
+      span: s.span,
+      source: doc.text.slice(s.span.start - doc.baseOffset, s.span.end - doc.baseOffset),
+      terms: analyzed.terms[s.index]!,
+      wordList: analyzed.words[s.index]!,
+      words: analyzed.words[s.index]!.length,
+    }));
   if (sentences.length === 0) return { reason: 'emptyAbstract', error: `The section "${section.heading}" has no sentences to check.` };
   return { origin: 'section', heading: section.heading, section: index, span: section.span, sections, sentences };
 }

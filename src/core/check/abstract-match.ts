@@ -1,34 +1,35 @@
 /**
- * Matches an abstract against the body it summarizes, sentence by sentence, with the tf-idf cosine
- * of stemmed content terms (vectors.ts, 'smoothed' idf counted over the document's sentences, so a
- * claim that shares only common words still finds its support).
- *   - A body section (balance unit) is covered when its best-matching sentence reaches
- *     `covered` similarity with some abstract sentence.
- *   - An abstract sentence is supported when its best-matching body sentence reaches `supported`.
+ * Matches an abstract against the body it summarizes:
+ *   1. each abstract sentence is aligned with the body sentences that back it (support.ts), with
+ *      paraphrase tolerance from stems, normalized numbers and the document's own related terms
+ *      (related-terms.ts);
+ *   2. the claim is compared with its support for numbers, dates and versions, negation, modality,
+ *      comparatives and identifiers (consistency/);
+ *   3. copies of body sentences are marked (copy.ts);
+ *   4. sections and key content are judged covered by the same links (coverage.ts).
+ * The body is what a summary reads: sentences outside the abstract and outside excluded sections.
  */
-import { balanceUnits, excludedSections } from '../select/units';
-import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
-import type { LocatedAbstract, AbstractSentence } from './abstract-locator';
-import type { AbstractSentenceCheck, AbstractThresholds, SectionCoverage, UnjudgedSection } from './abstract-report';
-import { buildTermIndex, inverseFrequency, similarities, tfidfVectors, topMatches } from '../vectors';
+import { excludedSections } from '../select/units';
+import { LineIndex } from '../text/lines';
+import { wordTokens } from '../text/tokens';
+import type { AnalyzedDocument } from '../types';
+import { buildTermIndex, inverseFrequency } from '../vectors';
+import type { AbstractSentence, LocatedAbstract } from './abstract-locator';
+import type { AbstractSentenceCheck, AbstractThresholds, ContentCoverage, SectionCoverage, UnjudgedSection } from './abstract-report';
+import { claimReport } from './claim-report';
+import { checkedText } from './consistency/claim-tokens';
+import type { BodyFacts, Evidence } from './consistency/detector';
+import { runDetectors } from './consistency/index';
+import { quantitiesIn } from './consistency/quantities';
+import { identifiersIn } from './consistency/identifiers';
+import { CopyIndex } from './copy';
+import { contentCoverage, sectionCoverage } from './coverage';
+import { termSpace } from './related-terms';
+import { alignClaim, normalizedTerms, SUPPORT_DEFAULTS, type Alignment } from './support';
 
-/**
- * Thresholds, tuned by hand on the demo documents and on every fourth Rust RFC in the shared
- * corpus (161 documents, 803 judged sections, 502 abstract sentences; each RFC opens with a
- * "Summary" written by its author):
- *   - covered 0.25: 89% of RFC sections where one sentence repeats four or more longer words of an
- *     abstract sentence come out covered, against 17% of sections that share at most one such
- *     word (0.20 gave 95% and 29%). In the demo, the section the abstract leaves out scores 0.19
- *     and the covered ones 0.39-0.49.
- *   - supported 0.20: 94% of the RFC authors' own abstract sentences reach it; those that do not
- *     are mostly link lines and sentences leaning on the previous one ("Allowing them would...").
- *     The demo's invented claim scores 0.05, its true claims 0.39-0.49.
- *   - minSectionTerms 12: a unit with fewer content terms (a one-line "TBD" section) is listed as
- *     unjudged instead of being reported as left out.
- */
 export const ABSTRACT_CHECK_DEFAULTS: AbstractThresholds = {
-  covered: 0.25,
-  supported: 0.2,
+  supported: SUPPORT_DEFAULTS.supported,
+  /** A unit with fewer content terms (a one-line "TBD" section) is listed as unjudged instead of being reported as left out. */
   minSectionTerms: 12,
 };
 
@@ -38,13 +39,56 @@ export const ABSTRACT_CHECK_DEFAULTS: AbstractThresholds = {
  */
 const MIN_CLAIM_TERMS = 2;
 
-/** How many supporting body sentences each abstract sentence lists. */
-const SUPPORT_SHOWN = 3;
-
 export interface AbstractMatch {
   readonly sentences: readonly AbstractSentenceCheck[];
   readonly sections: readonly SectionCoverage[];
   readonly unjudged: readonly UnjudgedSection[];
+  readonly content: ContentCoverage;
+}
+
+/** The body as the check reads it: one entry per body sentence, in document order. */
+export interface CheckBody {
+  /** Sentence indices. */
+  readonly sentences: readonly number[];
+  readonly terms: readonly ReadonlySet<string>[];
+  /** Normalized terms with repeats (tf). */
+  readonly termLists: readonly (readonly string[])[];
+  readonly evidence: readonly Evidence[];
+  readonly facts: BodyFacts;
+  readonly lines: LineIndex;
+}
+
+function readBody(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excludeHeadings: readonly string[]): CheckBody {
+  const { doc, language } = analyzed;
+  const excluded = excludedSections(doc, excludeHeadings);
+  const sentences: number[] = [];
+  const terms: Set<string>[] = [];
+  const termLists: string[][] = [];
+  const evidence: Evidence[] = [];
+  const numbers = new Set<number>();
+  for (const sentence of doc.sentences) {
+    if (abstractSections[sentence.section] === 1 || excluded[sentence.section] === 1) continue;
+    if (analyzed.terms[sentence.index]!.length === 0) continue;
+    const source = doc.text.slice(sentence.span.start - doc.baseOffset, sentence.span.end - doc.baseOffset);
+    const checked = checkedText(sentence.text, language);
+    sentences.push(sentence.index);
+    const list = normalizedTerms(analyzed.words[sentence.index]!, language);
+    termLists.push(list);
+    terms.push(new Set(list));
+    evidence.push({ sentence: sentence.index, checked, source, span: sentence.span });
+    for (const q of quantitiesIn(checked)) {
+      if (typeof q.value === 'number') numbers.add(q.value);
+    }
+  }
+  // Identifiers are looked up in the whole text outside the abstract: code blocks are not sentences.
+  const abstractSpans = doc.sections.filter((s) => abstractSections[s.index] === 1 && s.parent !== null && abstractSections[s.parent] !== 1).map((s) => s.span);
+  let outside = doc.text;
+  for (const span of abstractSpans.sort((a, b) => b.start - a.start)) outside = outside.slice(0, span.start - doc.baseOffset) + '\n' + outside.slice(span.end - doc.baseOffset);
+  return { sentences, terms, termLists, evidence, facts: { numbers, lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
+}
+
+function isClaim(sentence: AbstractSentence, terms: readonly string[]): boolean {
+  return new Set(terms).size >= MIN_CLAIM_TERMS && !/:\s*$/u.test(sentence.text);
 }
 
 /** Null when the document has no prose outside the abstract. */
@@ -54,150 +98,51 @@ export function matchAbstract(
   thresholds: AbstractThresholds,
   excludeHeadings: readonly string[],
 ): AbstractMatch | null {
-  const body = bodySentences(analyzed, located.sections);
-  if (body.length === 0) return null;
+  const { language } = analyzed;
+  const body = readBody(analyzed, located.sections, excludeHeadings);
+  if (body.sentences.length === 0) return null;
 
-  // One term index for everything compared, so abstract and body weights are on the same scale:
-  // the document's sentences, then (for an abstract given as separate text) the abstract's.
-  const extraTerms = located.origin === 'text' ? located.sentences.map((s) => s.terms) : [];
-  const index = buildTermIndex([...analyzed.terms, ...extraTerms]);
-  const vectors = tfidfVectors(index, inverseFrequency(index, 'smoothed'));
-  const bodyVectors = body.map((i) => vectors[i]!);
-  const abstractVectors =
-    located.origin === 'text'
-      ? located.sentences.map((_, k) => vectors[analyzed.terms.length + k]!)
-      : located.sentences.map((s) => vectors[s.sentence!]!);
-  // similarity[a][p]: abstract sentence a against body sentence body[p]; computed once, read twice.
-  const similarity = abstractVectors.map((v) => similarities(v, bodyVectors));
+  const claimTerms = located.sentences.map((s) => normalizedTerms(s.wordList, language));
+  // One idf over body and abstract, so a claim term the body never uses weighs the most.
+  const index = buildTermIndex([...body.termLists, ...claimTerms]);
+  const idf = inverseFrequency(index, 'smoothed');
+  const weighted = (terms: readonly string[]) => {
+    const weights = new Map<string, number>();
+    for (const t of terms) weights.set(t, (weights.get(t) ?? 0) + idf[index.vocabulary.get(t)!]!);
+    return weights;
+  };
+  const bodyWeights = body.termLists.map(weighted);
+  const space = termSpace(body.termLists);
+  const copies = new CopyIndex(body.sentences.map((i) => analyzed.words[i]!));
+  const settings = { ...SUPPORT_DEFAULTS, supported: thresholds.supported };
 
-  const units = balanceUnits(analyzed.doc, 1).unitOfSection;
-  const sentences = supportOf(analyzed.doc, located.sentences, similarity, body, units, thresholds);
-  const skipRoot = opensDocument(analyzed.doc, located.section);
-  const { sections, unjudged } = coverageOf(analyzed, body, similarity, units, skipRoot, thresholds, excludeHeadings);
-  return { sentences, sections, unjudged };
-}
-
-/** Indices of the sentences outside the abstract that have at least one content term. */
-function bodySentences(analyzed: AnalyzedDocument, abstractSections: Uint8Array): number[] {
-  const body: number[] = [];
-  for (const sentence of analyzed.doc.sentences) {
-    if (abstractSections[sentence.section] === 1) continue;
-    if (analyzed.terms[sentence.index]!.length === 0) continue;
-    body.push(sentence.index);
-  }
-  return body;
-}
-
-function supportOf(
-  doc: ParsedDocument,
-  abstract: readonly AbstractSentence[],
-  similarity: readonly Float64Array[],
-  body: readonly number[],
-  units: Int32Array,
-  thresholds: AbstractThresholds,
-): AbstractSentenceCheck[] {
-  return abstract.map((sentence, index) => {
-    const support = topMatches(similarity[index]!, SUPPORT_SHOWN).map((match) => {
-      const source = doc.sentences[body[match.index]!]!;
-      const unit = units[source.section]!;
-      return {
-        sentence: source.index,
-        text: source.text,
-        span: source.span,
-        section: unit,
-        heading: doc.sections[unit]!.heading,
-        similarity: match.similarity,
-      };
-    });
-    const best = support[0]?.similarity ?? 0;
-    const claim = isClaim(sentence);
-    return {
-      index,
-      text: sentence.text,
-      span: sentence.span,
-      support,
-      similarity: best,
-      claim,
-      supported: !claim || best >= thresholds.supported,
-    };
-  });
-}
-
-/**
- * True when the abstract is the document's first section (only its enclosing title comes before
- * it). Text ahead of such an abstract is a byline, a status line or an editor's note, not body
- * the abstract is expected to cover.
- */
-function opensDocument(doc: ParsedDocument, abstractSection: number | null): boolean {
-  if (abstractSection === null) return false;
-  const ancestors = new Set<number>();
-  for (let at = doc.sections[abstractSection]!.parent; at !== null; at = doc.sections[at]!.parent) ancestors.add(at);
-  return doc.sections.slice(0, abstractSection).every((section) => ancestors.has(section.index));
-}
-
-function isClaim(sentence: AbstractSentence): boolean {
-  return new Set(sentence.terms).size >= MIN_CLAIM_TERMS && !/:\s*$/u.test(sentence.text);
-}
-
-function coverageOf(
-  analyzed: AnalyzedDocument,
-  body: readonly number[],
-  similarity: readonly Float64Array[],
-  units: Int32Array,
-  skipRoot: boolean,
-  thresholds: AbstractThresholds,
-  excludeHeadings: readonly string[],
-): { sections: SectionCoverage[]; unjudged: UnjudgedSection[] } {
-  const { doc } = analyzed;
-  // Reference lists and change logs are not prose an abstract is expected to cover.
-  const excluded = excludedSections(doc, excludeHeadings);
-  const members = new Map<number, number[]>(); // unit → positions in `body`
-  body.forEach((sentenceIndex, position) => {
-    const section = doc.sentences[sentenceIndex]!.section;
-    if (excluded[section] === 1) return;
-    const unit = units[section]!;
-    if (unit === 0 && skipRoot) return;
-    const list = members.get(unit);
-    if (list) list.push(position);
-    else members.set(unit, [position]);
+  const alignments: Alignment[] = [];
+  const sentences = located.sentences.map((sentence, k) => {
+    const terms = claimTerms[k]!;
+    const weights = weighted(terms);
+    const slots = new Set(terms.filter((t) => /\d/u.test(t)));
+    for (const identifier of identifiersIn(sentence.source)) for (const t of normalizedTerms(wordTokens(identifier.text), language)) slots.add(t);
+    const alignment = alignClaim({ weights, slots }, bodyWeights, space, settings);
+    alignments.push(alignment);
+    const claim = isClaim(sentence, terms);
+    const checked = checkedText(sentence.text, language);
+    const evidenceAt = (p: number) => body.evidence[p]!;
+    const findings = claim
+      ? runDetectors({
+          claim: checked,
+          claimSource: sentence.source,
+          support: alignment.picks.map((p) => evidenceAt(p.position)),
+          pool: [...alignment.picks.map((p) => p.position), ...alignment.pool].map(evidenceAt),
+          frame: alignment.frame === null ? null : evidenceAt(alignment.frame),
+          body: body.facts,
+          language,
+        })
+      : [];
+    const copy = copies.match(sentence.wordList);
+    return claimReport({ analyzed, body, sentence, index: k, claim, alignment, findings, copy, settings });
   });
 
-  const sections: SectionCoverage[] = [];
-  const unjudged: UnjudgedSection[] = [];
-  for (const unit of [...members.keys()].sort((a, b) => a - b)) {
-    const positions = members.get(unit)!;
-    const heading = doc.sections[unit]!.heading;
-    const contentTerms = positions.reduce((sum, p) => sum + analyzed.terms[body[p]!]!.length, 0);
-    if (contentTerms < thresholds.minSectionTerms) {
-      unjudged.push({ section: unit, heading, contentTerms });
-      continue;
-    }
-    let best = { similarity: 0, abstractSentence: -1, position: -1 };
-    for (const position of positions) {
-      similarity.forEach((row, a) => {
-        if (row[position]! > best.similarity) best = { similarity: row[position]!, abstractSentence: a, position };
-      });
-    }
-    const matched = best.position >= 0 ? doc.sentences[body[best.position]!]! : null;
-    sections.push({
-      section: unit,
-      heading,
-      span: unitSpan(doc, unit, units),
-      sentenceCount: positions.length,
-      similarity: best.similarity,
-      abstractSentence: matched ? best.abstractSentence : null,
-      sentence: matched ? matched.index : null,
-      sentenceSpan: matched ? matched.span : null,
-      covered: best.similarity >= thresholds.covered,
-    });
-  }
-  return { sections, unjudged };
-}
-
-/** A unit's own section span; for the root unit, only the stretch before the first unit heading. */
-function unitSpan(doc: ParsedDocument, unit: number, units: Int32Array): Span {
-  const span = doc.sections[unit]!.span;
-  if (unit !== 0) return span;
-  const firstUnit = doc.sections.find((section) => section.index > 0 && units[section.index] !== 0);
-  return { start: span.start, end: firstUnit?.headingSpan?.start ?? span.end };
+  const { sections, unjudged } = sectionCoverage(analyzed, located, body, alignments, sentences, thresholds);
+  const content = contentCoverage(analyzed, located, body, claimTerms);
+  return { sentences, sections, unjudged, content };
 }

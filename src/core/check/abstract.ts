@@ -4,18 +4,20 @@
  * sentences? And how close is it to Tersely's own summary of the same length?
  *
  * Pipeline: parse → analyze → locate the abstract (abstract-locator.ts) → match it against the
- * body (abstract-match.ts) → compare with a summary (abstract-rouge.ts).
+ * body (abstract-match.ts: alignment, consistency findings, copies, coverage) → compare with a
+ * summary (abstract-rouge.ts).
  *
- * Similarity only sees shared vocabulary: a faithful paraphrase in entirely new words can be
- * flagged, and a claim that reuses the body's words with a changed number passes. The report says
- * "may", and shows the evidence so a person can judge.
+ * Paraphrase tolerance comes from the document alone (stems, numbers written either way, terms the
+ * document uses together): a paraphrase in words the document never uses can still be flagged,
+ * and a detector can miss a change it has no rule for. The report shows its evidence with lines so
+ * a person can judge.
  */
 import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOptions } from '../options/resolve';
 import { finishSummary, prepareDocument, rankPrepared, type PreparedDocument } from '../summarize';
 import type { DocumentFormat } from '../types';
 import { locateAbstract, type LocatedAbstract } from './abstract-locator';
 import { ABSTRACT_CHECK_DEFAULTS, matchAbstract } from './abstract-match';
-import type { AbstractCheck, AbstractReport, AbstractRougeComparison, AbstractSource, AbstractThresholds } from './abstract-report';
+import type { AbstractCheck, AbstractReport, AbstractRougeComparison, AbstractSentenceCheck, AbstractSource, AbstractThresholds } from './abstract-report';
 import { compareWithSummary } from './abstract-rouge';
 
 export type { AbstractReport, AbstractSource } from './abstract-report';
@@ -43,7 +45,7 @@ export function checkAbstract(documentText: string, request: CheckAbstractReques
 
   const match = matchAbstract(analyzed, located, thresholds, options.excludeHeadings);
   if (match === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
-  const { sentences, sections, unjudged } = match;
+  const { sentences, sections, unjudged, content } = match;
 
   const notices: string[] = [];
   const rouge = rougeComparison(prepared, located, notices);
@@ -63,6 +65,11 @@ export function checkAbstract(documentText: string, request: CheckAbstractReques
     unjudgedSections: unjudged,
     uncoveredSections: sections.filter((s) => !s.covered).map((s) => s.section),
     unsupportedSentences: sentences.filter((s) => !s.supported).map((s) => s.index),
+    contradictedSentences: sentences.filter((s) => s.verdict === 'contradicted').map((s) => s.index),
+    findings: sentences.flatMap((s) => s.findings),
+    content,
+    copied: copiedShare(located, sentences),
+    rule: COVERAGE_RULE,
     thresholds,
     rouge,
     notices,
@@ -70,12 +77,21 @@ export function checkAbstract(documentText: string, request: CheckAbstractReques
   return result;
 }
 
+/** The one rule, said the same way by every surface. */
+export const COVERAGE_RULE =
+  'An abstract sentence is supported when one to three body sentences together hold enough of its content and nothing in them contradicts it; a section is covered when it holds a sentence that supports an abstract sentence.';
+
+function copiedShare(located: LocatedAbstract, sentences: readonly AbstractSentenceCheck[]): AbstractCheck['copied'] {
+  const copied = sentences.filter((s) => s.copy !== null).map((s) => s.index);
+  const words = located.sentences.reduce((sum, s) => sum + s.words, 0);
+  const copiedWords = copied.reduce((sum, k) => sum + located.sentences[k]!.words, 0);
+  return { sentences: copied, share: words === 0 ? 0 : copiedWords / words };
+}
+
 function validThresholds(partial: Partial<AbstractThresholds> | undefined): Partial<AbstractThresholds> {
   const valid: { -readonly [K in keyof AbstractThresholds]?: number } = {};
-  for (const key of ['covered', 'supported'] as const) {
-    const value = partial?.[key];
-    if (typeof value === 'number' && Number.isFinite(value)) valid[key] = Math.min(1, Math.max(0, value));
-  }
+  const value = partial?.supported;
+  if (typeof value === 'number' && Number.isFinite(value)) valid.supported = Math.min(1, Math.max(0, value));
   const minTerms = partial?.minSectionTerms;
   if (typeof minTerms === 'number' && Number.isFinite(minTerms)) valid.minSectionTerms = Math.max(0, Math.round(minTerms));
   return valid;

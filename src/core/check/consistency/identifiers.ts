@@ -1,0 +1,103 @@
+/**
+ * Identifiers: code spans (`x` in Markdown, ``x`` in reStructuredText), command-line options
+ * (--flag), file names (config.toml), paths (std::mem::swap), calls (spawn()) and snake_case names,
+ * read from the sentence's source so code formatting is seen.
+ *
+ * A finding is either
+ *   - a swap: the body sentence closest to the claim's other words (the frame) has another
+ *     identifier where the claim has this one (the word before or after it is the same), and no
+ *     sentence of the pool puts the claim's identifier there; or
+ *   - an absence: the body never mentions an option or a file name the claim names (compared
+ *     without case); other names are too often written differently (`Foo::bar` / `bar`) to judge.
+ * Code spans after a reStructuredText role (:ref:`x`) are cross-references, not identifiers.
+ */
+import type { Detector, Evidence, RawFinding } from './detector';
+
+export type IdentifierKind = 'code' | 'option' | 'file' | 'path' | 'call' | 'name';
+
+export interface Identifier {
+  readonly kind: IdentifierKind;
+  /** As written, without the backticks. */
+  readonly text: string;
+  /** Lower case, trailing "()" and "!" removed: how identifiers are compared. */
+  readonly key: string;
+  readonly before: string | null;
+  readonly after: string | null;
+}
+
+/** A code span; its content neither starts nor ends with a space, so the text between two spans is never taken for one. */
+const CODE_SPAN = /(`{1,2})([^`\s](?:[^`\n]{0,78}[^`\s])?)\1(?!_)/gu;
+const PATTERNS: readonly (readonly [IdentifierKind, RegExp])[] = [
+  ['option', /(?<![\w-])--[a-z][a-z0-9-]+/gu],
+  ['file', /(?<![\w/.-])[\w-]+\.(?:rs|toml|md|json|ya?ml|py|js|ts|c|h|cfg|conf|ini|txt|lock|sh|rst)\b/gu],
+  ['path', /(?<![\w:])[A-Za-z_]\w*(?:::[A-Za-z_]\w*)+/gu],
+  ['call', /(?<![\w.])[A-Za-z_]\w*\(\)/gu],
+  ['name', /(?<![\w-])[a-z][a-z0-9]*(?:_[a-z0-9]+)+(?![\w-])/gu],
+];
+const WORD = /[\p{L}\p{N}]+/gu;
+
+export function identifierKey(text: string): string {
+  return text.trim().replace(/(?:\(\)|!)+$/u, '').toLowerCase();
+}
+
+function neighbours(source: string, start: number, end: number): { before: string | null; after: string | null } {
+  const before = source.slice(Math.max(0, start - 40), start).match(WORD)?.at(-1)?.toLowerCase() ?? null;
+  const after = source.slice(end, end + 40).match(WORD)?.[0]?.toLowerCase() ?? null;
+  return { before, after };
+}
+
+export function identifiersIn(source: string): Identifier[] {
+  const found: (Identifier & { start: number })[] = [];
+  const covered: [number, number][] = [];
+  const add = (kind: IdentifierKind, text: string, start: number, end: number) => {
+    const key = identifierKey(text);
+    if (key.length < 2 || /^[\d.,%\s]+$/u.test(key)) return;
+    found.push({ kind, text, key, start, ...neighbours(source, start - (kind === 'code' ? 1 : 0), end + (kind === 'code' ? 1 : 0)) });
+  };
+  for (const m of source.matchAll(CODE_SPAN)) {
+    if (source[m.index - 1] === ':') continue;
+    const start = m.index + m[1]!.length;
+    add('code', m[2]!, start, start + m[2]!.length);
+    covered.push([m.index, m.index + m[0].length]);
+  }
+  for (const [kind, pattern] of PATTERNS) {
+    for (const m of source.matchAll(pattern)) {
+      const inside = covered.some(([s, e]) => m.index < e && m.index + m[0].length > s);
+      if (inside) continue;
+      add(kind, m[0], m.index, m.index + m[0].length);
+      covered.push([m.index, m.index + m[0].length]);
+    }
+  }
+  return found.sort((a, b) => a.start - b.start).map(({ start: _start, ...rest }) => rest);
+}
+
+const cache = new WeakMap<Evidence, Identifier[]>();
+function identifiersOf(e: Evidence): Identifier[] {
+  let found = cache.get(e);
+  if (!found) cache.set(e, (found = identifiersIn(e.source)));
+  return found;
+}
+
+const sameSlot = (a: Identifier, b: Identifier) => (a.before !== null && a.before === b.before) || (a.after !== null && a.after === b.after);
+
+export const checkIdentifiers: Detector = (input) => {
+  const findings: RawFinding[] = [];
+  const claimed = identifiersIn(input.claimSource);
+  const claimKeys = new Set(claimed.map((i) => i.key));
+  for (const identifier of claimed) {
+    const frame = input.frame;
+    if (frame && !frame.source.toLowerCase().includes(identifier.key)) {
+      const swap = identifiersOf(frame).find((other) => !claimKeys.has(other.key) && !other.key.includes(identifier.key) && sameSlot(identifier, other));
+      const agreed = input.pool.some((e) => identifiersOf(e).some((other) => other.key === identifier.key && sameSlot(identifier, other)));
+      if (swap && !agreed) {
+        findings.push({ kind: 'identifier', abstractSays: identifier.text, bodySays: swap.text, evidence: frame });
+        continue;
+      }
+    }
+    // Absence is judged only for options and file names: other names are often spelled differently.
+    if ((identifier.kind === 'option' || identifier.kind === 'file') && !input.body.lowerSource.includes(identifier.key)) {
+      findings.push({ kind: 'identifier', abstractSays: identifier.text, bodySays: null, evidence: null, note: `the body never mentions ${identifier.text}` });
+    }
+  }
+  return findings;
+};

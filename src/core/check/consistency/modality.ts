@@ -1,0 +1,102 @@
+/**
+ * Modality: how strongly a sentence commits to what it says. Modal verbs fall in four classes of
+ * strength, the grouping of English grammars (obligation, advice, possibility, prediction; Palmer,
+ * "Mood and Modality", 2001 — from memory), and "must implement" against "may implement" changes
+ * the claim. Negation of the modal is the negation detector's business.
+ *
+ * The governed word is the first content word after the modal (within four words, before any
+ * punctuation). A finding needs a support sentence where the same word is governed by a modal of
+ * another class, sharing at least two more content words with the claim, and no sentence of the
+ * pool with the claim's class on that word. A body that states plainly what the abstract says with
+ * a modal ("adds" for "will add") is a paraphrase, not a conflict. English only.
+ */
+import type { CheckedText } from './claim-tokens';
+import { sharedTerms } from './claim-tokens';
+import type { Detector, Evidence, RawFinding } from './detector';
+
+export type ModalClass = 'obligation' | 'advice' | 'possibility' | 'prediction';
+
+const SINGLE: Readonly<Record<string, ModalClass>> = {
+  must: 'obligation', shall: 'obligation', "mustn't": 'obligation', "shan't": 'obligation',
+  should: 'advice', ought: 'advice', "shouldn't": 'advice',
+  may: 'possibility', might: 'possibility', can: 'possibility', could: 'possibility', cannot: 'possibility', "can't": 'possibility', "couldn't": 'possibility', "mightn't": 'possibility',
+  will: 'prediction', would: 'prediction', "won't": 'prediction', "wouldn't": 'prediction',
+};
+/** "have to", "needs to", "required to": obligation spelled with two words. */
+const BEFORE_TO: Readonly<Record<string, ModalClass>> = { have: 'obligation', has: 'obligation', had: 'obligation', need: 'obligation', needs: 'obligation', required: 'obligation' };
+const BREAK = /[,;:()[\]{}!?]|\.\s/u;
+const HEAD_WINDOW = 4;
+const MIN_SHARED_CONTEXT = 2;
+
+export interface ModalUse {
+  readonly modal: number;
+  readonly modalClass: ModalClass;
+  /** Token index of the governed content word. */
+  readonly head: number;
+}
+
+export function modalUses(text: CheckedText): ModalUse[] {
+  const uses: ModalUse[] = [];
+  const tokens = text.tokens;
+  for (let i = 0; i < tokens.length; i++) {
+    const word = tokens[i]!.lower;
+    let modalClass: ModalClass | undefined = SINGLE[word];
+    if (word.endsWith("'ll")) modalClass = 'prediction';
+    let start = i;
+    if (modalClass === undefined && word in BEFORE_TO && tokens[i + 1]?.lower === 'to') {
+      modalClass = BEFORE_TO[word];
+      start = i + 1;
+    }
+    if (modalClass === undefined) continue;
+    // "may" as a month ("in May 2024") is not a modal.
+    if (word === 'may' && tokens[i]!.raw === 'May' && i > 0 && /\d/u.test(tokens[i + 1]?.lower ?? '')) continue;
+    for (let k = start + 1; k < tokens.length && k <= start + HEAD_WINDOW; k++) {
+      if (BREAK.test(text.text.slice(tokens[k - 1]!.end, tokens[k]!.start))) break;
+      if (tokens[k]!.term !== null && tokens[k]!.lower !== 'not' && SINGLE[tokens[k]!.lower] === undefined) {
+        uses.push({ modal: i, modalClass, head: k });
+        break;
+      }
+    }
+  }
+  return uses;
+}
+
+const useCache = new WeakMap<CheckedText, ModalUse[]>();
+function usesOf(text: CheckedText): ModalUse[] {
+  let uses = useCache.get(text);
+  if (!uses) {
+    uses = modalUses(text);
+    useCache.set(text, uses);
+  }
+  return uses;
+}
+
+function phrase(text: CheckedText, use: ModalUse): string {
+  return text.text.slice(text.tokens[use.modal]!.start, text.tokens[use.head]!.end);
+}
+
+export const checkModality: Detector = (input) => {
+  if (!input.language.startsWith('en')) return [];
+  const findings: RawFinding[] = [];
+  const claim = input.claim;
+  for (const use of usesOf(claim)) {
+    const term = claim.tokens[use.head]!.term!;
+    const classOn = (e: Evidence) => usesOf(e.checked).filter((u) => e.checked.tokens[u.head]!.term === term).map((u) => u.modalClass);
+    let conflict: { evidence: Evidence; other: ModalUse; shared: number } | null = null;
+    for (const evidence of input.support) {
+      const other = usesOf(evidence.checked).find((u) => evidence.checked.tokens[u.head]!.term === term && u.modalClass !== use.modalClass);
+      if (!other || classOn(evidence).includes(use.modalClass)) continue;
+      const shared = sharedTerms(claim, evidence.checked, new Set([term])).length;
+      if (shared >= MIN_SHARED_CONTEXT) {
+        conflict = { evidence, other, shared };
+        break;
+      }
+    }
+    if (!conflict) continue;
+    const found = conflict;
+    const agrees = input.pool.some((e) => classOn(e).includes(use.modalClass) && sharedTerms(claim, e.checked, new Set([term])).length >= found.shared);
+    if (agrees) continue;
+    findings.push({ kind: 'modality', abstractSays: phrase(claim, use), bodySays: phrase(found.evidence.checked, found.other), evidence: found.evidence });
+  }
+  return findings;
+};

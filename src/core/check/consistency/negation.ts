@@ -1,0 +1,157 @@
+/**
+ * Negation and its scope, after NegEx (Chapman et al. 2001, "A simple algorithm for identifying
+ * negated findings and diseases in discharge summaries"): a negation cue ("not", "never", "no",
+ * "without", "-n't"; "not" only after an auxiliary, since "a value, not an address" contrasts) negates the words after it up to a window of five words, cut short by
+ * punctuation or a termination word ("but", "which", "although"); pseudo-negations ("not only",
+ * "whether or not", "no doubt") negate nothing. The negated word is the first content word in
+ * scope.
+ *
+ * A finding needs the same word negated on one side and plainly asserted on the other, in a
+ * support sentence (the first, or the frame) that shares at least three more content words with the claim, and no sentence of
+ * the pool that agrees with the claim at least as closely; one of the three words after the negated
+ * word must be the same on both sides (it is said of the same thing). English only.
+ */
+import type { CheckedText } from './claim-tokens';
+import { sharedTerms } from './claim-tokens';
+import type { Detector, Evidence, RawFinding } from './detector';
+
+/** NegEx's window: a cue governs at most this many following words. */
+export const NEGATION_WINDOW = 5;
+const CUES = new Set(['not', 'no', 'never', 'none', 'nothing', 'neither', 'nor', 'without', 'cannot', 'nobody', 'nowhere']);
+const TERMINATORS = new Set(['but', 'however', 'although', 'though', 'except', 'which', 'who', 'whereas', 'while', 'yet', 'because', 'since', 'unless', 'instead', 'rather', 'so']);
+const PSEUDO_AFTER: Readonly<Record<string, readonly string[]>> = {
+  not: ['only', 'just', 'necessarily', 'merely', 'least'],
+  no: ['doubt', 'matter', 'less'],
+};
+const BREAK = /[,;:()[\]{}!?]|\.\s/u;
+/** "not" negates a statement after an auxiliary ("does not reduce"); elsewhere it mostly contrasts ("a value, not an address"). */
+const AUXILIARIES = new Set(['is', 'are', 'was', 'were', 'be', 'been', 'being', 'am', 'do', 'does', 'did', 'has', 'have', 'had', 'will', 'would', 'can', 'could', 'should', 'shall', 'may', 'might', 'must', 'need', 'also', 'still']);
+/** Context words the two sentences must share besides the negated word. */
+const MIN_SHARED_CONTEXT = 3;
+
+export interface NegationScope {
+  /** Token index of the cue. */
+  readonly cue: number;
+  /** Token indices in scope (after the cue). */
+  readonly scope: readonly number[];
+  /** Token index of the negated word, or null when no content word is in scope. */
+  readonly head: number | null;
+}
+
+function isCue(text: CheckedText, i: number): boolean {
+  const word = text.tokens[i]!.lower;
+  if (word.endsWith("n't")) return true;
+  if (!CUES.has(word)) return false;
+  const next = text.tokens[i + 1]?.lower;
+  if (next !== undefined && PSEUDO_AFTER[word]?.includes(next)) return false;
+  const before = text.tokens[i - 1]?.lower;
+  if (word === 'not' && (before === 'or' || before === 'if')) return false; // "whether or not", "if not"
+  if (word === 'not' && (before === undefined || !AUXILIARIES.has(before))) return false;
+  return true;
+}
+
+export function negationScopes(text: CheckedText): NegationScope[] {
+  const scopes: NegationScope[] = [];
+  const tokens = text.tokens;
+  for (let i = 0; i < tokens.length; i++) {
+    if (!isCue(text, i)) continue;
+    const scope: number[] = [];
+    let head: number | null = null;
+    for (let k = i + 1; k < tokens.length && scope.length < NEGATION_WINDOW; k++) {
+      if (BREAK.test(text.text.slice(tokens[k - 1]!.end, tokens[k]!.start)) || TERMINATORS.has(tokens[k]!.lower) || isCue(text, k)) break;
+      scope.push(k);
+      if (head === null && tokens[k]!.term !== null && !/\d/u.test(tokens[k]!.lower)) head = k;
+    }
+    scopes.push({ cue: i, scope, head });
+  }
+  return scopes;
+}
+
+/** Whether any occurrence of `term` in the sentence lies in a negation scope, and whether any lies outside. */
+function polarityOf(text: CheckedText, scopes: readonly NegationScope[], term: string): { negated: number | null; plain: number | null } {
+  const inScope = new Set(scopes.flatMap((s) => s.scope));
+  let negated: number | null = null;
+  let plain: number | null = null;
+  text.tokens.forEach((token, i) => {
+    if (token.term !== term) return;
+    if (inScope.has(i)) negated ??= i;
+    else plain ??= i;
+  });
+  return { negated, plain };
+}
+
+/** The negated (or asserted) word with the words around it: "do not reduce missed", "reduce missed appointments". */
+function phrase(text: CheckedText, cue: number | null, head: number): string {
+  const last = Math.min(text.tokens.length - 1, head + (cue === null ? 2 : 1));
+  let first = cue ?? head;
+  if (cue !== null && cue > 0 && AUXILIARIES.has(text.tokens[cue - 1]!.lower)) first = cue - 1;
+  const end = BREAK.test(text.text.slice(text.tokens[head]!.end, text.tokens[last]!.start)) ? head : last;
+  return text.text.slice(text.tokens[first]!.start, text.tokens[end]!.end);
+}
+
+const scopeCache = new WeakMap<CheckedText, NegationScope[]>();
+function scopesOf(text: CheckedText): NegationScope[] {
+  let scopes = scopeCache.get(text);
+  if (!scopes) {
+    scopes = negationScopes(text);
+    scopeCache.set(text, scopes);
+  }
+  return scopes;
+}
+
+export const checkNegation: Detector = (input) => {
+  if (!input.language.startsWith('en')) return [];
+  const findings: RawFinding[] = [];
+  const claim = input.claim;
+  const claimScopes = scopesOf(claim);
+  const reported = new Set<string>();
+
+  const agreeing = (term: string, claimNegated: boolean, needed: number) =>
+    input.pool.some((e) => {
+      const p = polarityOf(e.checked, scopesOf(e.checked), term);
+      const same = claimNegated ? p.negated !== null : p.plain !== null && p.negated === null;
+      return same && sharedTerms(claim, e.checked, new Set([term])).length >= needed;
+    });
+
+  const consider = (term: string, claimNegated: boolean, claimToken: number, claimCue: number | null, evidence: Evidence, bodyToken: number, bodyCue: number | null) => {
+    if (reported.has(term)) return;
+    // The negated word must be said of the same thing: a content word just after it on both sides.
+    const after = (text: CheckedText, at: number) => new Set(text.tokens.slice(at + 1, at + 4).map((t) => t.term).filter((t): t is string => t !== null));
+    const objects = after(claim, claimToken);
+    if (![...after(evidence.checked, bodyToken)].some((t) => objects.has(t))) return;
+    const shared = sharedTerms(claim, evidence.checked, new Set([term])).length;
+    if (shared < MIN_SHARED_CONTEXT || agreeing(term, claimNegated, shared)) return;
+    reported.add(term);
+    findings.push({
+      kind: 'negation',
+      abstractSays: phrase(claim, claimCue, claimToken),
+      bodySays: phrase(evidence.checked, bodyCue, bodyToken),
+      evidence,
+    });
+  };
+
+  // Only the closest sentences are read for a conflict: the first support sentence and the frame.
+  const closest = [...new Set([input.support[0], input.frame].filter((e): e is Evidence => e != null))];
+  // The claim negates a word that a support sentence asserts.
+  for (const scope of claimScopes) {
+    if (scope.head === null) continue;
+    const term = claim.tokens[scope.head]!.term!;
+    for (const evidence of closest) {
+      const p = polarityOf(evidence.checked, scopesOf(evidence.checked), term);
+      if (p.plain !== null && p.negated === null) consider(term, true, scope.head, scope.cue, evidence, p.plain, null);
+    }
+  }
+  // A support sentence negates a word that the claim asserts.
+  for (const evidence of closest) {
+    for (const scope of scopesOf(evidence.checked)) {
+      if (scope.head === null) continue;
+      const term = evidence.checked.tokens[scope.head]!.term!;
+      const p = polarityOf(claim, claimScopes, term);
+      if (p.plain === null || p.negated !== null) continue;
+      const other = polarityOf(evidence.checked, scopesOf(evidence.checked), term);
+      if (other.plain !== null) continue; // the body says it both ways
+      consider(term, false, p.plain, null, evidence, scope.head, scope.cue);
+    }
+  }
+  return findings;
+};

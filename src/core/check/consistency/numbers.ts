@@ -1,0 +1,93 @@
+/**
+ * Numbers, dates and versions: the claim's quantity against the body's.
+ *   - Agreement anywhere in the pool (the same value, 50% = half) silences the check.
+ *   - Contradiction: a support sentence gives a different value for the same thing (a shared
+ *     counted word: "12 stations" against "21 stations"; "Rust 1.50" against "Rust 1.51").
+ *   - Absence: the body never states the value, while it does count the same thing somewhere
+ *     (that place is cited). A figure the body never mentions at all is left to the support rule:
+ *     abstracts cite years, releases and links the body has no reason to repeat.
+ * Ratio words ("half", "twice") only take part in contradictions: "halved" is often said of a fall
+ * the body gives as two figures.
+ */
+import type { Detector, Evidence, RawFinding } from './detector';
+import { comparable, quantitiesIn, sameQuantity, type Quantity } from './quantities';
+
+const KIND_OF: Readonly<Record<Quantity['kind'], RawFinding['kind']>> = {
+  number: 'number',
+  percent: 'number',
+  ratio: 'number',
+  date: 'date',
+  version: 'version',
+};
+
+function sharesContext(a: Quantity, b: Quantity): boolean {
+  for (const term of a.context) if (b.context.has(term)) return true;
+  return false;
+}
+
+const quantityCache = new WeakMap<Evidence, Quantity[]>();
+function quantitiesOf(evidence: Evidence): Quantity[] {
+  let found = quantityCache.get(evidence);
+  if (!found) {
+    found = quantitiesIn(evidence.checked);
+    quantityCache.set(evidence, found);
+  }
+  return found;
+}
+
+function valueText(q: Quantity): string {
+  if (q.kind === 'percent') return `${q.value}%`;
+  return String(q.value);
+}
+
+export const checkNumbers: Detector = (input) => {
+  const findings: RawFinding[] = [];
+  const claimQuantities = quantitiesIn(input.claim);
+  if (claimQuantities.length === 0) return findings;
+  const primary = input.frame ? [input.frame, ...input.support.filter((s) => s !== input.frame)] : input.support;
+  for (const claimed of claimQuantities) {
+    // Numbers inside a link target or a reference are not claims.
+    if (/[/#:=]\S*$/u.test(input.claim.text.slice(0, input.claim.tokens[claimed.token]!.start))) continue;
+    const agrees = input.pool.some((e) => quantitiesOf(e).some((q) => sameQuantity(claimed, q)));
+    if (agrees) continue;
+    let conflict: { evidence: Evidence; quantity: Quantity } | null = null;
+    for (const evidence of primary) {
+      const other = quantitiesOf(evidence).find((q) => comparable(claimed, q) && !sameQuantity(claimed, q) && sharesContext(claimed, q));
+      if (other) {
+        conflict = { evidence, quantity: other };
+        break;
+      }
+    }
+    if (conflict) {
+      findings.push({ kind: KIND_OF[claimed.kind], abstractSays: claimed.phrase, bodySays: conflict.quantity.phrase, evidence: conflict.evidence });
+      continue;
+    }
+    if (claimed.kind === 'ratio') continue;
+    if (stated(claimed, input.body.numbers, input.body.sentences)) continue;
+    // The body counts the same thing elsewhere: cite the first place.
+    let elsewhere: { evidence: Evidence; quantity: Quantity } | null = null;
+    for (const evidence of input.body.sentences) {
+      const other = quantitiesOf(evidence).find((q) => comparable(claimed, q) && sharesContext(claimed, q));
+      if (other) {
+        elsewhere = { evidence, quantity: other };
+        break;
+      }
+    }
+    if (!elsewhere) continue;
+    findings.push({
+      kind: KIND_OF[claimed.kind],
+      abstractSays: claimed.phrase,
+      bodySays: elsewhere ? elsewhere.quantity.phrase : null,
+      evidence: elsewhere?.evidence ?? null,
+      note: `the body never gives ${valueText(claimed)}`,
+    });
+  }
+  return findings;
+};
+
+/** Whether the body states the value at all (numbers by value; dates and versions as written). */
+function stated(q: Quantity, numbers: ReadonlySet<number>, body: readonly Evidence[]): boolean {
+  if (q.kind === 'number') return numbers.has(q.value as number);
+  if (q.kind === 'percent') return numbers.has(q.value as number) || numbers.has((q.value as number) / 100);
+  return body.some((e) => quantitiesOf(e).some((other) => sameQuantity(q, other)));
+}

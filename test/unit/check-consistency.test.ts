@@ -1,0 +1,139 @@
+import assert from 'node:assert/strict';
+import { checkedText } from '../../src/core/check/consistency/claim-tokens';
+import { checkComparatives } from '../../src/core/check/consistency/comparatives';
+import type { DetectorInput, Evidence } from '../../src/core/check/consistency/detector';
+import { checkIdentifiers, identifiersIn } from '../../src/core/check/consistency/identifiers';
+import { checkModality, modalUses } from '../../src/core/check/consistency/modality';
+import { checkNegation, negationScopes } from '../../src/core/check/consistency/negation';
+import { checkNumbers } from '../../src/core/check/consistency/numbers';
+import { quantitiesIn } from '../../src/core/check/consistency/quantities';
+
+// Invented demo sentences (a city bike-share and a ferry timetable), one behaviour per test.
+const evidence = (text: string, sentence = 0): Evidence => ({ sentence, checked: checkedText(text, 'en'), source: text, span: { start: 0, end: text.length } });
+
+function input(claim: string, support: readonly string[], more: readonly string[] = []): DetectorInput {
+  const supportEvidence = support.map((t, i) => evidence(t, i));
+  const pool = [...supportEvidence, ...more.map((t, i) => evidence(t, 100 + i))];
+  const numbers = new Set<number>();
+  for (const e of pool) for (const q of quantitiesIn(e.checked)) if (typeof q.value === 'number') numbers.add(q.value);
+  return {
+    claim: checkedText(claim, 'en'),
+    claimSource: claim,
+    support: supportEvidence,
+    pool,
+    frame: supportEvidence[0] ?? null,
+    body: { numbers, lowerSource: pool.map((e) => e.source.toLowerCase()).join('\n'), sentences: pool },
+    language: 'en',
+  };
+}
+
+describe('check consistency: quantities', () => {
+  it('reads digits, number words, percentages, ratio words, dates and versions with what they count', () => {
+    const found = quantitiesIn(checkedText('Twelve stations, 8,200 riders, 7.4% of trips, half the docks, 1 March 2024, version 1.2.3 and two hundred bikes.', 'en'));
+    assert.deepEqual(found.map((q) => [q.kind, q.value]), [
+      ['number', 12], ['number', 8200], ['percent', 7.4], ['ratio', 0.5], ['date', '2024-03-01'], ['version', '1.2.3'], ['number', 200],
+    ]);
+    assert.equal(found[0]!.phrase, 'Twelve stations');
+    assert.ok(found[0]!.context.has('station'));
+  });
+
+  it('does not read "one" as a count in "one of" or "this one"', () => {
+    assert.deepEqual(quantitiesIn(checkedText('One of the docks, and this one too.', 'en')), []);
+  });
+});
+
+describe('check consistency: numbers', () => {
+  it('reports a changed count of the same thing, with both sides', () => {
+    const findings = checkNumbers(input('The scheme has 12 stations in the old town.', ['The scheme has 21 stations in the old town.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.abstractSays, '12 stations');
+    assert.equal(findings[0]!.bodySays, '21 stations');
+  });
+
+  it('accepts the same value written another way (twelve = 12, 50% = half)', () => {
+    assert.deepEqual(checkNumbers(input('The scheme has twelve stations.', ['The scheme has 12 stations.'])), []);
+    assert.deepEqual(checkNumbers(input('Rebalancing trips fell by 50% in May.', ['Rebalancing trips fell by half in May.'])), []);
+  });
+
+  it('stays silent about a number the body never counts (left to the support rule)', () => {
+    assert.deepEqual(checkNumbers(input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.'])), []);
+  });
+
+  it('reports a value the body never gives when it counts the same thing elsewhere', () => {
+    const findings = checkNumbers(input('Vans moved 300 bikes a day.', ['Vans moved bikes between docks.'], ['On a busy day vans moved 240 bikes.']));
+    assert.equal(findings.length, 1);
+    assert.match(findings[0]!.note ?? '', /never gives 300/);
+    assert.equal(findings[0]!.bodySays, '240 bikes');
+  });
+});
+
+describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () => {
+  it('scopes a cue over the following words up to punctuation or a termination word', () => {
+    const scopes = negationScopes(checkedText('The ferry does not stop at the pier, but it runs late.', 'en'));
+    assert.equal(scopes.length, 1);
+    assert.equal(checkedText('The ferry does not stop at the pier, but it runs late.', 'en').tokens[scopes[0]!.head!]!.lower, 'stop');
+  });
+
+  it('ignores pseudo-negations and a contrasting "not"', () => {
+    assert.deepEqual(negationScopes(checkedText('Not only the ferry but also the bus runs late.', 'en')), []);
+    assert.deepEqual(negationScopes(checkedText('Fares are a flat rate, not a distance charge.', 'en')), []);
+  });
+
+  it('reports a flipped negation in either direction', () => {
+    const added = checkNegation(input('The new timetable does not reduce waiting times at the pier.', ['The new timetable does reduce waiting times at the pier.']));
+    assert.equal(added.length, 1);
+    assert.equal(added[0]!.abstractSays, 'does not reduce waiting');
+    const removed = checkNegation(input('The new timetable does reduce waiting times at the pier.', ['The new timetable does not reduce waiting times at the pier.']));
+    assert.equal(removed.length, 1);
+  });
+
+  it('stays silent when the pool agrees with the claim', () => {
+    const findings = checkNegation(input('The new timetable does not reduce waiting times at the pier.', ['The new timetable does reduce waiting times at the pier.'], ['The new timetable does not reduce waiting times at the pier much.']));
+    assert.deepEqual(findings, []);
+  });
+});
+
+describe('check consistency: modality', () => {
+  it('groups modal verbs by strength and finds the word each governs', () => {
+    const uses = modalUses(checkedText('Operators must publish the timetable and may add a late crossing.', 'en'));
+    assert.deepEqual(uses.map((u) => u.modalClass), ['obligation', 'possibility']);
+  });
+
+  it('reports must against may on the same verb, and accepts a plain statement for "will"', () => {
+    const swapped = checkModality(input('Operators must publish the winter timetable online.', ['Operators may publish the winter timetable online.']));
+    assert.equal(swapped.length, 1);
+    assert.equal(swapped[0]!.abstractSays, 'must publish');
+    assert.equal(swapped[0]!.bodySays, 'may publish');
+    assert.deepEqual(checkModality(input('Operators will publish the winter timetable online.', ['Operators publish the winter timetable online.'])), []);
+  });
+});
+
+describe('check consistency: comparatives', () => {
+  it('reports faster against slower about the same thing', () => {
+    const findings = checkComparatives(input('Electric bikes are faster on the hill routes.', ['Electric bikes are slower on the hill routes.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.abstractSays, 'faster');
+  });
+
+  it('needs "more"/"less" to qualify the same word', () => {
+    assert.deepEqual(checkComparatives(input('Riders made more trips in summer.', ['Riders made fewer complaints in summer.'])), []);
+    assert.equal(checkComparatives(input('Riders made more trips in summer.', ['Riders made fewer trips in summer.'])).length, 1);
+  });
+});
+
+describe('check consistency: identifiers', () => {
+  it('reads code spans, options, file names and paths from the source', () => {
+    const found = identifiersIn('Set `max_docks` with --dock-limit in fleet.toml or call fleet::rebalance() here.');
+    assert.deepEqual(found.map((i) => [i.kind, i.text]), [['code', 'max_docks'], ['option', '--dock-limit'], ['file', 'fleet.toml'], ['path', 'fleet::rebalance']]);
+  });
+
+  it('reports a swapped identifier in the same slot, and an option the body never mentions', () => {
+    const swap = checkIdentifiers(input('The planner reads `dock_limit` from the config file.', ['The planner reads `van_capacity` from the config file.']));
+    assert.equal(swap.length, 1);
+    assert.equal(swap[0]!.bodySays, 'van_capacity');
+    const absent = checkIdentifiers(input('Start the planner with --night-mode enabled.', ['Start the planner with the night settings enabled.']));
+    assert.equal(absent.length, 1);
+    assert.match(absent[0]!.note ?? '', /never mentions --night-mode/);
+    assert.deepEqual(checkIdentifiers(input('The planner reads `dock_limit` at start.', ['The planner reads `dock_limit` at start.'])), []);
+  });
+});

@@ -1,0 +1,53 @@
+import assert from 'node:assert/strict';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+const BIN = join(process.cwd(), 'src', 'cli', 'bin.ts');
+const DEMO = join('media', 'demo', 'abstract-check.md');
+
+function tersely(args: string[]) {
+  const result = spawnSync(process.execPath, ['--import', 'tsx', BIN, ...args], { encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' } });
+  return { code: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+describe('command line: tersely check', function () {
+  this.timeout(120_000);
+
+  it('exits 0 without --strict whatever it finds, and 1 with --strict when something is flagged', () => {
+    assert.equal(tersely(['check', DEMO]).code, 0);
+    const strict = tersely(['check', DEMO, '--strict']);
+    assert.equal(strict.code, 1, strict.stderr);
+    assert.match(strict.stdout, /2 sentences contradicted, 1 sentence unsupported, 2 sections not covered\./);
+  });
+
+  it('exits 0 with --strict when every section is covered and every sentence supported', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'tersely-check-'));
+    const file = join(dir, 'ferry.md');
+    writeFileSync(file, [
+      '# Harbour ferry', '', '## Summary', '', 'From May the harbour ferry adds a late crossing at eleven on Fridays and Saturdays.', '',
+      '## Timetable', '', 'From May the harbour ferry adds a late crossing at eleven on Fridays and Saturdays, and the early crossing moves from half past six to six.', '',
+    ].join('\n'));
+    const run = tersely(['check', file, '--strict']);
+    assert.equal(run.code, 0, run.stdout + run.stderr);
+    assert.match(run.stdout, /Every section is covered and every abstract sentence is supported by the body\./);
+  });
+
+  it('exits 2 on a usage error', () => {
+    assert.equal(tersely(['check', DEMO, '--strict', '--format', 'yaml']).code, 2);
+    assert.equal(tersely(['check']).code, 2);
+  });
+
+  it('names the changed number and the flipped negation with both sides and the body line, and explains ROUGE in one sentence', () => {
+    const { stdout } = tersely(['check', DEMO]);
+    assert.match(stdout, /abstract: 301 appointments — the body never gives 301; nearest, line 50: 310 cancellations/);
+    assert.match(stdout, /abstract: do not reduce missed — body, line 84: reduce missed appointments/);
+    const rouge = stdout.split('\n').filter((line) => line.includes('ROUGE counts'));
+    assert.equal(rouge.length, 1);
+    assert.equal(rouge[0]!.trim().split(/(?<=[.:])\s+(?=[A-Z])/u).length, 1);
+    // One rule: no section is called "not covered" while a sentence cites it as support.
+    const notCovered = [...stdout.matchAll(/✗ (.+?) \(line \d+\): not covered/gu)].map((m) => m[1]!);
+    for (const heading of notCovered) assert.doesNotMatch(stdout, new RegExp(`supported \\(line \\d+\\): [^\\n]*\\(${heading}\\)`));
+  });
+});
