@@ -13,10 +13,15 @@ import { inputProblem } from './input-guard';
 import { findStandAloneProblems, repairAutomatically } from './coherence/index';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankResult, Summary } from './types';
 
+/** The pipeline's stages as a caller may show them while it waits. */
+export type SummarizeStage = 'reading' | 'ranking' | 'checking';
+
 export interface SummarizeRequest extends Partial<Record<keyof SummaryOptions, unknown>> {
   readonly format?: DocumentFormat;
   /** Offset of `text` in the whole document when summarizing a selection. */
   readonly baseOffset?: number;
+  /** Called as each stage begins (the editor's engine host forwards them as progress). */
+  readonly onStage?: (stage: SummarizeStage) => void;
 }
 
 export function summarize(text: string, request: SummarizeRequest = {}): Summary {
@@ -27,10 +32,13 @@ export function summarize(text: string, request: SummarizeRequest = {}): Summary
   const problem = inputProblem(text, options.maxChars);
   if (problem) return refusedSummary(text, format, baseOffset, options, problem);
 
+  request.onStage?.('reading');
   const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables });
   const language = resolveLanguage(doc, options.language);
   const analyzed = analyze(doc, language);
+  request.onStage?.('ranking');
   const ranked = rankWith(options.method, analyzed, options);
+  request.onStage?.('checking');
   return summarizeRanked(analyzed, ranked, options);
 }
 
