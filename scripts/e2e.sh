@@ -7,7 +7,11 @@
 #   1. installs the .vsix into a fresh editor and runs the UI script (test/e2e/ui.e2e.ts) in
 #      Chromium: palette command, panel, highlights, click-to-reveal, live mode, payload document;
 #   2. starts a second fresh editor and runs the in-editor mocha suite with the real vscode API
-#      (test/e2e/run-in-editor.ts; E2E_RUNNER=electron uses @vscode/test-electron instead).
+#      (test/e2e/run-in-editor.ts; E2E_RUNNER=electron uses @vscode/test-electron instead);
+#   3. installs the .vsix into a third editor whose user settings put Tersely in the web worker
+#      extension host (`remote.extensionKind`), so the `browser` bundle runs, and drives it
+#      (test/e2e/web-host.e2e.ts).
+# Editor timings (activation, first and later summaries) go to test-artifacts/editor-timings.json.
 # Screenshots and logs go to test-artifacts/. The servers bind to 127.0.0.1 only and are stopped
 # (whole process group) on exit.
 set -euo pipefail
@@ -76,7 +80,7 @@ RUN=$(mktemp -d "$ROOT/.e2e/run.XXXXXX")
 mkdir -p "$RUN/tmp" "$RUN/xdg-config" "$RUN/xdg-data" "$RUN/xdg-cache"
 export XDG_CONFIG_HOME="$RUN/xdg-config" XDG_DATA_HOME="$RUN/xdg-data" XDG_CACHE_HOME="$RUN/xdg-cache"
 export EXTENSIONS_GALLERY='{}' # no marketplace
-for ws in workspace-ui workspace-suite; do
+for ws in workspace-ui workspace-suite workspace-web; do
   mkdir -p "$RUN/$ws" && cp "$ROOT"/media/demo/*.md "$RUN/$ws/"
 done
 
@@ -118,9 +122,13 @@ start_server() {
   "tersely.length.value": 6
 }
 JSON
+  if [ "$name" = web ]; then
+    # Both `main` and `browser`: this user setting moves the extension to the web worker host.
+    node -e 'const f=process.argv[1]; const s=JSON.parse(require("fs").readFileSync(f,"utf8")); s["remote.extensionKind"]={"tersely.tersely":["web"]}; require("fs").writeFileSync(f, JSON.stringify(s, null, 2));' "$RUN/$name/user-data/User/settings.json"
+  fi
   printf 'bind-addr: 127.0.0.1:%s\nauth: none\ncert: false\n' "$port" > "$RUN/$name/config.yaml"
   COMMON=(--config "$RUN/$name/config.yaml" --user-data-dir "$RUN/$name/user-data" --extensions-dir "$RUN/$name/extensions")
-  if [ "$name" = ui ]; then
+  if [ "$name" = ui ] || [ "$name" = web ]; then
     "$CS" "${COMMON[@]}" --install-extension "$ROOT/.e2e/tersely.vsix" > "$RUN/$name/install.log" 2>&1 || { cat "$RUN/$name/install.log"; exit 1; }
   fi
   TMPDIR="$RUN/tmp" setsid "$CS" "${COMMON[@]}" --bind-addr "127.0.0.1:$port" --auth none --disable-telemetry --disable-update-check \
@@ -133,12 +141,13 @@ JSON
   BASE="http://127.0.0.1:$port"
 }
 
-ONLY=${E2E_ONLY:-all} # ui | suite | all (for working on one part)
+ONLY=${E2E_ONLY:-all} # ui | suite | web | all (for working on one part)
 UI_RC=0
 SUITE_RC=0
+WEB_RC=0
 
 # ---------- 1. UI script against the installed VSIX ----------
-if [ "$ONLY" != suite ]; then
+if [ "$ONLY" = all ] || [ "$ONLY" = ui ]; then
 start_server ui
 step "editor up for the UI script ($BASE)"
 npx --no-install tsx test/e2e/ui.e2e.ts "$BASE" "$RUN/workspace-ui" "$ARTIFACTS" "$RUN/ui/user-data/User/settings.json" 2>&1 | tee "$ARTIFACTS/ui.log" || UI_RC=$?
@@ -147,7 +156,7 @@ step "UI script: exit code $UI_RC"
 fi
 
 # ---------- 2. in-editor mocha suite (extension under development) ----------
-if [ "$ONLY" != ui ]; then
+if [ "$ONLY" = all ] || [ "$ONLY" = suite ]; then
 start_server suite
 step "editor up for the in-editor suite ($BASE)"
 npx --no-install tsx test/e2e/run-in-editor.ts "$ROOT" "$RUN/workspace-suite" "$BASE" 2>&1 | tee "$ARTIFACTS/suite.log" || SUITE_RC=$?
@@ -155,8 +164,17 @@ stop_server
 step "in-editor suite: exit code $SUITE_RC"
 fi
 
-cp "$RUN"/ui/server.log "$ARTIFACTS/server-ui.log" 2>/dev/null || true
-cp "$RUN"/suite/server.log "$ARTIFACTS/server-suite.log" 2>/dev/null || true
+# ---------- 3. the browser bundle in the web worker extension host ----------
+if [ "$ONLY" = all ] || [ "$ONLY" = web ]; then
+start_server web
+step "editor up for the web worker host ($BASE)"
+npx --no-install tsx test/e2e/web-host.e2e.ts "$BASE" "$RUN/workspace-web" "$ARTIFACTS" "$RUN/web/user-data/User/settings.json" 2>&1 | tee "$ARTIFACTS/web.log" || WEB_RC=$?
+stop_server
+step "web worker host: exit code $WEB_RC"
+fi
+
+for name in ui suite web; do cp "$RUN/$name/server.log" "$ARTIFACTS/server-$name.log" 2>/dev/null || true; done
 rm -rf "$RUN"
+[ -f "$ARTIFACTS/editor-timings.json" ] && { step "editor timings (test-artifacts/editor-timings.json):"; cat "$ARTIFACTS/editor-timings.json"; }
 step "done (screenshots and logs in test-artifacts/)"
-[ "$UI_RC" = 0 ] && [ "$SUITE_RC" = 0 ]
+[ "$UI_RC" = 0 ] && [ "$SUITE_RC" = 0 ] && [ "$WEB_RC" = 0 ]

@@ -5,8 +5,9 @@
  */
 import * as vscode from 'vscode';
 import type { RepairArgs } from './diagnostics';
+import type { TerselyContext } from './context';
 import type { CommandId } from './ids';
-import type { SummarizeOutcome, TerselyContext } from './tersely-context';
+import type { SummarizeOutcome } from './summarizer';
 
 type CommandHandler = (context: TerselyContext, ...args: unknown[]) => unknown;
 
@@ -33,25 +34,25 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
   'tersely.summarizeDocument': (context) =>
     withEditor(context, async (editor) => {
       void context.panel.show();
-      return outcomeResult(await context.summarize(editor, 'document', 'command'));
+      return outcomeResult(await context.summarizer.summarize(editor, 'document', 'command'));
     }),
   'tersely.summarizeSelection': (context) =>
     withEditor(context, async (editor) => {
       void context.panel.show();
-      return outcomeResult(await context.summarize(editor, 'selection', 'command'));
+      return outcomeResult(await context.summarizer.summarize(editor, 'selection', 'command'));
     }),
-  'tersely.insertSummary': (context) => withEditor(context, (editor) => context.insertSummary(editor)),
-  'tersely.copySummary': (context) => context.copySummary(context.targetEditor()),
-  'tersely.clearHighlights': (context) => context.clearHighlights(),
-  'tersely.toggleLive': (context) => context.toggleLive(),
-  'tersely.checkAbstract': (context) => withEditor(context, (editor) => context.checkAbstract(editor)),
+  'tersely.insertSummary': (context) => withEditor(context, (editor) => context.actions.insertSummary(editor)),
+  'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
+  'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
+  'tersely.toggleLive': (context) => context.live.toggle(),
+  'tersely.checkAbstract': (context) => withEditor(context, (editor) => context.abstractCheck.run(editor)),
   'tersely.showPanel': (context) => context.panel.show(),
   'tersely.applyRepair': (context, args) => {
     if (!isRepairArgs(args)) {
       context.log.warn('tersely.applyRepair was called without a valid repair.');
       return false;
     }
-    return context.repair(args);
+    return context.actions.repair(args);
   },
 };
 

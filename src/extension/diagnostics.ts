@@ -5,6 +5,7 @@
  */
 import * as vscode from 'vscode';
 import type { StandAloneWarning, Summary } from '../core/index';
+import { rangeOf } from './editor-ranges';
 import { DIAGNOSTIC_SOURCE, STAND_ALONE_CODE } from './ids';
 import { repairLabel } from './panel-model';
 import { checkedSpan } from './ranges';
@@ -21,8 +22,7 @@ export function standAloneDiagnostics(document: vscode.TextDocument, summary: Su
   summary.warnings.forEach((warning: StandAloneWarning) => {
     const span = checkedSpan(warning.span, text);
     if (!span) return;
-    const range = new vscode.Range(document.positionAt(span.start), document.positionAt(span.end));
-    const diagnostic = new vscode.Diagnostic(range, `Summary sentence may not stand alone: ${warning.message}`, vscode.DiagnosticSeverity.Information);
+    const diagnostic = new vscode.Diagnostic(rangeOf(document, span), `Summary sentence may not stand alone: ${warning.message}`, vscode.DiagnosticSeverity.Information);
     diagnostic.source = DIAGNOSTIC_SOURCE;
     diagnostic.code = STAND_ALONE_CODE;
     diagnostic.relatedInformation = warning.context
@@ -34,7 +34,7 @@ export function standAloneDiagnostics(document: vscode.TextDocument, summary: Su
       .map(
         (contextSpan) =>
           new vscode.DiagnosticRelatedInformation(
-            new vscode.Location(document.uri, new vscode.Range(document.positionAt(contextSpan.start), document.positionAt(contextSpan.end))),
+            new vscode.Location(document.uri, rangeOf(document, contextSpan)),
             'The context the sentence relies on',
           ),
       );

@@ -1,24 +1,46 @@
-/** Messages between the extension host and the engine worker. */
-import type { AbstractReport, DocumentFormat, Summary } from '../core/index';
+/**
+ * The one protocol between the extension and its engine host. Both hosts speak it: a Node worker
+ * thread (desktop editor) and a Web Worker (browser editor). Messages are plain data, so they
+ * survive structured cloning in either.
+ *
+ * The model travels once per host: `model` carries it with a key (file, modification time,
+ * size), the host validates and keeps it, and each job names the key it expects. Document text
+ * and settings travel with every job.
+ */
+import type { AbstractReport, DocumentFormat, Summary, SummaryStage as SummarizeStage } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
+export type EngineStage = SummarizeStage;
+
+/** A trained sentence model as the extension read it, with the key the host caches it under. */
+export interface EngineModel {
+  readonly key: string;
+  readonly model: unknown;
+}
+
 export type EngineTask =
-  | { readonly kind: 'summarize'; readonly text: string; readonly options: EngineRequestOptions }
+  | { readonly kind: 'summarize'; readonly text: string; readonly options: Omit<EngineRequestOptions, 'model'> }
   | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: { readonly format: DocumentFormat; readonly language: string } };
 
-export type EngineJob = EngineTask & { readonly id: number };
+/** Extension → host. */
+export type ToEngine =
+  | { readonly type: 'model'; readonly key: string; readonly model: unknown }
+  /** `modelKey`: the model a summarize job must use (the one last sent); absent means the built-in one. */
+  | { readonly type: 'job'; readonly id: number; readonly task: EngineTask; readonly modelKey?: string };
 
-export type EngineReply =
+export type EngineResult =
   | {
-      readonly id: number;
-      readonly ok: true;
       readonly kind: 'summarize';
+      /** `document.text` is left empty: the extension has the text already. */
       readonly summary: Summary;
-      /** Set when the model file was rejected and the built-in model was used instead. */
+      /** Set when the model was rejected and the built-in model was used instead. */
       readonly modelProblem?: string;
       readonly elapsedMs: number;
     }
-  | { readonly id: number; readonly ok: true; readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
-  | { readonly id: number; readonly ok: false; readonly error: string };
+  | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number };
 
-export type EngineResult = Extract<EngineReply, { ok: true }>;
+/** Host → extension. */
+export type FromEngine =
+  | { readonly type: 'stage'; readonly id: number; readonly stage: EngineStage }
+  | { readonly type: 'done'; readonly id: number; readonly result: EngineResult }
+  | { readonly type: 'failed'; readonly id: number; readonly error: string };

@@ -1,20 +1,10 @@
-/** Entry point: activation only builds the context and registers commands (no engine work). */
-import type * as vscode from 'vscode';
-import { registerCommands } from './commands';
-import { TerselyContext, type TerselyApi } from './tersely-context';
-
-let active: TerselyContext | undefined;
+/** Entry point for the desktop editor (package.json `main`): the engine runs in Node worker threads. */
+import * as vscode from 'vscode';
+import { activateWith } from './activate';
+import type { TerselyApi } from './api';
+import { nodeWorkerScript } from './engine-host-node';
 
 export function activate(extension: vscode.ExtensionContext): TerselyApi {
-  const started = performance.now();
-  const context = new TerselyContext(extension);
-  active = context;
-  extension.subscriptions.push(context, ...registerCommands(context));
-  context.log.info(`Activated in ${(performance.now() - started).toFixed(1)} ms.`);
-  return context.api();
-}
-
-export function deactivate(): void {
-  active?.dispose();
-  active = undefined;
+  const script = vscode.Uri.joinPath(extension.extensionUri, 'dist', 'engine-worker.cjs').fsPath;
+  return activateWith(extension, { kind: 'node worker thread', lane: () => nodeWorkerScript(script), dispose: () => undefined });
 }

@@ -5,6 +5,7 @@
  * No editor API here: the webview bundle imports these types too.
  */
 import type { RankerName, SummaryStats } from '../core/index';
+import type { EngineStage } from './engine-protocol';
 import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from './settings';
 
 // ---------- what the panel shows (extension → webview) ----------
@@ -87,10 +88,33 @@ export interface PanelControls {
 
 export type NoticeKind = 'info' | 'stale' | 'tooLarge' | 'error';
 
+/** `waiting`: the job is sent and the engine host has not begun it yet (it may still be starting). */
+export type ProgressStage = 'waiting' | EngineStage | 'checkingAbstract';
+
+export interface PanelProgress {
+  readonly task: 'summarize' | 'checkAbstract';
+  readonly stage: ProgressStage;
+}
+
+/** The stages a summary goes through, in order, with the words the panel and status area show. */
+export const SUMMARY_STAGES: readonly { readonly stage: EngineStage; readonly label: string }[] = [
+  { stage: 'reading', label: 'Reading the document' },
+  { stage: 'ranking', label: 'Ranking sentences' },
+  { stage: 'checking', label: 'Picking and checking sentences' },
+];
+
+export function progressLabel(progress: PanelProgress): string {
+  if (progress.task === 'checkAbstract') return 'Checking the abstract…';
+  const step = SUMMARY_STAGES.findIndex((entry) => entry.stage === progress.stage);
+  if (step < 0) return 'Summarizing: waiting for the engine…';
+  return `Summarizing: ${SUMMARY_STAGES[step]!.label.toLowerCase()} (step ${step + 1} of ${SUMMARY_STAGES.length})…`;
+}
+
 export type ToPanel =
   | { readonly type: 'summary'; readonly summary: PanelSummary }
   | { readonly type: 'controls'; readonly controls: PanelControls }
-  | { readonly type: 'busy'; readonly busy: boolean }
+  /** null: nothing is running (or it is quick enough not to show). */
+  | { readonly type: 'progress'; readonly progress: PanelProgress | null }
   | { readonly type: 'notice'; readonly kind: NoticeKind; readonly text: string }
   | { readonly type: 'abstractCheck'; readonly check: PanelAbstractCheck | null }
   | { readonly type: 'clear' };
@@ -186,8 +210,10 @@ export function isToPanel(raw: unknown): raw is ToPanel {
       return isRecord(raw['summary']) && Array.isArray(raw['summary']['groups']) && isRecord(raw['summary']['figures']);
     case 'controls':
       return isRecord(raw['controls']);
-    case 'busy':
-      return typeof raw['busy'] === 'boolean';
+    case 'progress': {
+      const progress = raw['progress'];
+      return progress === null || (isRecord(progress) && typeof progress['task'] === 'string' && typeof progress['stage'] === 'string');
+    }
     case 'notice':
       return typeof raw['text'] === 'string' && typeof raw['kind'] === 'string';
     case 'abstractCheck':

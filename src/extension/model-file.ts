@@ -2,20 +2,22 @@
  * Loads the trained sentence model named by `tersely.modelFile`. Workspace Trust: in an
  * untrusted workspace no model file is read at all (package.json also marks the setting as
  * restricted, so a workspace cannot set it there). A malformed file gives one clear message and
- * the engine's built-in model is used.
+ * the engine's built-in model is used. Read through the editor's file system API, so the same
+ * code works in the desktop editor and in the browser editor's web worker.
  */
 import * as vscode from 'vscode';
+import type { EngineModel } from './engine-protocol';
 
 const MAX_MODEL_BYTES = 20 * 1024 * 1024;
 
 export type ModelValidator = (json: unknown) => { ok: true; model: unknown } | { ok: false; error: string };
 
 /** Until a stricter validator is plugged in, only the outer shape is checked here. */
-export const shapeOnly: ModelValidator = (json) =>
+const shapeOnly: ModelValidator = (json) =>
   typeof json === 'object' && json !== null && !Array.isArray(json) ? { ok: true, model: json } : { ok: false, error: 'the file is not a JSON object' };
 
 export class ModelFiles {
-  private cache: { key: string; model: unknown } | undefined;
+  private cache: EngineModel | undefined;
   private readonly reported = new Set<string>();
 
   constructor(
@@ -23,8 +25,11 @@ export class ModelFiles {
     private readonly validate: ModelValidator = shapeOnly,
   ) {}
 
-  /** The model to pass to the engine, or undefined for the built-in one. */
-  async load(setting: string): Promise<unknown> {
+  /**
+   * The model for the engine with a key that changes when the file does (the engine host keeps
+   * the model under that key), or undefined for the built-in one.
+   */
+  async load(setting: string): Promise<EngineModel | undefined> {
     if (!setting) return undefined;
     if (!vscode.workspace.isTrusted) {
       this.once(`untrusted:${setting}`, () => this.log.info('tersely.modelFile is ignored: this workspace is not trusted.'));
@@ -42,7 +47,7 @@ export class ModelFiles {
         return undefined;
       }
       const key = `${uri.toString()}@${stat.mtime}:${stat.size}`;
-      if (this.cache?.key === key) return this.cache.model;
+      if (this.cache?.key === key) return this.cache;
       const bytes = await vscode.workspace.fs.readFile(uri);
       let json: unknown;
       try {
@@ -57,8 +62,8 @@ export class ModelFiles {
         return undefined;
       }
       this.cache = { key, model: checked.model };
-      this.log.info(`Loaded the sentence model from ${uri.fsPath}.`);
-      return checked.model;
+      this.log.info(`Loaded the sentence model from ${uri.toString(true)}.`);
+      return this.cache;
     } catch (error) {
       this.fail(setting, error instanceof Error ? error.message : String(error));
       return undefined;
@@ -66,8 +71,12 @@ export class ModelFiles {
   }
 
   private resolve(setting: string): vscode.Uri | undefined {
-    if (setting.startsWith('/') || /^[a-zA-Z]:[\\/]/.test(setting)) return vscode.Uri.file(setting);
     const folder = vscode.workspace.workspaceFolders?.[0];
+    if (setting.startsWith('/') || /^[a-zA-Z]:[\\/]/.test(setting)) {
+      // An absolute path lives where the workspace does (a remote or browser workspace is not `file:`).
+      const path = vscode.Uri.file(setting).path;
+      return folder ? folder.uri.with({ path, query: '', fragment: '' }) : vscode.Uri.file(setting);
+    }
     return folder ? vscode.Uri.joinPath(folder.uri, setting) : undefined;
   }
 

@@ -2,8 +2,6 @@
  * The side panel's HTML shell. It carries no document text at all: content arrives later by
  * message and is rendered with DOM calls. Deny-by-default CSP; the one script runs by nonce.
  */
-import { randomBytes } from 'node:crypto';
-
 export interface PanelHtmlInput {
   /** The webview's own origin for local resources (`webview.cspSource`). */
   readonly cspSource: string;
@@ -12,9 +10,15 @@ export interface PanelHtmlInput {
   readonly styleUri: string;
 }
 
-/** 128 bits from the system's CSPRNG, base64 (a valid CSP nonce). */
-export function makeNonce(): string {
-  return randomBytes(16).toString('base64');
+/** The part of Web Crypto a nonce needs; both extension hosts (Node 20 and a Web Worker) have it. */
+export interface RandomSource {
+  getRandomValues<T extends Uint8Array>(array: T): T;
+}
+
+/** 128 bits from the platform's CSPRNG (Web Crypto), base64 (a valid CSP nonce). */
+export function makeNonce(random: RandomSource = globalThis.crypto): string {
+  const bytes = random.getRandomValues(new Uint8Array(16));
+  return btoa(String.fromCharCode(...bytes));
 }
 
 export function contentSecurityPolicy(cspSource: string, nonce: string): string {

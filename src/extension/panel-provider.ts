@@ -4,7 +4,7 @@
  * the webview sends before handing it on.
  */
 import * as vscode from 'vscode';
-import { parsePanelMessage, type FromPanel, type ToPanel } from './messages';
+import { parsePanelMessage, type FromPanel, type PanelProgress, type ToPanel } from './messages';
 import { makeNonce, panelHtml } from './panel-html';
 import { VIEW_ID } from './ids';
 
@@ -13,7 +13,9 @@ type Remembered = Partial<Record<ToPanel['type'], ToPanel>>;
 export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposable {
   private view: vscode.WebviewView | undefined;
   private readonly remembered: Remembered = {};
-  private busyCount = 0;
+  /** Jobs showing progress, oldest first; the panel shows the newest. */
+  private readonly progress = new Map<number, PanelProgress>();
+  private nextProgress = 1;
   private readonly disposables: vscode.Disposable[] = [];
   /** Messages rejected so far (tests read it through the extension's API). */
   rejectedMessages = 0;
@@ -22,7 +24,7 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     private readonly extensionUri: vscode.Uri,
     private readonly onMessage: (message: FromPanel) => void,
     private readonly log: vscode.LogOutputChannel,
-    /** Called when the panel first opens: a good moment to start the engine thread. */
+    /** Called when the panel opens: a good moment to start the engine host. */
     private readonly onFirstShow: () => void = () => undefined,
   ) {}
 
@@ -68,14 +70,27 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     void this.view?.webview.postMessage(message);
   }
 
-  /** Nested busy periods (a cancelled request and its successor) end only when the last one ends. */
-  busy(on: boolean): void {
-    this.busyCount = Math.max(0, this.busyCount + (on ? 1 : -1));
-    this.post({ type: 'busy', busy: this.busyCount > 0 });
+  /** Overlapping jobs (a cancelled request and its successor) each hold a token; progress ends with the last. */
+  beginProgress(progress: PanelProgress): number {
+    const token = this.nextProgress++;
+    this.progress.set(token, progress);
+    this.postProgress();
+    return token;
   }
 
-  get isVisible(): boolean {
-    return this.view?.visible ?? false;
+  updateProgress(token: number, progress: PanelProgress): void {
+    if (!this.progress.has(token)) return;
+    this.progress.set(token, progress);
+    this.postProgress();
+  }
+
+  endProgress(token: number): void {
+    if (this.progress.delete(token)) this.postProgress();
+  }
+
+  private postProgress(): void {
+    const newest = [...this.progress.values()].at(-1) ?? null;
+    this.post({ type: 'progress', progress: newest });
   }
 
   /** Makes the panel visible without taking focus from the editor when possible. */
@@ -88,7 +103,7 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
   }
 
   private replay(): void {
-    for (const type of ['controls', 'summary', 'notice', 'abstractCheck', 'busy'] as const) {
+    for (const type of ['controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {
       const message = this.remembered[type];
       if (message) void this.view?.webview.postMessage(message);
     }

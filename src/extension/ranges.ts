@@ -1,8 +1,7 @@
 /**
- * The one place where engine spans (0-based UTF-16 offsets, half-open `[start, end)`) meet the
- * editor's line/character positions. Free of the editor API: the editor's document is passed in
- * as anything with `positionAt`, and `LineIndex` does the same conversion for tests and for code
- * that only has a string.
+ * Engine spans (0-based UTF-16 offsets, half-open `[start, end)`) checked against the text they
+ * are shown in, and the editor's line/character rules for code that only has a string. Free of
+ * the editor API; the one span → editor range conversion is `rangeOf` in editor-ranges.ts.
  */
 import type { Span } from '../core/index';
 
@@ -13,15 +12,11 @@ export interface LinePosition {
   readonly character: number;
 }
 
-export interface OffsetConverter {
-  positionAt(offset: number): LinePosition;
-}
-
 /**
  * Line starts of a text, with the editor's rules: `\r\n`, `\n` and a lone `\r` each end a line,
  * and an offset inside a `\r\n` pair or past the end is clamped as the editor does.
  */
-export class LineIndex implements OffsetConverter {
+export class LineIndex {
   private readonly starts: number[] = [0];
 
   constructor(private readonly text: string) {
@@ -94,11 +89,6 @@ export function checkedSpan(span: Span, text: string): Span | null {
   if (safeStart > 0 && isLowSurrogate(text.charCodeAt(safeStart)) && isHighSurrogate(text.charCodeAt(safeStart - 1))) safeStart--;
   if (safeEnd < text.length && isLowSurrogate(text.charCodeAt(safeEnd)) && isHighSurrogate(text.charCodeAt(safeEnd - 1))) safeEnd++;
   return { start: safeStart, end: safeEnd };
-}
-
-/** A span as two editor positions; `make` builds the editor's own range type. */
-export function spanToRange<R>(span: Span, document: OffsetConverter, make: (start: LinePosition, end: LinePosition) => R): R {
-  return make(document.positionAt(span.start), document.positionAt(span.end));
 }
 
 /** Index of the span that contains `offset` (start inclusive, end exclusive), or -1. Spans must be sorted and disjoint. */

@@ -1,10 +1,11 @@
 /**
- * Talks to the engine worker. At most one job runs; a newer job (or an abort) cancels the running
- * one by terminating its thread, and a fresh thread starts for the next job. Replies to jobs that
- * are no longer running are ignored. No editor API here, so it is tested under Node.
+ * The extension's side of the engine protocol, whichever host runs the engine. At most one job
+ * runs; a newer job (or an abort) cancels the running one by terminating its host, and a fresh
+ * host starts for the next job. Replies to jobs that are no longer running are ignored. Each host
+ * is sent the model once (again only when it changes). The host itself is behind `StartHost`, a
+ * small adapter (engine-host-node.ts, engine-host-web.ts). No editor API here: tested under Node.
  */
-import type { Worker } from 'node:worker_threads';
-import type { EngineJob, EngineReply, EngineResult, EngineTask } from './engine-protocol';
+import type { EngineModel, EngineResult, EngineStage, EngineTask, FromEngine, ToEngine } from './engine-protocol';
 
 export class CancelledError extends Error {
   constructor() {
@@ -13,63 +14,105 @@ export class CancelledError extends Error {
   }
 }
 
+/** What the client hears from a host. */
+export interface HostListener {
+  message(message: FromEngine): void;
+  /** The host failed to start, crashed or exited: it is gone. */
+  failed(error: Error): void;
+}
+
+/** A started host. After `terminate` it delivers nothing more. */
+export interface HostConnection {
+  post(message: ToEngine): void;
+  terminate(): void;
+}
+
+export type StartHost = (listener: HostListener) => HostConnection;
+
+export interface RunOptions {
+  readonly signal?: AbortSignal;
+  readonly onStage?: (stage: EngineStage) => void;
+}
+
 interface RunningJob {
   readonly id: number;
   readonly resolve: (result: EngineResult) => void;
   readonly reject: (error: Error) => void;
+  readonly onStage: ((stage: EngineStage) => void) | undefined;
   readonly detach: () => void;
 }
 
+interface LiveHost {
+  readonly connection: HostConnection;
+  /** Key of the model this host holds. */
+  modelKey: string | undefined;
+}
+
 export class EngineClient {
-  private worker: Worker | null = null;
+  private host: LiveHost | null = null;
   private running: RunningJob | null = null;
+  private model: EngineModel | undefined;
   private nextId = 1;
   private disposed = false;
-  /** Threads started so far (for the output channel and tests). */
-  startedWorkers = 0;
+  /** Hosts started so far (for the output channel and tests). */
+  startedHosts = 0;
 
   constructor(
-    private readonly createWorker: () => Worker,
+    private readonly startHost: StartHost,
     private readonly log: (line: string) => void = () => undefined,
   ) {}
 
-  get busy(): boolean {
-    return this.running !== null;
-  }
-
-  run(task: EngineTask, signal?: AbortSignal): Promise<EngineResult> {
+  run(task: EngineTask, options: RunOptions = {}): Promise<EngineResult> {
+    const { signal, onStage } = options;
     if (this.disposed) return Promise.reject(new Error('The engine has been shut down.'));
     if (signal?.aborted) return Promise.reject(new CancelledError());
     this.cancel();
-    const worker = this.ensureWorker();
+    let host: LiveHost;
+    try {
+      host = this.ensureHost();
+    } catch (error) {
+      return Promise.reject(error instanceof Error ? error : new Error(String(error)));
+    }
     const id = this.nextId++;
     return new Promise<EngineResult>((resolve, reject) => {
       const onAbort = (): void => {
         if (this.running?.id === id) this.cancel();
       };
       signal?.addEventListener('abort', onAbort, { once: true });
-      this.running = { id, resolve, reject, detach: () => signal?.removeEventListener('abort', onAbort) };
-      const job: EngineJob = { ...task, id };
-      worker.postMessage(job);
+      this.running = { id, resolve, reject, onStage, detach: () => signal?.removeEventListener('abort', onAbort) };
+      const modelKey = task.kind === 'summarize' ? this.model?.key : undefined;
+      host.connection.post(modelKey !== undefined ? { type: 'job', id, task, modelKey } : { type: 'job', id, task });
     });
   }
 
-  /** Starts the thread ahead of the first job (loading the engine takes a moment on a cold start). */
-  warm(): void {
-    if (!this.disposed) this.ensureWorker();
+  /** The model summarize jobs use from now on (undefined: the built-in one). Sent to the host only when it changes. */
+  useModel(model: EngineModel | undefined): void {
+    this.model = model;
+    if (this.host) this.sendModel(this.host);
   }
 
-  /** Cancels the running job, if any: its promise rejects with CancelledError and its thread ends. */
+  /** Starts a host ahead of the first job (loading the engine takes a moment on a cold start). */
+  warm(): void {
+    if (this.disposed) return;
+    try {
+      this.ensureHost();
+    } catch (error) {
+      // The next job reports it to the person; here it is only noted.
+      this.log(`engine: could not start a host: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+
+  /** Cancels the running job, if any: its promise rejects with CancelledError and its host ends. */
   cancel(): void {
     const running = this.running;
     if (!running) return;
     this.running = null;
     running.detach();
-    const worker = this.worker;
-    this.worker = null;
-    if (worker) {
-      this.log(`engine: job ${running.id} cancelled, thread stopped`);
-      void worker.terminate();
+    const host = this.host;
+    this.host = null;
+    if (host) {
+      this.log(`engine: job ${running.id} cancelled, host stopped`);
+      host.connection.terminate();
     }
     running.reject(new CancelledError());
   }
@@ -77,38 +120,65 @@ export class EngineClient {
   dispose(): void {
     this.disposed = true;
     this.cancel();
-    void this.worker?.terminate();
-    this.worker = null;
+    this.host?.connection.terminate();
+    this.host = null;
   }
 
-  private ensureWorker(): Worker {
-    if (this.worker) return this.worker;
-    const worker = this.createWorker();
-    this.worker = worker;
-    this.startedWorkers += 1;
-    worker.on('message', (reply: EngineReply) => {
-      if (worker !== this.worker) return;
-      const running = this.running;
-      if (!running || reply.id !== running.id) {
-        this.log(`engine: ignored a reply to job ${reply.id}, which is no longer running`);
-        return;
-      }
-      this.running = null;
-      running.detach();
-      if (reply.ok) running.resolve(reply);
-      else running.reject(new Error(reply.error));
+  private sendModel(host: LiveHost): void {
+    if (!this.model || host.modelKey === this.model.key) return;
+    host.modelKey = this.model.key;
+    host.connection.post({ type: 'model', key: this.model.key, model: this.model.model });
+  }
+
+  private ensureHost(): LiveHost {
+    if (this.host) {
+      this.sendModel(this.host);
+      return this.host;
+    }
+    let self: LiveHost | null = null;
+    const isCurrent = (): boolean => self !== null && self === this.host;
+    const connection = this.startHost({
+      message: (message) => {
+        if (isCurrent()) this.receive(message);
+      },
+      failed: (error) => {
+        // A host that fails before `startHost` returns is reported once the job is registered.
+        if (self === null) queueMicrotask(() => isCurrent() && this.hostFailed(error));
+        else if (isCurrent()) this.hostFailed(error);
+      },
     });
-    const fail = (error: Error): void => {
-      if (worker !== this.worker) return;
-      this.worker = null;
-      const running = this.running;
-      this.running = null;
-      running?.detach();
-      this.log(`engine: thread failed: ${error.message}`);
-      running?.reject(error);
-    };
-    worker.on('error', fail);
-    worker.on('exit', (code) => fail(new Error(`the engine thread exited (code ${code})`)));
-    return worker;
+    const host: LiveHost = { connection, modelKey: undefined };
+    self = host;
+    this.host = host;
+    this.startedHosts += 1;
+    this.sendModel(host);
+    return host;
+  }
+
+  private receive(message: FromEngine): void {
+    const running = this.running;
+    if (!running || message.id !== running.id) {
+      this.log(`engine: ignored a message about job ${message.id}, which is no longer running`);
+      return;
+    }
+    if (message.type === 'stage') {
+      running.onStage?.(message.stage);
+      return;
+    }
+    this.running = null;
+    running.detach();
+    if (message.type === 'done') running.resolve(message.result);
+    else running.reject(new Error(message.error));
+  }
+
+  private hostFailed(error: Error): void {
+    const host = this.host;
+    this.host = null;
+    host?.connection.terminate();
+    const running = this.running;
+    this.running = null;
+    running?.detach();
+    this.log(`engine: host failed: ${error.message}`);
+    running?.reject(error);
   }
 }

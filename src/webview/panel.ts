@@ -4,8 +4,21 @@
  * document full of markup stays inert text. The panel keeps its state with getState/setState so
  * hiding and re-showing it loses nothing.
  */
-import { isToPanel, type FromPanel, type NoticeKind, type PanelAbstractCheck, type PanelControls, type PanelGroup, type PanelSentence, type PanelShare, type PanelSummary, type ToPanel } from '../extension/messages';
+import {
+  isToPanel,
+  type FromPanel,
+  type NoticeKind,
+  type PanelAbstractCheck,
+  type PanelControls,
+  type PanelGroup,
+  type PanelSentence,
+  type PanelShare,
+  type PanelSummary,
+  type ToPanel,
+} from '../extension/messages';
 import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from '../extension/settings';
+import { el, type Child } from './dom';
+import { progressView } from './progress-view';
 
 interface VsCodeApi {
   postMessage(message: FromPanel): void;
@@ -52,21 +65,6 @@ function save(): void {
   vscode.setState(state);
 }
 
-// ---------- DOM helpers (text only) ----------
-
-type Child = Node | string | null | undefined | false;
-
-function el<K extends keyof HTMLElementTagNameMap>(tag: K, props: { className?: string; attrs?: Record<string, string> } = {}, children: Child[] = []): HTMLElementTagNameMap[K] {
-  const node = document.createElement(tag);
-  if (props.className) node.className = props.className;
-  for (const [name, value] of Object.entries(props.attrs ?? {})) node.setAttribute(name, value);
-  for (const child of children) {
-    if (child === null || child === undefined || child === false) continue;
-    node.append(typeof child === 'string' ? document.createTextNode(child) : child);
-  }
-  return node;
-}
-
 const integer = new Intl.NumberFormat('en', { maximumFractionDigits: 0 });
 const percent = (fraction: number): string => `${Math.round(fraction * 100)}%`;
 
@@ -76,7 +74,7 @@ const app = document.getElementById('app')!;
 const note = el('p', { className: 'note', attrs: { role: 'note' } }, [
   'Extractive summary: these sentences are quoted from the document and can lose the context around them.',
 ]);
-const progress = el('div', { className: 'progress', attrs: { role: 'progressbar', 'aria-label': 'Summarizing', hidden: '' } });
+const progress = progressView();
 
 const lengthValue = el('input', { attrs: { id: 'length-value', type: 'number', inputmode: 'numeric', 'aria-label': 'Summary length' } });
 const lengthUnit = el('select', { attrs: { id: 'length-unit', 'aria-label': 'Length unit' } }, LENGTH_UNITS.map((unit) => el('option', { attrs: { value: unit } }, [UNIT_LABELS[unit]])));
@@ -105,7 +103,7 @@ liveButton.addEventListener('click', () => vscode.postMessage({ type: 'command',
 
 const noticeBox = el('div', { className: 'notice', attrs: { role: 'status', 'aria-live': 'polite', hidden: '' } });
 const content = el('div', { className: 'content', attrs: { id: 'content' } });
-app.append(note, progress, controls, noticeBox, content);
+app.append(note, progress.element, controls, noticeBox, content);
 
 function sendLength(): void {
   const unit = lengthUnit.value as LengthUnit;
@@ -280,9 +278,9 @@ function handle(message: ToPanel): void {
       state.controls = message.controls;
       renderControls(message.controls);
       break;
-    case 'busy':
-      progress.hidden = !message.busy;
-      content.setAttribute('aria-busy', String(message.busy));
+    case 'progress':
+      progress.render(message.progress);
+      content.setAttribute('aria-busy', String(message.progress !== null));
       return;
     case 'notice':
       state.notice = message.text ? { kind: message.kind, text: message.text } : null;

@@ -14,7 +14,8 @@ import { LineIndex } from '../../src/extension/ranges';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { parseSettings, toEngineOptions, type SettingKey } from '../../src/extension/settings';
 import { openSession, timer } from './browser';
-import { countDecorations, cursorStatus, openFile, panelFrame, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
+import { firstSummaryBreakdown, parseTerselyLog, recordTimings } from './timings';
+import { countDecorations, cursorStatus, openFile, outputChannelText, panelFrame, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
 
 const [base, workspace, artifacts, settingsFile] = process.argv.slice(2) as [string, string, string, string];
 const DEMO = 'bike-share-rebalancing.md';
@@ -43,11 +44,13 @@ async function main(): Promise<void> {
     // ---- Summarize Document on the demo ----
     const demo = expectedSummary(DEMO);
     await openFile(page, DEMO, 'Quillhaven Bike Share');
-    const commandStarted = Date.now();
-    await runCommand(page, 'Tersely: Summarize Document');
+    const commandStarted = await runCommand(page, 'Tersely: Summarize Document');
     const panel = panelLocator(page);
+    await panel.locator('.note').waitFor({ timeout: 60_000 });
+    const panelShownAt = Date.now();
     await panel.locator('.summary button.sentence').first().waitFor({ timeout: 60_000 });
-    checks['commandToPanelMs'] = Date.now() - commandStarted;
+    const panelFilledAt = Date.now();
+    checks['commandToPanelMs'] = panelFilledAt - commandStarted;
     mark(`panel filled (${checks['commandToPanelMs']} ms after the command)`);
 
     const groups = await panel.locator('.summary .group').evaluateAll((nodes) =>
@@ -92,13 +95,16 @@ async function main(): Promise<void> {
     mark('panel kept its summary across hide/show');
 
     // ---- the same command again, with the panel open and the engine thread warm ----
-    const previousId = await panel.locator('[data-summary-id]').getAttribute('data-summary-id');
-    await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
-    const warmStarted = Date.now();
-    await runCommand(page, 'Tersely: Summarize Document');
-    await panel.locator(`[data-summary-id]:not([data-summary-id="${previousId}"])`).waitFor({ timeout: 30_000 });
-    checks['commandToPanelWarmMs'] = Date.now() - warmStarted;
-    mark(`summarized again: panel refilled ${checks['commandToPanelWarmMs']} ms after the command`);
+    const warm: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      const previousId = await panel.locator('[data-summary-id]').getAttribute('data-summary-id');
+      await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
+      const warmStarted = await runCommand(page, 'Tersely: Summarize Document');
+      await panel.locator(`[data-summary-id]:not([data-summary-id="${previousId}"])`).waitFor({ timeout: 30_000 });
+      warm.push(Date.now() - warmStarted);
+    }
+    checks['commandToPanelWarmMs'] = warm;
+    mark(`summarized again: panel refilled ${warm.join(', ')} ms after the command`);
 
     // ---- live mode follows edits ----
     const wordsBefore = await panel.locator('[data-figure="words"] dd').innerText();
@@ -208,6 +214,21 @@ async function main(): Promise<void> {
     const keyboardCursor = await poll(() => cursorStatus(page), (c) => (c?.selected ?? 0) > 0 && c?.line !== cursor.line, 10_000, 'Enter on a sentence to select it');
     checks['keyboardReveal'] = keyboardCursor;
     mark(`Enter on a focused sentence selected ${keyboardCursor?.selected} characters`);
+
+    // ---- where it ran and how long activation took, from the extension's own log ----
+    const logText = await outputChannelText(page, 'Tersely');
+    writeFileSync(join(artifacts, 'ui-output-channel.txt'), logText);
+    const log = parseTerselyLog(logText);
+    checks['log'] = log;
+    assert.equal(log.runtime, 'the Node extension host; engine in a node worker thread');
+    recordTimings(artifacts, 'Node extension host (main bundle)', {
+      activationMs: log.activationMs,
+      firstSummaryMs: checks['commandToPanelMs'],
+      firstSummaryBreakdown: firstSummaryBreakdown(log, commandStarted, panelShownAt, panelFilledAt),
+      laterSummaryMs: warm,
+      laterSummaryEngineMs: log.summaries.slice(1, 1 + warm.length).map((s) => s.engineMs),
+      note: 'firstSummaryMs and laterSummaryMs: palette Enter to panel filled, measured by the test in Chromium; the rest from the extension log.',
+    });
 
     checks['blockedRequests'] = blocked;
     checks['pageErrors'] = consoleErrors.slice(0, 20);

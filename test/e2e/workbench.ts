@@ -21,14 +21,50 @@ export async function openFile(page: Page, name: string, firstLineText: string):
   await page.locator('.editor-instance .monaco-editor .view-lines', { hasText: firstLineText }).first().waitFor({ timeout: 15_000 });
 }
 
-export async function runCommand(page: Page, title: string): Promise<void> {
+/** Runs a palette command; returns when Enter was pressed (Date.now()), the moment the command starts. */
+export async function runCommand(page: Page, title: string): Promise<number> {
   await page.keyboard.press('F1');
   const input = page.locator('.quick-input-widget .quick-input-box input');
   await input.waitFor({ state: 'visible', timeout: 15_000 });
   await input.fill(`>${title}`);
   await page.locator('.quick-input-widget .quick-input-list .monaco-list-row', { hasText: title }).first().waitFor({ state: 'visible', timeout: 15_000 });
+  const entered = Date.now();
   await page.keyboard.press('Enter');
   await page.locator('.quick-input-widget').waitFor({ state: 'hidden', timeout: 15_000 });
+  return entered;
+}
+
+/** The text of one output channel (Output: Show Output Channels…, then its name in the second picker). */
+export async function outputChannelText(page: Page, channel: string): Promise<string> {
+  await page.keyboard.press('F1');
+  const input = page.locator('.quick-input-widget .quick-input-box input');
+  await input.waitFor({ state: 'visible', timeout: 15_000 });
+  await input.fill('>Output: Show Output Channels');
+  await page.locator('.quick-input-widget .quick-input-list .monaco-list-row', { hasText: 'Show Output Channels' }).first().waitFor({ timeout: 15_000 });
+  await page.keyboard.press('Enter');
+  // The channel picker replaces the command palette; typing earlier would run a command instead.
+  await poll(() => input.inputValue(), (value) => !value.startsWith('>'), 10_000, 'the output channel picker');
+  await input.fill(channel);
+  await page.locator('.quick-input-widget .quick-input-list .monaco-list-row', { hasText: channel }).first().waitFor({ timeout: 15_000 });
+  await page.keyboard.press('Enter');
+  await page.locator('.quick-input-widget').waitFor({ state: 'hidden', timeout: 15_000 });
+  const lines = page.locator('.part.panel .monaco-editor .view-lines').first();
+  await lines.waitFor({ timeout: 15_000 });
+  // The view renders only the lines on screen and follows the end: make room, then go to the top.
+  await runCommand(page, 'View: Toggle Maximized Panel');
+  await lines.click();
+  await page.keyboard.press('Control+Home');
+  await page.waitForTimeout(300);
+  // The view reuses line elements, so document order is their vertical position, not DOM order.
+  const text = await lines.evaluate((node) =>
+    Array.from(node.querySelectorAll<HTMLElement>('.view-line'))
+      .map((line) => ({ top: Number.parseFloat(line.style.top) || 0, text: line.textContent ?? '' }))
+      .sort((a, b) => a.top - b.top)
+      .map((line) => line.text.replace(/\u00a0/g, ' '))
+      .join('\n'),
+  );
+  await runCommand(page, 'View: Toggle Maximized Panel');
+  return text;
 }
 
 /** The panel's document: webviews nest an outer iframe (workbench DOM) and an inner `active-frame`. */

@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { COLOR_IDS, COMMAND_IDS, VIEW_CONTAINER_ID, VIEW_ID } from '../../src/extension/ids';
 
 const root = new URL('../../', import.meta.url);
@@ -58,9 +58,16 @@ describe('extension manifest (package.json contributes)', () => {
     for (const id of used) assert.ok(Object.values(COLOR_IDS).includes(id as never), id);
   });
 
-  it('loads the bundle the build writes, declares Workspace Trust limits and the editor version', () => {
+  it('loads the bundles the build writes (desktop and browser), declares Workspace Trust limits and the editor version', () => {
     assert.equal(manifest.main, './dist/extension.cjs');
-    assert.match(read('scripts/build.mjs'), /src\/extension\/extension\.ts', out: 'dist\/extension\.cjs'/);
+    assert.equal(manifest.browser, './dist/extension-web.js');
+    const entries = read('scripts/build-entries.mjs');
+    assert.match(entries, /src\/extension\/extension\.ts', out: 'dist\/extension\.cjs', platform: 'node'/);
+    assert.match(entries, /src\/extension\/extension-web\.ts', out: 'dist\/extension-web\.js', platform: 'browser', format: 'cjs', external: \['vscode'\]/);
+    const ignore = read('.vscodeignore');
+    for (const bundle of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/extension-web.js', 'dist/engine-worker-web.js', 'dist/webview.js']) {
+      assert.ok(ignore.includes(`!${bundle}`), `${bundle} goes into the VSIX`);
+    }
     assert.equal(manifest.capabilities.untrustedWorkspaces.supported, 'limited');
     assert.deepEqual(manifest.capabilities.untrustedWorkspaces.restrictedConfigurations, ['tersely.modelFile']);
     assert.match(manifest.engines.vscode, /^\^1\.\d+\.\d+$/);
@@ -68,9 +75,13 @@ describe('extension manifest (package.json contributes)', () => {
   });
 
   it('the webview script builds DOM with text only: no HTML parsing or code evaluation APIs', () => {
-    const source = read('src/webview/panel.ts');
-    for (const api of ['innerHTML', 'outerHTML', 'insertAdjacentHTML', 'document.write', 'eval(', 'new Function', 'srcdoc']) {
-      assert.ok(!source.includes(api), api);
+    const files = readdirSync(new URL('src/webview/', root)).filter((name) => name.endsWith('.ts'));
+    assert.ok(files.includes('panel.ts') && files.length >= 3, files.join(', '));
+    for (const file of files) {
+      const source = read(`src/webview/${file}`);
+      for (const api of ['innerHTML', 'outerHTML', 'insertAdjacentHTML', 'document.write', 'eval(', 'new Function', 'srcdoc']) {
+        assert.ok(!source.includes(api), `${file}: ${api}`);
+      }
     }
   });
 

@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
-import { isToPanel, parsePanelMessage, type FromPanel } from '../../src/extension/messages';
+import { isToPanel, parsePanelMessage, progressLabel, SUMMARY_STAGES, type FromPanel } from '../../src/extension/messages';
 
 const valid: FromPanel[] = [
   { type: 'ready' },
@@ -76,12 +76,29 @@ describe('extension messages: validating what the panel sends', () => {
 
 describe('extension messages: the webview side check', () => {
   it('recognizes the extension’s messages and drops others', () => {
-    assert.equal(isToPanel({ type: 'busy', busy: true }), true);
+    assert.equal(isToPanel({ type: 'progress', progress: { task: 'summarize', stage: 'ranking' } }), true);
+    assert.equal(isToPanel({ type: 'progress', progress: null }), true);
+    assert.equal(isToPanel({ type: 'busy', busy: true }), false, 'the old busy flag is gone');
     assert.equal(isToPanel({ type: 'clear' }), true);
     assert.equal(isToPanel({ type: 'summary', summary: { groups: [], figures: {} } }), true);
     assert.equal(isToPanel({ type: 'summary', summary: '<img src=x onerror=alert(1)>' }), false);
-    assert.equal(isToPanel({ type: 'busy', busy: 'yes' }), false);
+    assert.equal(isToPanel({ type: 'progress', progress: 'ranking' }), false);
+    assert.equal(isToPanel({ type: 'progress', progress: { task: 'summarize' } }), false);
     assert.equal(isToPanel({ type: 'html', html: '<b>x</b>' }), false);
     assert.equal(isToPanel(null), false);
+  });
+});
+
+describe('extension messages: progress wording', () => {
+  it('names each stage of a summary, in order, with its step', () => {
+    assert.deepEqual(
+      SUMMARY_STAGES.map((entry) => entry.stage),
+      ['reading', 'ranking', 'checking'],
+    );
+    assert.equal(progressLabel({ task: 'summarize', stage: 'reading' }), 'Summarizing: reading the document (step 1 of 3)…');
+    assert.equal(progressLabel({ task: 'summarize', stage: 'ranking' }), 'Summarizing: ranking sentences (step 2 of 3)…');
+    assert.equal(progressLabel({ task: 'summarize', stage: 'checking' }), 'Summarizing: picking and checking sentences (step 3 of 3)…');
+    assert.equal(progressLabel({ task: 'summarize', stage: 'waiting' }), 'Summarizing: waiting for the engine…');
+    assert.equal(progressLabel({ task: 'checkAbstract', stage: 'checkingAbstract' }), 'Checking the abstract…');
   });
 });

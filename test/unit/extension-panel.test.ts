@@ -1,10 +1,11 @@
 import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Heading, List, Paragraph, RootContent } from 'mdast';
 import { buildPanelSummary, UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { applyRepair, countWords } from '../../src/core/index';
 import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
-import { describePick } from '../../src/extension/hover-text';
+import { convergenceOf, describePick } from '../../src/extension/hover-text';
 import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';
 import { FERRY_TEXT, ferrySummary } from './extension-fixture';
 
@@ -158,6 +159,15 @@ describe('extension hover text', () => {
     const pick = { ...ferrySummary().sentences[0]!, rank: 0 };
     assert.match(describePick(pick, 6, 'blend'), /added to the summary by a repair/);
   });
+
+  it('reports whether the ranking converged, and in how many iterations, when the summary says', () => {
+    const pick = ferrySummary().sentences[1]!;
+    assert.match(describePick(pick, 6, 'lexrank', { converged: true, iterations: 23 }), /Ranking converged after 23 iterations\./);
+    assert.match(describePick(pick, 6, 'textrank', { converged: false, iterations: 100 }), /did not converge within 100 iterations: the scores are approximate/);
+    assert.doesNotMatch(describePick(pick, 6, 'blend'), /converge/, 'nothing is claimed without the figure');
+    assert.equal(convergenceOf(ferrySummary()), undefined, 'a ranking without an iterative method reports nothing');
+    assert.deepEqual(convergenceOf({ ...ferrySummary(), ranking: { converged: false, iterations: 7 } }), { converged: false, iterations: 7 });
+  });
 });
 
 describe('extension panel HTML shell', () => {
@@ -171,10 +181,43 @@ describe('extension panel HTML shell', () => {
     assert.ok(!csp.includes('unsafe-inline') && !csp.includes('unsafe-eval'));
   });
 
-  it('makes 128-bit nonces that differ each time', () => {
+  it('makes 128-bit nonces from Web Crypto that differ each time', () => {
     const nonces = new Set(Array.from({ length: 50 }, () => makeNonce()));
     assert.equal(nonces.size, 50);
-    for (const nonce of nonces) assert.equal(Buffer.from(nonce, 'base64').length, 16);
+    for (const nonce of nonces) {
+      assert.match(nonce, /^[A-Za-z0-9+/]{22}==$/, 'base64 of 16 bytes');
+      assert.equal(Buffer.from(nonce, 'base64').length, 16);
+    }
+  });
+
+  it('encodes the bytes the random source gives, as standard base64', () => {
+    let asked = 0;
+    const counting = {
+      getRandomValues<T extends Uint8Array>(array: T): T {
+        asked += array.length;
+        array.forEach((_, i) => (array[i] = 250 - i * 13));
+        return array;
+      },
+    };
+    const nonce = makeNonce(counting);
+    assert.equal(asked, 16, 'asks for exactly 128 bits');
+    // Reference encoder: Node's Buffer (outside the module under test).
+    assert.equal(nonce, Buffer.from(Array.from({ length: 16 }, (_, i) => 250 - i * 13)).toString('base64'));
+  });
+
+  it('draws on globalThis.crypto by default (Web Crypto, which Node and Web Workers both have)', () => {
+    const original = Object.getOwnPropertyDescriptor(globalThis, 'crypto')!;
+    let calls = 0;
+    const standIn = { getRandomValues: <T extends Uint8Array>(array: T): T => (calls++, array.fill(7)) };
+    Object.defineProperty(globalThis, 'crypto', { value: standIn, configurable: true });
+    try {
+      assert.equal(makeNonce(), Buffer.alloc(16, 7).toString('base64'));
+    } finally {
+      Object.defineProperty(globalThis, 'crypto', original);
+    }
+    assert.equal(calls, 1);
+    const source = readFileSync(new URL('../../src/extension/panel-html.ts', import.meta.url), 'utf8');
+    assert.doesNotMatch(source, /node:crypto|randomBytes|Math\.random/);
   });
 
   it('loads one script with the nonce and contains no inline handlers or inline script', () => {

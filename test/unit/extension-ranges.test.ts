@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import fc from 'fast-check';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Node as MdNode, Parent } from 'mdast';
-import { LineIndex, checkedSpan, spanAt, spanToRange } from '../../src/extension/ranges';
+import { LineIndex, checkedSpan, spanAt } from '../../src/extension/ranges';
 
 /** Reference conversion from the ECMAScript string methods: split on the three line breaks the editor knows. */
 function naivePosition(text: string, offset: number): { line: number; character: number } {
@@ -63,12 +63,6 @@ describe('extension ranges: offsets to line/character', () => {
       }),
       { numRuns: 2000 },
     );
-  });
-
-  it('builds editor ranges through the given constructor', () => {
-    const text = 'one\ntwo three';
-    const range = spanToRange({ start: 4, end: 7 }, new LineIndex(text), (start, end) => ({ start, end }));
-    assert.deepEqual(range, { start: { line: 1, character: 0 }, end: { line: 1, character: 3 } });
   });
 });
 

@@ -5,7 +5,7 @@
  */
 import assert from 'node:assert/strict';
 import * as vscode from 'vscode';
-import type { TerselyApi } from '../../../src/extension/tersely-context';
+import type { TerselyApi } from '../../../src/extension/api';
 
 const EXTENSION_ID = 'tersely.tersely';
 const DEMO = 'bike-share-rebalancing.md';
@@ -42,7 +42,7 @@ describe('Tersely in the editor', function () {
     assert.ok(extension, `${EXTENSION_ID} is installed`);
     const started = performance.now();
     api = await extension.activate();
-    console.log(`TIMING activation (as seen by the test): ${(performance.now() - started).toFixed(0)} ms`);
+    console.log(`TIMING activation (as seen by the test): ${(performance.now() - started).toFixed(0)} ms; inside activate: ${api.activationMs.toFixed(1)} ms`);
     await setting('length.unit', 'sentences');
     await setting('length.value', 5);
   });
@@ -55,6 +55,16 @@ describe('Tersely in the editor', function () {
 
   after(async () => {
     for (const key of ['length.unit', 'length.value', 'maxDocumentSize']) await setting(key, undefined);
+  });
+
+  it('runs in the Node extension host, with the engine in a worker thread started on the first summary at the latest', async () => {
+    assert.equal(api.runtime.hasProcess, true);
+    assert.equal(api.runtime.engineHost, 'node worker thread');
+    await openDemo();
+    await vscode.commands.executeCommand('tersely.summarizeDocument');
+    assert.equal(api.engineHosts, 1, 'one engine host for summaries, started once');
+    await vscode.commands.executeCommand('tersely.summarizeDocument');
+    assert.equal(api.engineHosts, 1, 'and kept for the next summary');
   });
 
   it('registers every command', async () => {

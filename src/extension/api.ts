@@ -1,0 +1,48 @@
+/** What the in-editor tests can observe: the API `activate` returns. */
+import type { Span } from '../core/index';
+import type { TerselyContext } from './context';
+import type { RuntimeReport } from './engine-hosts';
+import type { Scope } from './summaries';
+
+export interface TerselyApi {
+  inspect(uri: { toString(): string }): { id: number; version: number; scope: Scope; spans: Span[]; highlighted: boolean; warnings: number } | undefined;
+  readonly live: boolean;
+  readonly statusText: string;
+  readonly rejectedPanelMessages: number;
+  /** Engine hosts started so far for summaries. */
+  readonly engineHosts: number;
+  readonly runtime: RuntimeReport;
+  /** How long `activate` took, measured inside it. */
+  readonly activationMs: number;
+}
+
+export function testApi(context: TerselyContext, runtime: RuntimeReport, activationMs: number): TerselyApi {
+  return {
+    inspect(uri) {
+      const shown = context.store.get(uri.toString());
+      if (!shown) return undefined;
+      return {
+        id: shown.id,
+        version: shown.version,
+        scope: shown.scope,
+        spans: shown.summary.sentences.map((pick) => pick.span),
+        highlighted: shown.highlighted,
+        warnings: shown.summary.warnings.length,
+      };
+    },
+    get live() {
+      return context.live.on;
+    },
+    get statusText() {
+      return context.editorView.statusText;
+    },
+    get rejectedPanelMessages() {
+      return context.panel.rejectedMessages;
+    },
+    get engineHosts() {
+      return context.engine.startedHosts;
+    },
+    runtime,
+    activationMs,
+  };
+}

@@ -1,0 +1,60 @@
+/**
+ * The engine side of the protocol, shared by both hosts (engine-worker.ts for Node's worker
+ * threads, engine-worker-web.ts for Web Workers): keeps the last model it was sent, runs one job
+ * per message and reports its stages. Jobs run synchronously; the client cancels one by
+ * terminating the whole host, so there is nothing to interrupt here. No host API is used.
+ */
+import { checkAbstract } from '../core/index';
+import { loadModel } from '../core/index';
+import { summarize } from '../core/index';
+import type { FromEngine, ToEngine } from './engine-protocol';
+
+interface CachedModel {
+  readonly key: string;
+  readonly model?: unknown;
+  readonly problem?: string;
+}
+
+/** Returns the host's message handler; `post` sends a reply to the extension. */
+export function engineRunner(post: (message: FromEngine) => void): (message: ToEngine) => void {
+  let cached: CachedModel | undefined;
+
+  const modelFor = (key: string | undefined): { model?: unknown; problem?: string } => {
+    if (key === undefined) return {};
+    if (cached?.key !== key) throw new Error(`the engine host was not sent model ${key}`);
+    return cached;
+  };
+
+  return (message) => {
+    if (message.type === 'model') {
+      // Validated once here, not per job.
+      try {
+        const loaded = loadModel(message.model);
+        cached = loaded.ok ? { key: message.key, model: loaded.model } : { key: message.key, problem: loaded.error };
+      } catch (error) {
+        cached = { key: message.key, problem: `invalid sentence model: ${error instanceof Error ? error.message : String(error)}` };
+      }
+      return;
+    }
+    const { id, task } = message;
+    const started = performance.now();
+    try {
+      if (task.kind === 'summarize') {
+        const { model, problem } = modelFor(message.modelKey);
+        const summary = summarize(task.text, {
+          ...task.options,
+          ...(model !== undefined ? { model } : {}),
+          onStage: (stage) => post({ type: 'stage', id, stage }),
+        });
+        // The extension has the text already; sending it back would only double the copy.
+        const slim = { ...summary, document: { ...summary.document, text: '' } };
+        post({ type: 'done', id, result: { kind: 'summarize', summary: slim, elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}) } });
+      } else {
+        const report = checkAbstract(task.text, task.options);
+        post({ type: 'done', id, result: { kind: 'checkAbstract', report, elapsedMs: performance.now() - started } });
+      }
+    } catch (error) {
+      post({ type: 'failed', id, error: error instanceof Error ? error.message : String(error) });
+    }
+  };
+}

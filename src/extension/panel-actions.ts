@@ -1,0 +1,31 @@
+/** What the side panel asks for (already validated by parsePanelMessage), carried out. */
+import * as vscode from 'vscode';
+import type { TerselyContext } from './context';
+import type { FromPanel } from './messages';
+
+export async function handlePanelMessage(context: TerselyContext, message: FromPanel): Promise<void> {
+  const { actions, settings } = context;
+  switch (message.type) {
+    case 'ready':
+      return;
+    case 'reveal':
+      await actions.reveal(message.summaryId, message.sentence);
+      return;
+    case 'applyRepair':
+      await actions.repair({ summaryId: message.summaryId, warning: message.warning, repair: message.repair });
+      return;
+    case 'setLength':
+      await settings.update('length.unit', message.unit);
+      await settings.update('length.value', message.value);
+      return;
+    case 'setMethod':
+      await settings.update('method', message.method);
+      return;
+    case 'setBalance':
+      await settings.update('balance.enabled', message.enabled);
+      return;
+    case 'command':
+      await vscode.commands.executeCommand(`tersely.${message.command}`);
+      return;
+  }
+}
