@@ -29,81 +29,103 @@ export interface LocalSentence {
 }
 
 export class InlineTextBuilder {
-  private readonly chars: string[] = [];
+  // Units are kept as codes and turned into strings with String.fromCharCode: joining arrays of
+  // one-character strings cost several times more (measured on the corpus).
+  private readonly units: number[] = [];
   private readonly starts: number[] = [];
   private readonly ends: number[] = [];
-  /** Indices in `chars` where a line ended (soft or hard break), for line-based checks. */
+  /** Indices in `units` where a line ended (soft or hard break), for line-based checks. */
   private readonly lineBreaks: number[] = [];
 
   get length(): number {
-    return this.chars.length;
+    return this.units.length;
   }
 
   /** One UTF-16 unit produced by the source range `[start, end)`. */
   push(unit: string, start: number, end: number): void {
-    this.chars.push(unit);
-    this.starts.push(start);
-    this.ends.push(end);
+    this.pushCode(unit.charCodeAt(0), start, end);
   }
 
   /** Copies `source[start, end)` unit by unit, each produced by itself. */
   pushSource(source: string, start: number, end: number): void {
-    for (let p = start; p < end; p++) this.push(source[p]!, p, p + 1);
+    for (let p = start; p < end; p++) this.pushCode(source.charCodeAt(p), p, p + 1);
   }
 
   /** A line ending that continues the paragraph; `offset` is where the line break is in the source. */
   softBreak(offset: number): void {
-    this.lineBreaks.push(this.chars.length);
-    this.push(' ', offset, offset + 1);
+    this.lineBreaks.push(this.units.length);
+    this.pushCode(SPACE, offset, offset + 1);
   }
 
   /** A line break the author forced; it also ends any sentence. */
   hardBreak(offset: number): void {
-    this.lineBreaks.push(this.chars.length);
-    this.push('\n', offset, offset + 1);
+    this.lineBreaks.push(this.units.length);
+    this.pushCode(LINE_FEED, offset, offset + 1);
   }
 
   /** The raw (uncollapsed) text split at line breaks, trimmed; used by line-shaped checks. */
   lines(): string[] {
     const out: string[] = [];
     let from = 0;
-    for (const at of [...this.lineBreaks, this.chars.length]) {
-      out.push(this.chars.slice(from, at).join('').replace(/\s+/g, ' ').trim());
+    for (const at of [...this.lineBreaks, this.units.length]) {
+      out.push(codesToString(this.units, from, at).replace(/\s+/g, ' ').trim());
       from = at + 1;
     }
     return out;
   }
 
   finish(): NormalizedText {
-    const count = this.chars.length;
-    const chars: string[] = [];
+    const count = this.units.length;
+    const units: number[] = [];
     const starts = new Int32Array(count);
     const ends = new Int32Array(count);
     let pendingBlank = -1; // index of the first blank of a run not yet written
     for (let i = 0; i < count; i++) {
-      const c = this.chars[i]!;
-      if (c === '\n') {
+      const code = this.units[i]!;
+      if (code === LINE_FEED) {
         pendingBlank = -1;
         // Collapse consecutive breaks and drop breaks at the start.
-        if (chars.length === 0 || chars[chars.length - 1] === '\n') continue;
-      } else if (isBlank(c.charCodeAt(0))) {
+        if (units.length === 0 || units[units.length - 1] === LINE_FEED) continue;
+      } else if (isBlank(code)) {
         if (pendingBlank < 0) pendingBlank = i;
         continue;
       } else {
-        if (pendingBlank >= 0 && chars.length > 0 && chars[chars.length - 1] !== '\n') {
-          starts[chars.length] = this.starts[pendingBlank]!;
-          ends[chars.length] = this.ends[pendingBlank]!;
-          chars.push(' ');
+        if (pendingBlank >= 0 && units.length > 0 && units[units.length - 1] !== LINE_FEED) {
+          starts[units.length] = this.starts[pendingBlank]!;
+          ends[units.length] = this.ends[pendingBlank]!;
+          units.push(SPACE);
         }
         pendingBlank = -1;
       }
-      starts[chars.length] = this.starts[i]!;
-      ends[chars.length] = this.ends[i]!;
-      chars.push(c);
+      starts[units.length] = this.starts[i]!;
+      ends[units.length] = this.ends[i]!;
+      units.push(code);
     }
-    while (chars.length > 0 && chars[chars.length - 1] === '\n') chars.pop();
-    return { text: chars.join(''), starts: starts.slice(0, chars.length), ends: ends.slice(0, chars.length) };
+    while (units.length > 0 && units[units.length - 1] === LINE_FEED) units.pop();
+    const length = units.length;
+    return { text: codesToString(units, 0, length), starts: starts.slice(0, length), ends: ends.slice(0, length) };
   }
+
+  private pushCode(code: number, start: number, end: number): void {
+    this.units.push(code);
+    this.starts.push(start);
+    this.ends.push(end);
+  }
+}
+
+const SPACE = 0x20;
+const LINE_FEED = 0x0a;
+/** Units per String.fromCharCode call, far below engines' argument limits. */
+const CODES_PER_CALL = 4096;
+
+/** `codes[from, to)` as a string, unit for unit (lone surrogates stay as they are). */
+function codesToString(codes: readonly number[], from: number, to: number): string {
+  if (from === 0 && to === codes.length && to <= CODES_PER_CALL) return String.fromCharCode.apply(null, codes as number[]);
+  let text = '';
+  for (let p = from; p < to; p += CODES_PER_CALL) {
+    text += String.fromCharCode.apply(null, codes.slice(p, Math.min(to, p + CODES_PER_CALL)));
+  }
+  return text;
 }
 
 /**
