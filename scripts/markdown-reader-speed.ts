@@ -9,7 +9,8 @@
  *
  * Inputs: corpus documents in name order joined by blank lines, cut to 20 KB and 1 MB
  * (1 KB = 1,024 characters). The variants run in turn within each round, so load on the machine
- * falls on all of them alike; each figure is the median over the rounds after one warm-up round.
+ * falls on all of them alike; each figure is the median over the rounds after one warm-up round,
+ * with the fastest round beside it (on a loaded machine the least disturbed run).
  *
  * Here and not in bench/: it times readers inside the engine, and bench/ reaches the engine only
  * through src/core/index.ts (test/unit/engine-boundary.test.ts).
@@ -63,7 +64,7 @@ function run(args: readonly string[]): number {
   const runsFlag = args.indexOf('--runs');
   const bare = markdownIt();
   const options = { baseOffset: 0, includeTables: false };
-  console.log('Markdown readers, medians in ms (one warm-up round, then the rounds shown)');
+  console.log('Markdown readers (one warm-up round, then the rounds shown)');
   for (const size of SIZES) {
     const text = corpusText(files, size.chars);
     const rounds = runsFlag >= 0 ? Number(args[runsFlag + 1]) : size.rounds;
@@ -83,12 +84,16 @@ function run(args: readonly string[]): number {
       });
     }
     const medians = times.map(median);
+    const fastest = times.map((runs) => Math.min(...runs));
     const bareMs = medians[0]!;
     const readerMs = medians[3]!;
     const todayMs = medians[4]!;
     console.log(`\n${size.label} (${text.length} characters, ${rounds} rounds)`);
+    console.log(`  ${''.padEnd(32)} ${'median'.padStart(8)}    × bare ${'fastest'.padStart(9)}    × bare`);
     variants.forEach(([name], v) => {
-      console.log(`  ${name.padEnd(32)} ${medians[v]!.toFixed(1).padStart(8)} ms  × bare ${(medians[v]! / bareMs).toFixed(2)}`);
+      const ratio = (medians[v]! / bareMs).toFixed(2).padStart(6);
+      const fastestRatio = (fastest[v]! / fastest[0]!).toFixed(2).padStart(6);
+      console.log(`  ${name.padEnd(32)} ${medians[v]!.toFixed(1).padStart(8)} ms ${ratio} ${fastest[v]!.toFixed(1).padStart(8)} ms ${fastestRatio}`);
     });
     console.log(`  today's reader / markdown-it reader: ${(todayMs / readerMs).toFixed(1)}×`);
     console.log(`  reader ${readerMs.toFixed(1)} ms against the engine's end-to-end target for ${size.label}: ${ENGINE_TARGETS_MS[size.label]} ms`);
