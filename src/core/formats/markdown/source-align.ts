@@ -8,24 +8,39 @@
  * source range that produced it.
  */
 
-import { fromMarkdown } from 'mdast-util-from-markdown';
+import { decodeHTMLStrict } from 'entities';
 
 const REFERENCE = /&(?:#[xX][0-9a-fA-F]{1,6}|#[0-9]{1,7}|[A-Za-z][A-Za-z0-9]{0,31});/y;
 const ASCII_PUNCTUATION = /[!-/:-@[-`{-~]/;
+const REPLACEMENT_CHARACTER = '\uFFFD';
+const BACKSLASH = 0x5c;
+const AMPERSAND = 0x26;
 
-const decodedReferences = new Map<string, string>();
+/**
+ * True for a code point a numeric reference may produce. Both Markdown readers replace the rest
+ * with U+FFFD: surrogates, noncharacters, C0 controls other than tab and line endings, DEL and C1
+ * controls, and anything past U+10FFFF (markdown-it's `utils.isValidEntityCode`; micromark's
+ * `decodeNumericCharacterReference` tests the same ranges).
+ */
+function isDecodableCodePoint(code: number): boolean {
+  if (code >= 0xd800 && code <= 0xdfff) return false;
+  if (code >= 0xfdd0 && code <= 0xfdef) return false;
+  if ((code & 0xffff) === 0xffff || (code & 0xffff) === 0xfffe) return false;
+  if (code <= 0x08 || code === 0x0b || (code >= 0x0e && code <= 0x1f) || (code >= 0x7f && code <= 0x9f)) return false;
+  return code <= 0x10ffff;
+}
 
-/** Decodes one character reference the way the Markdown parser does (it is the parser). */
+/**
+ * Decodes one character reference the way the Markdown readers do (CommonMark 0.31.2, Entity and
+ * numeric character references): a name from the HTML5 list (the `entities` package, which
+ * markdown-it decodes with), or a decimal or hexadecimal code point. Returns the reference itself
+ * when it is not one.
+ */
 function decodeReference(reference: string): string {
-  let decoded = decodedReferences.get(reference);
-  if (decoded === undefined) {
-    const paragraph = fromMarkdown(`a${reference}a`).children[0];
-    const text = paragraph?.type === 'paragraph' ? paragraph.children[0] : undefined;
-    const value = text?.type === 'text' ? text.value : '';
-    decoded = value.startsWith('a') && value.endsWith('a') && value.length > 2 ? value.slice(1, -1) : reference;
-    decodedReferences.set(reference, decoded);
-  }
-  return decoded;
+  if (reference[1] !== '#') return decodeHTMLStrict(reference);
+  const hex = reference[2] === 'x' || reference[2] === 'X';
+  const code = Number.parseInt(reference.slice(hex ? 3 : 2, -1), hex ? 16 : 10);
+  return isDecodableCodePoint(code) ? String.fromCodePoint(code) : REPLACEMENT_CHARACTER;
 }
 
 /** Source range `[starts[i], ends[i])` that produced each UTF-16 unit of a value. */
@@ -50,6 +65,15 @@ export function alignValue(
   let p = start;
   let i = 0;
   while (i < value.length) {
+    // The common case, a unit copied as is (neither an escape nor a reference can start there).
+    const unit = value.charCodeAt(i);
+    if (p < end && source.charCodeAt(p) === unit && unit !== BACKSLASH && unit !== AMPERSAND) {
+      starts[i] = p;
+      ends[i] = p + 1;
+      i++;
+      p++;
+      continue;
+    }
     const matched = matchAt(value, i, source, p, end, codeSpan);
     if (matched !== null) {
       const [units, sourceLength] = matched;
