@@ -5,7 +5,7 @@
  */
 import markdownIt, { type MarkdownIt, type Token } from 'markdown-it';
 import footnote from 'markdown-it-footnote';
-import { findFrontMatter, frontMatterRule, type FrontMatterEnv } from './front-matter';
+import { findFrontMatter, frontMatterRule, type FrontMatterEnv } from './front-matter-rule';
 import { recordPositions, type PositionEnv } from './positions';
 import { gfmStrikethrough } from './strikethrough';
 

@@ -10,7 +10,7 @@
 import type { Token } from 'markdown-it';
 import type { Code, FootnoteDefinition, Heading, List, ListItem, Nodes, Paragraph, Parent, Root, RootContent, Table, TableCell, TableRow } from 'mdast';
 import type { Position } from 'unist';
-import type { FrontMatterKind } from './front-matter';
+import type { FrontMatterKind } from './front-matter-rule';
 import { alignedContent, linesContent, rowCells, sliceContent, type ContentOffsets } from './inline-content';
 import { phrasingOf } from './phrasing';
 import type { SourceLines } from './source-lines';

@@ -7,7 +7,7 @@
  * matching from the right recovers every unit's offset; only tab stops expanded into spaces have
  * no source unit of their own and take the offset of the line's start.
  */
-import { alignValue } from '../markdown/source-align';
+import { alignValue } from '../source-align';
 import type { SourceLines } from './source-lines';
 
 export interface ContentOffsets {

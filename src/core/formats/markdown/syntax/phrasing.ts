@@ -7,7 +7,7 @@
 import type { Token } from 'markdown-it';
 import type { Parent, PhrasingContent, Text } from 'mdast';
 import type { Position } from 'unist';
-import { alignValue } from '../markdown/source-align';
+import { alignValue } from '../source-align';
 import { findAutolinkLiterals, type LiteralLink } from './autolink-literals';
 import { endOffset, type ContentOffsets } from './inline-content';
 import type { SourceLines } from './source-lines';
