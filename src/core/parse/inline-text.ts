@@ -10,7 +10,7 @@
  * hard break ('\n') disappear, and both ends are trimmed. Soft line breaks are written as ' '.
  */
 
-import { splitSentences } from '../segment/sentences';
+import { splitSentences, type LineBreaks } from '../segment/sentences';
 import type { Span } from '../types';
 
 export interface NormalizedText {
@@ -19,6 +19,8 @@ export interface NormalizedText {
   readonly starts: Int32Array;
   /** End (exclusive) of that source range. */
   readonly ends: Int32Array;
+  /** Where the soft line breaks were, for the sentence splitter (segment/sentences.ts). */
+  readonly lines?: LineBreaks;
 }
 
 /** Source offsets (local) and the sentence text of one sentence found in a paragraph. */
@@ -30,7 +32,14 @@ export interface LocalSentence {
 
 const BLANK = /[ \t\f\v\u00a0\u1680\u2000-\u200a\u202f\u205f\u3000\r]/;
 
+export interface InlineTextOptions {
+  /** A line that ends early may end a sentence (plain text; see LineBreaks.deliberate). */
+  readonly deliberateLines?: boolean;
+}
+
 export class InlineTextBuilder {
+  constructor(private readonly options: InlineTextOptions = {}) {}
+
   private readonly chars: string[] = [];
   private readonly starts: number[] = [];
   private readonly ends: number[] = [];
@@ -80,7 +89,10 @@ export class InlineTextBuilder {
     const chars: string[] = [];
     const starts: number[] = [];
     const ends: number[] = [];
+    const softBreaks: number[] = [];
+    const isSoftBreak = new Set(this.lineBreaks.filter((i) => this.chars[i] === ' '));
     let pendingBlank = -1; // index of the first blank of a run not yet written
+    let pendingSoft = false; // that run holds a soft line break
     const keep = (unit: string, i: number): void => {
       chars.push(unit);
       starts.push(this.starts[i]!);
@@ -90,16 +102,22 @@ export class InlineTextBuilder {
       const c = this.chars[i]!;
       if (c === '\n') {
         pendingBlank = -1;
+        pendingSoft = false;
         // Collapse consecutive breaks and drop breaks at the start.
         if (chars.length > 0 && chars[chars.length - 1] !== '\n') keep('\n', i);
         continue;
       }
       if (BLANK.test(c)) {
         if (pendingBlank < 0) pendingBlank = i;
+        if (isSoftBreak.has(i)) pendingSoft = true;
         continue;
       }
-      if (pendingBlank >= 0 && chars.length > 0 && chars[chars.length - 1] !== '\n') keep(' ', pendingBlank);
+      if (pendingBlank >= 0 && chars.length > 0 && chars[chars.length - 1] !== '\n') {
+        if (pendingSoft) softBreaks.push(chars.length);
+        keep(' ', pendingBlank);
+      }
       pendingBlank = -1;
+      pendingSoft = false;
       keep(c, i);
     }
     while (chars.length > 0 && chars[chars.length - 1] === '\n') {
@@ -107,7 +125,7 @@ export class InlineTextBuilder {
       starts.pop();
       ends.pop();
     }
-    return { text: chars.join(''), starts: Int32Array.from(starts), ends: Int32Array.from(ends) };
+    return { text: chars.join(''), starts: Int32Array.from(starts), ends: Int32Array.from(ends), lines: { softBreaks, deliberate: this.options.deliberateLines ?? false } };
   }
 }
 
@@ -120,7 +138,7 @@ export function sourceSpan(normalized: NormalizedText, span: Span): Span {
 export function sentencesOf(normalized: NormalizedText): LocalSentence[] {
   if (normalized.text.length === 0) return [];
   const out: LocalSentence[] = [];
-  for (const span of splitSentences(normalized.text)) {
+  for (const span of splitSentences(normalized.text, normalized.lines)) {
     if (span.end <= span.start) continue;
     const text = normalized.text.slice(span.start, span.end).replace(/\s+/g, ' ').trim();
     if (!/[\p{L}\p{N}]/u.test(text)) continue; // stray punctuation is not a sentence
