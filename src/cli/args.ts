@@ -5,9 +5,30 @@ export class UsageError extends Error {}
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 
+/** A value that starts with a dash but is a number ("-3", "-3s", "-0.5"), not a flag. */
+const NEGATIVE_NUMBER = /^-\.?\d/;
+
+/**
+ * `--length -3` becomes `--length=-3`, so a negative number reaches the option's own check and is
+ * reported as out of range rather than as a missing value.
+ */
+function attachNegativeValues(args: readonly string[], options: OptionSpec): string[] {
+  const out: string[] = [];
+  for (let k = 0; k < args.length; k++) {
+    const arg = args[k]!;
+    const next = args[k + 1];
+    const name = arg.startsWith('--') ? arg.slice(2) : null;
+    if (name !== null && options[name]?.type === 'string' && next !== undefined && NEGATIVE_NUMBER.test(next)) {
+      out.push(`${arg}=${next}`);
+      k++;
+    } else out.push(arg);
+  }
+  return out;
+}
+
 export function parseCommandArgs<const T extends OptionSpec>(args: string[], options: T) {
   try {
-    return parseArgs({ args, options, allowPositionals: true as const, strict: true as const });
+    return parseArgs({ args: attachNegativeValues(args, options), options, allowPositionals: true as const, strict: true as const });
   } catch (error) {
     const e = error as { code?: string; message: string };
     const flag = /'(-{1,2}[^'\s]+)/.exec(e.message)?.[1];

@@ -1,6 +1,15 @@
 /** Entry point of the `tersely` binary. */
 import { main } from './main';
 
+// `tersely summarize … | head -1`: the reader closed the pipe on purpose; stop quietly, as other
+// filters do, instead of dying with an unhandled EPIPE.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(0);
+    throw error;
+  });
+}
+
 main(process.argv.slice(2)).then(
   (code) => {
     process.exitCode = code;

@@ -1,8 +1,23 @@
 /** `tersely --help`: the schema options of each command (option-flags.ts) and its own flags. */
 import { FORMATS, METHODS } from '../core/index';
 import { helpLine, optionHelp } from './option-flags';
+import { JSON_OFFSETS } from './render-summary';
 
 const inputFormats = FORMATS.map((f) => f.id).join(', ');
+
+/** Text wrapped to 100 columns, indented by two. */
+function paragraph(text: string): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(/\s+/)) {
+    if (line && 2 + line.length + 1 + word.length > 100) {
+      lines.push(`  ${line}`);
+      line = word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(`  ${line}`);
+  return lines;
+}
 
 export function helpText(): string {
   return [
@@ -37,6 +52,19 @@ export function helpText(): string {
     helpLine('--match REGEX', "only files whose path below DIR matches (e.g. '^\\d*[02468]-')"),
     ...optionHelp('train'),
     helpLine('--quiet', 'no progress lines'),
+    '',
+    'Input',
+    ...paragraph(
+      'Regular files and standard input ("-") only: folders, devices and named pipes are refused. --max-size counts characters ' +
+        '(UTF-16 code units); a file of more than 3 bytes per allowed character is refused before it is read, any other file ' +
+        'once decoded. Bytes that are not valid UTF-8 read as U+FFFD (�), with a note. ' +
+        `JSON offsets (start, end) are ${JSON_OFFSETS}; each object says so ("offsets", "byteOrderMark").`,
+    ),
+    '',
+    'Exit status',
+    '  0  every file was summarized',
+    '  1  a file could not be read, or gave no summary (the reason is on standard error)',
+    '  2  a usage or option error (including a model file that does not validate)',
     '',
     'A summary quotes sentences from the document; it can drop context that a sentence relied on.',
     'Colour is used on terminals unless NO_COLOR is set.',

@@ -4,8 +4,9 @@ import { UsageError } from './args';
 import { InputError } from './read-input';
 import { runSummarize } from './summarize-command';
 import { helpText } from './help';
-
-declare const TERSELY_VERSION: string | undefined;
+import { warn } from './terminal-text';
+// package.json's own field; the bundler copies only this field into dist/cli.cjs.
+import { version } from '../../package.json';
 
 type Command = (args: string[]) => Promise<number>;
 
@@ -22,12 +23,12 @@ export async function main(argv: string[]): Promise<number> {
     return name === undefined ? 2 : 0;
   }
   if (name === '--version' || name === '-v') {
-    process.stdout.write(`${typeof TERSELY_VERSION === 'string' ? TERSELY_VERSION : 'dev'}\n`);
+    process.stdout.write(`${version}\n`);
     return 0;
   }
   const load = COMMANDS[name];
   if (!load) {
-    process.stderr.write(`tersely: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')}; see tersely --help)\n`);
+    warn(`tersely: unknown command "${name}" (commands: ${Object.keys(COMMANDS).join(', ')}; see tersely --help)`);
     return 2;
   }
   if (rest.includes('--help') || rest.includes('-h')) {
@@ -38,15 +39,15 @@ export async function main(argv: string[]): Promise<number> {
     return await (await load())(rest);
   } catch (error) {
     if (error instanceof UsageError) {
-      process.stderr.write(`tersely ${name}: ${error.message} (see tersely --help)\n`);
+      warn(`tersely ${name}: ${error.message} (see tersely --help)`);
       return 2;
     }
     if (error instanceof OptionsError) {
-      for (const problem of error.problems) process.stderr.write(`tersely ${name}: ${flagFor(problem.key)}: ${problem.reason}\n`);
+      for (const problem of error.problems) warn(`tersely ${name}: ${flagFor(problem.key)}: ${problem.reason}`);
       return 2;
     }
     if (error instanceof InputError) {
-      process.stderr.write(`tersely ${name}: ${error.message}\n`);
+      warn(`tersely ${name}: ${error.message}`);
       return 1;
     }
     throw error;

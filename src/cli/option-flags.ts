@@ -51,6 +51,11 @@ function single<T>(flag: string, values: readonly T[] | undefined): T | undefine
   return values[0];
 }
 
+/** "expected a whole number from 0 to 100, got "0x5"" → "got "0x5"": the flag's message already says what it takes. */
+function withoutExpects(reason: string): string {
+  return reason.replace(/^expected .*?, got /, 'got ');
+}
+
 /**
  * Parses `args` for `command`. Values are checked by the schema's kinds; a bad one is a UsageError
  * that names the flag and says what it takes.
@@ -76,7 +81,7 @@ export function parseFlags(command: CliCommand, args: string[], extra: OptionSpe
     const texts = cli.repeatable ? given : [single(cli.flag, given)!];
     const checked = texts.map((text) => definition.kind.fromText(text));
     const bad = checked.find((c) => !c.ok);
-    if (bad && !bad.ok) throw new UsageError(`--${cli.flag} takes ${definition.kind.expects}: ${bad.reason}`);
+    if (bad && !bad.ok) throw new UsageError(`--${cli.flag} takes ${definition.kind.expects}: ${withoutExpects(bad.reason)}`);
     options[key] = cli.repeatable ? checked.flatMap((c) => (c.ok ? (c.value as readonly string[]) : [])) : (checked[0] as { value: unknown }).value;
   }
 

@@ -1,6 +1,7 @@
-/** Terminal and JSON views of a summary. */
+/** Terminal and JSON views of a summary. Text from the document is neutralized before it is styled. */
 import { LineIndex, type Summary } from '../core/index';
 import type { Style } from './style';
+import { neutralizeControls as safe } from './terminal-text';
 
 export const EXTRACTIVE_NOTE = 'Extractive summary: every line is quoted from the text and may lose the context around it.';
 
@@ -19,7 +20,7 @@ export function renderText(name: string, summary: Summary, style: Style): string
   const lineOf = (offset: number) => lines.lineNumber(offset - summary.document.baseOffset);
   const out: string[] = [];
   const title = summary.document.title ? `${summary.document.title} (${name})` : name;
-  out.push(style.bold(title));
+  out.push(style.bold(safe(title)));
   out.push(
     style.dim(
       `${stats.wordsOut.toLocaleString('en-US')} of ${stats.wordsIn.toLocaleString('en-US')} words (${percent(stats.compression)}) · ` +
@@ -28,33 +29,38 @@ export function renderText(name: string, summary: Summary, style: Style): string
     ),
   );
   out.push(style.dim(EXTRACTIVE_NOTE));
-  for (const notice of summary.notices) out.push(style.warn(`note: ${notice}`));
+  for (const notice of summary.notices) out.push(style.warn(`note: ${safe(notice)}`));
 
   const flagged = new Map(summary.warnings.map((w) => [w.sentence, w]));
   let currentPath: string | null = null;
   for (const picked of summary.sentences) {
     const path = picked.sectionPath.join(' › ') || '(opening)';
     if (path !== currentPath) {
-      out.push('', style.accent(path));
+      out.push('', style.accent(safe(path)));
       currentPath = path;
     }
     const mark = flagged.has(picked.sentence) ? style.warn('!') : '•';
     const edited = picked.edited ? style.dim(` (edited: ${picked.edited.reason})`) : '';
-    out.push(`  ${mark} ${picked.text}${edited} ${style.dim(`[line ${lineOf(picked.span.start)}]`)}`);
+    out.push(`  ${mark} ${safe(picked.text)}${edited} ${style.dim(`[line ${lineOf(picked.span.start)}]`)}`);
   }
   if (summary.warnings.length > 0) {
     out.push('', style.warn(`May not stand alone (${summary.warnings.length}):`));
     for (const warning of summary.warnings) {
       const context = warning.context.map((i) => `line ${lineOf(summary.document.sentences[i]!.span.start)}`).join(', ');
-      out.push(`  ! line ${lineOf(warning.span.start)}: ${warning.message}${context ? ` — context at ${context}` : ''}`);
+      out.push(`  ! line ${lineOf(warning.span.start)}: ${safe(warning.message)}${context ? ` — context at ${context}` : ''}`);
     }
   }
   return out.join('\n') + '\n';
 }
 
-export function summaryToJson(name: string, summary: Summary): object {
+/** How offsets in the JSON output count, stated in the output itself. */
+export const JSON_OFFSETS = "UTF-16 code units into the input decoded as UTF-8, after its byte-order mark if it has one";
+
+export function summaryToJson(name: string, summary: Summary, input: { readonly byteOrderMark: boolean } = { byteOrderMark: false }): object {
   return {
     file: name,
+    offsets: JSON_OFFSETS,
+    byteOrderMark: input.byteOrderMark,
     method: summary.method,
     language: summary.language,
     sentences: summary.sentences.map((p) => ({

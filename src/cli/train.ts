@@ -3,12 +3,16 @@
  * a folder of the user's own documents that carry their own summaries. This file only walks the
  * folder and writes the result; labelling, features and counting are the engine's (src/core/learn).
  */
-import { readdir, readFile, writeFile } from 'node:fs/promises';
+import { readdir, writeFile } from 'node:fs/promises';
 import { join, relative } from 'node:path';
-import { exampleFromDocument, FORMATS, formatForFileName, modelFeatureReport, trainModel, type BayesModel, type TrainingExample } from '../core/index';
+import { exampleFromDocument, FORMATS, formatForFileName, inputProblem, modelFeatureReport, SUMMARY_OPTIONS, trainModel, type BayesModel, type TrainingExample } from '../core/index';
 import { UsageError } from './args';
 import { parseFlags } from './option-flags';
-import { InputError } from './read-input';
+import { InputError, readInput } from './read-input';
+import { warn } from './terminal-text';
+
+/** The `skipped` entry of files the reader refused (too large, binary, empty); each is also named on standard error. */
+const UNREADABLE = 'not readable as text';
 
 const TRAIN_FLAGS = {
   'reference-heading': { type: 'string' },
@@ -56,6 +60,18 @@ export function modelJson(model: BayesModel): string {
   return JSON.stringify(model, null, 2).replace(/\[\s*([-\d.e+,\s]*?)\s*\]/g, (_, inner: string) => `[${inner.split(/,\s*/).join(', ')}]`) + '\n';
 }
 
+/** A document's text through the same checks as `summarize` (size while reading, binary, empty, length), or why not. */
+async function readTrainingFile(path: string, maxChars: number): Promise<string | { readonly refused: string }> {
+  try {
+    const input = await readInput(path, 'markdown', maxChars);
+    const problem = inputProblem(input.text, maxChars);
+    return problem === null ? input.text : { refused: problem };
+  } catch (error) {
+    if (error instanceof InputError) return { refused: error.message };
+    throw error;
+  }
+}
+
 export async function runTrain(args: string[]): Promise<number> {
   const { options, extra: values, positionals } = parseFlags('train', args, TRAIN_FLAGS);
   if (positionals.length !== 1) throw new UsageError('train takes one folder of documents');
@@ -81,14 +97,23 @@ export async function runTrain(args: string[]): Promise<number> {
   if (files.length === 0) throw new InputError(`no ${KNOWN_EXTENSIONS} files in ${root}${match ? ` whose name matches ${match}` : ''}`);
   const examples: TrainingExample[] = [];
   const skipped: Record<string, number> = {};
+  const maxChars = (options.maxChars as number | undefined) ?? SUMMARY_OPTIONS.maxChars.default;
+  const refused: string[] = [];
   for (const [index, path] of files.entries()) {
+    if ((index + 1) % 50 === 0 || index + 1 === files.length) say(`\rreading ${index + 1}/${files.length} files`);
     const format = formatForFileName(path)!.id;
-    const example = exampleFromDocument(await readFile(path, 'utf8'), { referenceHeading: heading, format, language });
+    const text = await readTrainingFile(path, maxChars);
+    if (typeof text !== 'string') {
+      refused.push(`tersely train: ${path}: ${text.refused}`);
+      skipped[UNREADABLE] = (skipped[UNREADABLE] ?? 0) + 1;
+      continue;
+    }
+    const example = exampleFromDocument(text, { referenceHeading: heading, format, language });
     if ('skipped' in example) skipped[example.skipped] = (skipped[example.skipped] ?? 0) + 1;
     else examples.push(example);
-    if ((index + 1) % 50 === 0 || index + 1 === files.length) say(`\rreading ${index + 1}/${files.length} files`);
   }
   say('\n');
+  for (const line of refused) warn(line);
   if (examples.length === 0) throw new InputError(`none of the ${files.length} files has a "${heading}" section with prose in it`);
 
   let model: BayesModel;

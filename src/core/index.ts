@@ -52,7 +52,7 @@ export { METHODS } from './rank/registry';
 export type { MethodEntry, Ranker } from './rank/registry';
 export { BLEND_WEIGHTS } from './rank/blend';
 export type { RankOptions, BlendComponent, BlendWeights } from './rank/blend';
-export { validateModel, loadModel, defaultModel, modelFeatureReport, ModelError, MODEL_FORMAT, MODEL_VERSION } from './rank/trained/model';
+export { validateModel, loadModel, defaultModel, modelFeatureReport, ModelError, MODEL_FORMAT, MODEL_VERSION, MODEL_LIMITS } from './rank/trained/model';
 export type { BayesModel, ModelLoad } from './rank/trained/model';
 export { trainModel, exampleFromDocument } from './rank/trained/train-model';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
@@ -71,6 +71,7 @@ export type * from './check/abstract-report';
 export { LineIndex } from './text/lines';
 export type { LinePosition } from './text/lines';
 export { countWords, wordTokens, SUPPORTED_LANGUAGES } from './text/tokens';
+export { inputProblem } from './input-guard';
 export { DEFAULT_EXCLUDED_HEADINGS, HEADING_CLASSES, normalizeHeading, sameHeading } from './text/headings';
 
 // Evaluation (benchmarks).

@@ -1,7 +1,9 @@
 /**
  * Refuses input that cannot be summarized sensibly, with a one-line reason instead of a hang or
- * a page of garbage.
+ * a page of garbage, and keeps text that cannot be printed faithfully (lone surrogates) out of
+ * what the engine hands back.
  */
+import type { ParsedDocument } from './types';
 
 /** Share of NUL or other C0 control characters above which text is treated as binary (common practice, no source). */
 const BINARY_CONTROL_SHARE = 0.01;
@@ -28,4 +30,38 @@ export function looksBinary(text: string): boolean {
 
 function formatCount(n: number): string {
   return n.toLocaleString('en-US');
+}
+
+/** A UTF-16 code unit of a surrogate pair without its other half (text that was cut or badly converted). */
+const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g;
+
+export function loneSurrogates(text: string): number {
+  LONE_SURROGATE.lastIndex = 0;
+  let count = 0;
+  while (LONE_SURROGATE.exec(text) !== null) count++;
+  return count;
+}
+
+/** `text` with each lone surrogate replaced by U+FFFD: the same length, so offsets into it still hold. */
+export function wellFormed(text: string): string {
+  return text.replace(LONE_SURROGATE, '\ufffd');
+}
+
+/**
+ * The document with well-formed sentence, heading and title texts, and a notice, when the input
+ * holds lone surrogates; unchanged otherwise. Spans and `doc.text` stay as given: a caller slices
+ * its own text with them.
+ */
+export function withWellFormedTexts(doc: ParsedDocument): { readonly doc: ParsedDocument; readonly notices: readonly string[] } {
+  const count = loneSurrogates(doc.text);
+  if (count === 0) return { doc, notices: [] };
+  return {
+    doc: {
+      ...doc,
+      title: doc.title === null ? null : wellFormed(doc.title),
+      sections: doc.sections.map((section) => ({ ...section, heading: wellFormed(section.heading) })),
+      sentences: doc.sentences.map((sentence) => ({ ...sentence, text: wellFormed(sentence.text) })),
+    },
+    notices: [`The text holds ${formatCount(count)} lone surrogate code unit${count === 1 ? '' : 's'} (broken UTF-16); quoted text shows each as U+FFFD (�).`],
+  };
 }

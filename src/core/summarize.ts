@@ -9,7 +9,7 @@ import { analyze, resolveLanguage } from './analyze';
 import { findStandAloneProblems, repairAutomatically } from './coherence/index';
 import { FORMAT_IDS } from './formats/catalog';
 import { parseDocument } from './formats/registry';
-import { inputProblem } from './input-guard';
+import { inputProblem, withWellFormedTexts } from './input-guard';
 import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOptions } from './options/resolve';
 import { SUMMARY_OPTIONS } from './options/schema';
 import type { RankOptions } from './rank/blend';
@@ -17,6 +17,7 @@ import { rankWith } from './rank/registry';
 import { sentenceFitness, summaryRelevance } from './select/fitness';
 import { selectSentences } from './select/select';
 import { candidateUnits } from './select/units';
+import { honourBudget } from './summary/budget';
 import { describeSummary } from './summary/report';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
 import { sentenceVectorsOf, termIndexOf } from './vectors';
@@ -40,6 +41,8 @@ const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'format', 'baseOffse
 export interface PreparedDocument {
   readonly analyzed: AnalyzedDocument;
   readonly options: SummaryOptions;
+  /** What reading the text noticed (lone surrogates), for the summary's notices. */
+  readonly notices?: readonly string[];
 }
 
 export type Preparation = { readonly ok: true; readonly prepared: PreparedDocument } | { readonly ok: false; readonly refused: Summary };
@@ -61,9 +64,9 @@ export function prepareDocument(text: string, request: SummarizeRequest = {}): P
   const problem = inputProblem(text, options.maxChars);
   if (problem) return { ok: false, refused: refusedSummary(text, format, baseOffset, options, problem) };
   request.onStage?.('reading');
-  const doc = parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes });
+  const { doc, notices } = withWellFormedTexts(parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes }));
   const analyzed = analyze(doc, resolveLanguage(doc, options.language));
-  return { ok: true, prepared: { analyzed, options } };
+  return { ok: true, prepared: { analyzed, options, ...(notices.length > 0 ? { notices } : {}) } };
 }
 
 /** The options a ranker sees. */
@@ -121,9 +124,10 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
     mmrLambda: options.mmrLambda,
   });
 
-  let picked = selection.picked;
+  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: candidateList, wordLimit: selection.wordLimit });
+  let picked = [...honoured.picked];
   let edited: ReadonlyMap<number, string> | undefined;
-  if (options.repair === 'auto') {
+  if (options.repair === 'auto' && picked.length > 0) {
     // A sentence budget has no word limit; repairs then may only swap, never grow the summary.
     const pickedWords = picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
     const repaired = repairAutomatically({
@@ -139,7 +143,8 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
     edited = repaired.edited;
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
-  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings });
+  const notices = [...(prepared.notices ?? []), ...honoured.notices];
+  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings, notices });
 }
 
 function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {

@@ -5,6 +5,9 @@
  * timeout only stops a hang.
  */
 import assert from 'node:assert/strict';
+import defaultModelJson from '../../media/models/default-model.json';
+import { OptionsError } from '../../src/core/options/resolve';
+import { FALLBACK_PIECE_CHARS } from '../../src/core/segment/sentences';
 import { summarize, type SummarizeRequest } from '../../src/core/summarize';
 import type { Summary } from '../../src/core/types';
 import { summaryFailures } from './helpers/summary-properties';
@@ -172,6 +175,85 @@ describe('hostile documents', function () {
         }
       });
     }
+  });
+
+  describe('text without sentence punctuation', () => {
+    /** Invented Thai notes of a ferry crew; phrases separated by spaces, no full stops. */
+    const THAI = ['เรือออกจากท่าตอนเก้าโมง', 'ผู้โดยสารรอที่ท่าเรือทางเหนือ', 'ลูกเรือตรวจเครื่องยนต์ทุกเช้า', 'ตารางเวลาจะเปลี่ยนในเดือนพฤษภาคม'];
+    const thaiDigits = (n: number) => String(n).replace(/\d/g, (d) => String.fromCharCode(0x0e50 + Number(d)));
+    const thai = Array.from({ length: 40 }, (_, i) => `${THAI[i % 4]}${thaiDigits(i)}`).join(' ');
+
+    for (const format of ['markdown', 'plaintext'] as const) {
+      it(`Thai (${format}) is split at its phrase spaces and summarized within the ratio budget`, () => {
+        const summary = run(thai, { format });
+        assert.equal(summary.document.sentences.length, 40);
+        assert.ok(summary.sentences.length >= 1 && summary.stats.compression <= 0.16, String(summary.stats.compression));
+      });
+
+      it(`3,000 words without any punctuation (${format}) become pieces of a long sentence's length, summarized within budget`, () => {
+        const words = ['dock', 'crew', 'moves', 'bikes', 'between', 'the', 'river', 'vans', 'at', 'night'];
+        const text = Array.from({ length: 3_000 }, (_, i) => words[(i * 3 + (i >> 4)) % words.length]).join(' ');
+        const summary = run(text, { format });
+        assert.ok(summary.document.sentences.length >= text.length / FALLBACK_PIECE_CHARS);
+        assert.ok(summary.document.sentences.every((s) => s.text.length <= FALLBACK_PIECE_CHARS));
+        assert.ok(summary.sentences.length >= 1 && summary.stats.compression <= 0.16, String(summary.stats.compression));
+      });
+    }
+
+    it('a plain-text list of 300 short lines without markers gives one unit per line', () => {
+      const items = ['apples', 'bread for the week', 'milk from the corner shop', 'olive oil', 'rice and beans', 'tea'];
+      const text = ['Shopping for the depot kitchen', '', ...Array.from({ length: 300 }, (_, i) => `${items[i % items.length]} ${i}`)].join('\n');
+      const summary = run(text, { format: 'plaintext' });
+      // Only the breaks after the longest lines ("milk from the corner shop 1nn") look like wrapping.
+      assert.ok(summary.document.sentences.length >= 250, String(summary.document.sentences.length));
+      assert.ok(summary.stats.compression <= 0.16);
+    });
+
+    it('an HTML page pasted into a .txt file is cut at its block ends', () => {
+      const page = `<html><body>${Array.from({ length: 100 }, (_, i) => `<p>${sentence(i).replace('.', '')}</p>`).join('')}</body></html>`;
+      const summary = run(page, { format: 'plaintext' });
+      assert.equal(summary.document.sentences.length, 100);
+      assert.ok(summary.stats.compression <= 0.16);
+    });
+
+    it('a word budget smaller than every sentence gives an empty summary and says why', () => {
+      const summary = run([0, 1, 2, 3].map(sentence).join(' '), { budget: { unit: 'words', value: 3 } });
+      assertMessageOnly(summary, /^No sentence fits in 3 words \(the shortest has 12\), so the summary is empty/);
+    });
+  });
+
+  it('lone surrogates never reach the returned texts; a notice says they were replaced', () => {
+    const text = `# Dock \uDC00report\n\n${[0, 1, 2].map((i) => sentence(i).replace(' ', ' \uD800')).join(' ')}`;
+    const summary = run(text, { budget: { unit: 'sentences', value: 3 } });
+    const wellFormed = (s: string) => !/[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/.test(s);
+    const texts = [summary.document.title ?? '', ...summary.document.sections.map((s) => s.heading), ...summary.document.sentences.map((s) => s.text), ...summary.sentences.map((s) => s.text), ...summary.sentences.flatMap((s) => s.sectionPath)];
+    assert.ok(texts.every(wellFormed), JSON.stringify(texts));
+    assert.ok(summary.sentences.every((s) => s.text.includes(' \uFFFD')));
+    assert.deepEqual(summary.notices, ['The text holds 4 lone surrogate code units (broken UTF-16); quoted text shows each as U+FFFD (�).']);
+    // Offsets still index the caller's text: each picked span holds the sentence, surrogate and all.
+    for (const picked of summary.sentences) assert.equal(text.slice(picked.span.start, picked.span.end).replace(/\uD800/g, '\uFFFD'), picked.text);
+  });
+
+  it('a byte-order mark given to the engine is counted in the offsets', () => {
+    const text = `\uFEFF${sentence(0)} ${sentence(1)}`;
+    const summary = run(text, { format: 'plaintext', budget: { unit: 'sentences', value: 1 } });
+    const picked = summary.sentences[0]!;
+    assert.equal(text.slice(picked.span.start, picked.span.end), picked.text);
+    assert.ok(picked.span.start >= 1);
+  });
+
+  it('escape sequences in the text come back exactly (terminal safety is the front end\'s job, see cli-output.test.ts)', () => {
+    // Enough prose that four control characters stay below the binary threshold (1% of the text).
+    const prose = Array.from({ length: 10 }, (_, i) => sentence(i)).join(' ');
+    const text = `${prose} The van \u001b]0;owned\u0007waits at the \u001b[2Jdock. ${prose}`;
+    const summary = run(text, { budget: { unit: 'sentences', value: 21 } });
+    assert.ok(summary.sentences.some((s) => s.text.includes('\u001b]0;owned\u0007')));
+  });
+
+  it('a model with counts of 1e308 is refused as an option, not scored as NaN', () => {
+    const model = JSON.parse(JSON.stringify(defaultModelJson)) as { classes: { positive: number } };
+    model.classes.positive = 1e308;
+    assert.throws(() => summarize(sentence(0), { model }), OptionsError);
   });
 
   it('controls short of binary (form feeds, a vertical tab, a bell) still give a summary', () => {

@@ -25,6 +25,8 @@ export const LENGTH_BOUNDS: Readonly<Record<BudgetUnit, LengthBounds>> = {
 };
 
 const GRAMMAR = /^(\d+(?:\.\d+)?)\s*(%|w|words?|s|sentences?)$/i;
+/** What people type that is close to the grammar (a sign, no unit), read so the message can say what is wrong. */
+const NEAR_GRAMMAR = /^([+-]?\d+(?:\.\d+)?)\s*(%|w|words?|s|sentences?)?$/i;
 
 export const LENGTH_EXPECTS = 'a length such as 15% (of the words), 120w (words) or 6s (sentences)';
 
@@ -45,9 +47,15 @@ function withinBounds(unit: BudgetUnit, amount: number): Checked<Budget> {
 
 /** Reads "15%", "120w", "6s" (also "120 words", "6 sentences"). */
 export function parseLength(text: string): Checked<Budget> {
-  const match = GRAMMAR.exec(text.trim());
+  const match = NEAR_GRAMMAR.exec(text.trim());
   if (!match) return reject(`expected ${LENGTH_EXPECTS}, got ${describe(text)}`);
-  return withinBounds(unitOf(match[2]!), Number(match[1]));
+  const amount = Number(match[1]);
+  if (match[2] === undefined) {
+    return amount < 1
+      ? reject(`${match[1]} is out of range: a length is at least 1%, 1w or 1s`)
+      : reject(`${describe(text)} has no unit: write ${amount}% (of the words), ${amount}w (words) or ${amount}s (sentences)`);
+  }
+  return withinBounds(unitOf(match[2]), amount);
 }
 
 /** The grammar form of a budget: { unit: 'ratio', value: 0.15 } → "15%". */

@@ -71,7 +71,7 @@ export const SUMMARY_OPTIONS = {
   budget: define<Budget>({
     kind: lengthKind,
     default: { unit: 'ratio', value: 0.15 },
-    description: 'How long the summary is: a share of the words (15%), a number of words (120w, a hard limit) or of sentences (6s).',
+    description: 'How long the summary is: a share of the words (15%), a number of words (120w, a hard limit: when no sentence fits, the summary is empty and says why) or of sentences (6s).',
     setting: { key: 'length', order: 1 },
     cli: { flag: 'length', placeholder: 'LENGTH', commands: ['summarize'] },
     panel: true,
@@ -170,7 +170,7 @@ export const SUMMARY_OPTIONS = {
     default: 3_000_000,
     description: 'Largest document (or selection) to read, in characters; larger ones get a message instead.',
     setting: { key: 'maxDocumentSize', order: 14, restricted: true, scope: 'machine-overridable' },
-    cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check'] },
+    cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check', 'train'] },
   }),
   mmrLambda: define({
     kind: numberKind(0, 1),

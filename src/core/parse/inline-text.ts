@@ -10,7 +10,7 @@
  * hard break ('\n') disappear, and both ends are trimmed. Soft line breaks are written as ' '.
  */
 
-import { splitSentences } from '../segment/sentences';
+import { splitSentences, type LineBreaks } from '../segment/sentences';
 import type { Span } from '../types';
 
 export interface NormalizedText {
@@ -19,6 +19,8 @@ export interface NormalizedText {
   readonly starts: Int32Array;
   /** End (exclusive) of that source range. */
   readonly ends: Int32Array;
+  /** Where the soft line breaks were, for the sentence splitter (segment/sentences.ts). */
+  readonly lines?: LineBreaks;
 }
 
 /** Source offsets (local) and the sentence text of one sentence found in a paragraph. */
@@ -28,7 +30,14 @@ export interface LocalSentence {
   readonly end: number;
 }
 
+export interface InlineTextOptions {
+  /** A line that ends early may end a sentence (plain text; see LineBreaks.deliberate). */
+  readonly deliberateLines?: boolean;
+}
+
 export class InlineTextBuilder {
+  constructor(private readonly options: InlineTextOptions = {}) {}
+
   // Units are kept as codes and turned into strings with String.fromCharCode: joining arrays of
   // one-character strings cost several times more (measured on the corpus).
   private readonly units: number[] = [];
@@ -79,23 +88,30 @@ export class InlineTextBuilder {
     const units: number[] = [];
     const starts = new Int32Array(count);
     const ends = new Int32Array(count);
+    const softBreaks: number[] = [];
+    const isSoftBreak = new Set(this.lineBreaks.filter((i) => this.units[i] === SPACE));
     let pendingBlank = -1; // index of the first blank of a run not yet written
+    let pendingSoft = false; // that run holds a soft line break
     for (let i = 0; i < count; i++) {
       const code = this.units[i]!;
       if (code === LINE_FEED) {
         pendingBlank = -1;
+        pendingSoft = false;
         // Collapse consecutive breaks and drop breaks at the start.
         if (units.length === 0 || units[units.length - 1] === LINE_FEED) continue;
       } else if (isBlank(code)) {
         if (pendingBlank < 0) pendingBlank = i;
+        if (isSoftBreak.has(i)) pendingSoft = true;
         continue;
       } else {
         if (pendingBlank >= 0 && units.length > 0 && units[units.length - 1] !== LINE_FEED) {
+          if (pendingSoft) softBreaks.push(units.length);
           starts[units.length] = this.starts[pendingBlank]!;
           ends[units.length] = this.ends[pendingBlank]!;
           units.push(SPACE);
         }
         pendingBlank = -1;
+        pendingSoft = false;
       }
       starts[units.length] = this.starts[i]!;
       ends[units.length] = this.ends[i]!;
@@ -103,7 +119,12 @@ export class InlineTextBuilder {
     }
     while (units.length > 0 && units[units.length - 1] === LINE_FEED) units.pop();
     const length = units.length;
-    return { text: codesToString(units, 0, length), starts: starts.slice(0, length), ends: ends.slice(0, length) };
+    return {
+      text: codesToString(units, 0, length),
+      starts: starts.slice(0, length),
+      ends: ends.slice(0, length),
+      lines: { softBreaks, deliberate: this.options.deliberateLines ?? false },
+    };
   }
 
   private pushCode(code: number, start: number, end: number): void {
@@ -148,7 +169,7 @@ export function sourceSpan(normalized: NormalizedText, span: Span): Span {
 export function sentencesOf(normalized: NormalizedText): LocalSentence[] {
   if (normalized.text.length === 0) return [];
   const out: LocalSentence[] = [];
-  for (const span of splitSentences(normalized.text)) {
+  for (const span of splitSentences(normalized.text, normalized.lines)) {
     if (span.end <= span.start) continue;
     const text = normalized.text.slice(span.start, span.end).replace(/\s+/g, ' ').trim();
     if (!/[\p{L}\p{N}]/u.test(text)) continue; // stray punctuation is not a sentence

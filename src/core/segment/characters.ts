@@ -106,3 +106,25 @@ export function isAlphanumericAt(text: string, index: number): boolean {
   if (code < 0x80) return (code >= 0x30 && code <= 0x39) || ((code | 0x20) >= 0x61 && (code | 0x20) <= 0x7a);
   return ALPHANUMERIC.test(String.fromCodePoint(code));
 }
+
+/** Longest word `lettersAt` reads; enough for any sentence starter or abbreviation. */
+const MAX_WORD_READ = 32;
+const LETTER_OR_MARK = /[\p{L}\p{M}]/u;
+
+/** The run of letters starting at `index` (at most MAX_WORD_READ code units). */
+export function lettersAt(text: string, index: number): string {
+  const limit = Math.min(text.length, index + MAX_WORD_READ);
+  let end = index;
+  while (end < limit) {
+    const code = text.charCodeAt(end);
+    if (code < 0x80) {
+      if ((code | 0x20) < 0x61 || (code | 0x20) > 0x7a) break;
+      end++;
+    } else {
+      const width = code >= 0xd800 && code <= 0xdbff ? 2 : 1;
+      if (end + width > limit || !LETTER_OR_MARK.test(text.slice(end, end + width))) break;
+      end += width;
+    }
+  }
+  return text.slice(index, end);
+}

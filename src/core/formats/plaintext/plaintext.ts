@@ -101,9 +101,12 @@ function addList(doc: DocumentBuilder, text: string, items: ParagraphBlock[], pr
   }
 }
 
-/** Lines joined with single spaces; a trailing reStructuredText `::` reads as ':'. */
+/**
+ * Lines joined with single spaces; a trailing reStructuredText `::` reads as ':'. A line that ends
+ * early (one item per line) may end a sentence: plain text has no other way to say so.
+ */
 function normalizedText(text: string, ranges: readonly TextRange[]): InlineTextBuilder {
-  const out = new InlineTextBuilder();
+  const out = new InlineTextBuilder({ deliberateLines: true });
   ranges.forEach((range, n) => {
     if (n > 0) out.softBreak(ranges[n - 1]!.end);
     let end = range.end;

@@ -35,68 +35,118 @@ export class ModelError extends Error {
   override readonly name = 'ModelError';
 }
 
-const ARITY: Readonly<Record<string, number>> = Object.fromEntries(FEATURES.map((f) => [f.name, f.arity]));
+/**
+ * Bounds a model must keep, in one place. A model file is about 2 KB (media/models/default-model.json
+ * is 1,979 bytes); 256 KiB leaves room for any provenance while keeping a file that is read, parsed
+ * and sent with requests cheap. Counts are whole numbers of training sentences; up to
+ * Number.MAX_SAFE_INTEGER they add up exactly and their logarithms stay finite (1e308 would not:
+ * the two class counts together overflow to Infinity). Smoothing above a million would drown any
+ * count a real corpus gives (Laplace smoothing is 1).
+ */
+export const MODEL_LIMITS = {
+  maxFileBytes: 256 * 1024,
+  maxCount: Number.MAX_SAFE_INTEGER,
+  maxSmoothing: 1_000_000,
+} as const;
 
+/** Arity of each feature this version knows; a Map, so "__proto__" or "constructor" is just an unknown name. */
+const ARITY: ReadonlyMap<string, number> = new Map(FEATURES.map((f) => [f.name, f.arity]));
+const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'smoothing', 'classes', 'features', 'trainedOn']);
+const CLASS_KEYS = new Set(['positive', 'negative']);
+
+/** A plain JSON object (as JSON.parse makes them), not an array, a class instance or a null-prototype trick. */
 function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === 'object' && value !== null && !Array.isArray(value);
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
+  const prototype: unknown = Object.getPrototypeOf(value);
+  return prototype === Object.prototype || prototype === null;
+}
+
+/** The record's own property `key` (never one inherited from Object.prototype), or undefined. */
+function own(record: Record<string, unknown>, key: string): unknown {
+  return Object.hasOwn(record, key) ? record[key] : undefined;
+}
+
+/** Refuses keys outside `allowed`, naming the first one. */
+function onlyKeys(record: Record<string, unknown>, allowed: ReadonlySet<string>, where: string): void {
+  const unknown = Object.keys(record).find((key) => !allowed.has(key));
+  if (unknown !== undefined) throw new ModelError(`${where} has an unknown field ${JSON.stringify(unknown)} (expected ${[...allowed].join(', ')})`);
+}
+
+function isCount(value: unknown, min: number): value is number {
+  return typeof value === 'number' && Number.isSafeInteger(value) && value >= min && value <= MODEL_LIMITS.maxCount;
 }
 
 function countList(value: unknown, where: string, arity: number): number[] {
   if (!Array.isArray(value)) throw new ModelError(`${where} must be a list of ${arity} counts`);
   if (value.length !== arity) throw new ModelError(`${where} has ${value.length} counts; this version of the feature has ${arity}`);
-  return value.map((count, v) => {
-    if (typeof count !== 'number' || !Number.isFinite(count) || count < 0) throw new ModelError(`${where}[${v}] must be a count of at least 0`);
+  return value.map((count: unknown, v) => {
+    if (!isCount(count, 0)) throw new ModelError(`${where}[${v}] must be a whole number from 0 to ${MODEL_LIMITS.maxCount}, got ${describeValue(count)}`);
     return count;
   });
 }
 
+function describeValue(value: unknown): string {
+  return typeof value === 'number' || typeof value === 'boolean' || value === null ? String(value) : typeof value === 'string' ? JSON.stringify(value.slice(0, 40)) : typeof value;
+}
+
 /**
- * Checks a parsed model file and returns it typed; throws ModelError saying what is wrong.
- * Features the model leaves out are simply not used; features this version does not know are refused.
+ * Checks a parsed model file and returns it typed; throws ModelError saying what is wrong. Only
+ * own properties are read; unknown fields and features this version does not know are refused;
+ * every number is a finite count within MODEL_LIMITS. Features the model leaves out are not used.
  */
 export function validateModel(json: unknown): BayesModel {
   if (!isRecord(json)) throw new ModelError('a model file must hold a JSON object');
-  if (json.format !== MODEL_FORMAT) throw new ModelError(`not a sentence model: "format" must be "${MODEL_FORMAT}"`);
-  if (json.version !== MODEL_VERSION) throw new ModelError(`model version ${String(json.version)} is not supported (expected ${MODEL_VERSION})`);
-  if (json.kind !== 'naive-bayes') throw new ModelError(`model kind ${String(json.kind)} is not supported (expected "naive-bayes")`);
-  const smoothing = json.smoothing;
-  if (typeof smoothing !== 'number' || !Number.isFinite(smoothing) || smoothing <= 0) throw new ModelError('"smoothing" must be a number above 0');
-  const classes = json.classes;
-  if (!isRecord(classes)) throw new ModelError('"classes" must give the positive and negative sentence counts');
-  const positive = classes.positive;
-  const negative = classes.negative;
-  for (const [label, count] of [['positive', positive], ['negative', negative]] as const) {
-    if (typeof count !== 'number' || !Number.isFinite(count) || count <= 0) throw new ModelError(`"classes.${label}" must be a count above 0 (the model needs examples of both classes)`);
+  if (own(json, 'format') !== MODEL_FORMAT) throw new ModelError(`not a sentence model: "format" must be "${MODEL_FORMAT}"`);
+  const version = own(json, 'version');
+  if (version !== MODEL_VERSION) throw new ModelError(`model version ${describeValue(version)} is not supported (expected ${MODEL_VERSION})`);
+  const kind = own(json, 'kind');
+  if (kind !== 'naive-bayes') throw new ModelError(`model kind ${describeValue(kind)} is not supported (expected "naive-bayes")`);
+  onlyKeys(json, TOP_LEVEL_KEYS, 'the model');
+  const smoothing = own(json, 'smoothing');
+  if (typeof smoothing !== 'number' || !Number.isFinite(smoothing) || smoothing <= 0 || smoothing > MODEL_LIMITS.maxSmoothing) {
+    throw new ModelError(`"smoothing" must be a number above 0 and at most ${MODEL_LIMITS.maxSmoothing.toLocaleString('en-US')}, got ${describeValue(smoothing)}`);
   }
-  if (!isRecord(json.features)) throw new ModelError('"features" must be an object of per-feature counts');
+  const classes = own(json, 'classes');
+  if (!isRecord(classes)) throw new ModelError('"classes" must give the positive and negative sentence counts');
+  onlyKeys(classes, CLASS_KEYS, '"classes"');
+  const positive = own(classes, 'positive');
+  const negative = own(classes, 'negative');
+  for (const [label, count] of [['positive', positive], ['negative', negative]] as const) {
+    if (!isCount(count, 1)) throw new ModelError(`"classes.${label}" must be a whole number from 1 to ${MODEL_LIMITS.maxCount} (the model needs examples of both classes), got ${describeValue(count)}`);
+  }
+  const totals = { positive: positive as number, negative: negative as number };
+  if (totals.positive + totals.negative > MODEL_LIMITS.maxCount) throw new ModelError(`the class counts add up to more than ${MODEL_LIMITS.maxCount}`);
+  const featureJson = own(json, 'features');
+  if (!isRecord(featureJson)) throw new ModelError('"features" must be an object of per-feature counts');
   const features: Record<string, ClassCounts> = {};
-  for (const [name, entry] of Object.entries(json.features)) {
-    const arity = ARITY[name];
-    if (arity === undefined) throw new ModelError(`unknown feature "${name}"; known features: ${Object.keys(ARITY).join(', ')}`);
+  for (const name of Object.keys(featureJson)) {
+    const arity = ARITY.get(name);
+    if (arity === undefined) throw new ModelError(`unknown feature ${JSON.stringify(name)}; known features: ${[...ARITY.keys()].join(', ')}`);
+    const entry = own(featureJson, name);
     if (!isRecord(entry)) throw new ModelError(`features.${name} must hold "positive" and "negative" counts`);
+    onlyKeys(entry, CLASS_KEYS, `features.${name}`);
     const counts = {
-      positive: countList(entry.positive, `features.${name}.positive`, arity),
-      negative: countList(entry.negative, `features.${name}.negative`, arity),
+      positive: countList(own(entry, 'positive'), `features.${name}.positive`, arity),
+      negative: countList(own(entry, 'negative'), `features.${name}.negative`, arity),
     };
     // Every training sentence has exactly one value per feature, so each list sums to its class size.
     for (const label of ['positive', 'negative'] as const) {
       const sum = counts[label].reduce((a, b) => a + b, 0);
-      const expected = label === 'positive' ? (positive as number) : (negative as number);
-      if (Math.abs(sum - expected) > 1e-6 * Math.max(1, expected)) {
-        throw new ModelError(`features.${name}.${label} sums to ${sum}, but classes.${label} is ${expected}`);
-      }
+      if (sum !== totals[label]) throw new ModelError(`features.${name}.${label} sums to ${sum}, but classes.${label} is ${totals[label]}`);
     }
     features[name] = counts;
   }
   if (Object.keys(features).length === 0) throw new ModelError('the model has no features');
+  const trainedOn = own(json, 'trainedOn');
+  if (trainedOn !== undefined && !isRecord(trainedOn)) throw new ModelError('"trainedOn" must be an object (free-form provenance)');
   return {
     format: MODEL_FORMAT,
     version: MODEL_VERSION,
     kind: 'naive-bayes',
     smoothing,
-    classes: { positive: positive as number, negative: negative as number },
+    classes: totals,
     features,
-    ...(isRecord(json.trainedOn) ? { trainedOn: json.trainedOn } : {}),
+    ...(trainedOn !== undefined ? { trainedOn } : {}),
   };
 }
 
