@@ -4,6 +4,7 @@
  */
 import type { SummaryOptions } from '../options/resolve';
 import type { Candidates } from '../select/units';
+import { extractKeyPhrases } from '../keyphrases/textrank-keywords';
 import { sectionPath } from './sections';
 import type {
   AnalyzedDocument,
@@ -93,6 +94,7 @@ export function describeSummary(input: ReportInput): Summary {
     language: analyzed.language,
     sentences,
     shares,
+    keyPhrases: extractKeyPhrases(analyzed),
     stats: {
       wordsIn,
       wordsOut,
