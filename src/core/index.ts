@@ -57,6 +57,10 @@ export type { BayesModel, ModelLoad } from './rank/trained/model';
 export { trainModel, exampleFromDocument } from './rank/trained/train-model';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
+// Key phrases (TextRank keyword extraction).
+export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
+export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
+
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
 export type { RepairOutcome } from './summary/apply-repair';
