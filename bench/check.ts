@@ -35,6 +35,8 @@ const FALSE_ALARM_TARGET = 0.05;
 interface Tally {
   sentences: number;
   flagged: number;
+  /** Sentences whose verdict is "unsupported" (below the support threshold, findings or not); absent in older baselines. */
+  unsupported?: number;
   /** Flags by cause ("unsupported", or the finding kind of a contradiction). */
   readonly causes: Record<string, number>;
   readonly perturbed: Record<PerturbationKind, { cases: number; measurable: number; caught: number; caughtByKind: number }>;
@@ -123,6 +125,7 @@ export async function measure(split: Half, limit: number, engine: string, onProg
       tally.sentences++;
       if (sentence.supported) return;
       tally.flagged++;
+      if (sentence.verdict === 'unsupported') tally.unsupported = (tally.unsupported ?? 0) + 1;
       const kinds = findingKinds(original, k);
       onExample?.(`FALSE ALARM ${document.file} #${k + 1}: ${sentence.text}\n    ${(sentence as { reason?: string }).reason ?? ''}`);
       const cause = kinds.length > 0 ? kinds[0]! : 'unsupported';
@@ -169,6 +172,8 @@ function merged(figures: CheckFigures): Tally {
   for (const tally of Object.values(figures.byCorpus)) {
     total.sentences += tally.sentences;
     total.flagged += tally.flagged;
+    // A baseline made before detectors existed has no verdict count: every flag there was "unsupported".
+    total.unsupported = (total.unsupported ?? 0) + (tally.unsupported ?? tally.causes.unsupported ?? 0);
     total.documents += tally.documents;
     total.milliseconds += tally.milliseconds;
     for (const [cause, n] of Object.entries(tally.causes)) total.causes[cause] = (total.causes[cause] ?? 0) + n;
@@ -201,8 +206,8 @@ export function renderFigures(figures: CheckFigures, baseline: CheckFigures | nu
   const lines = [rows.join('\n'), ''];
   const causes = Object.entries(total.causes).sort((a, b) => b[1] - a[1]).map(([c, n]) => `${c} ${n}`);
   lines.push(`False alarms by cause (both corpora): ${causes.length > 0 ? causes.join(', ') : 'none'}.`);
-  const unsupported = (t: Tally) => pct(t.causes.unsupported ?? 0, t.sentences);
-  lines.push(`Real, unperturbed abstract sentences called unsupported (too little of their content in the body, whatever the detectors say): ${unsupported(total)}${base ? ` (before: ${unsupported(base)})` : ''}.`);
+  const unsupported = (t: Tally) => pct(t.unsupported ?? 0, t.sentences);
+  lines.push(`Real, unperturbed abstract sentences called unsupported (too little of their content in the body, with or without a finding): ${unsupported(total)}${base ? ` (before: ${unsupported(base)})` : ''}.`);
   const specific = PERTURBATION_KINDS.filter((k) => k !== 'replacement').map((k) => `${k} ${ratio(total.perturbed[k].caughtByKind, total.perturbed[k].measurable)}`);
   lines.push(`Recall with the finding of the matching kind (a number finding for a changed number, …): ${specific.join(', ')}.`);
   const excluded = PERTURBATION_KINDS.map((k) => `${k} ${total.perturbed[k].cases - total.perturbed[k].measurable}`);
