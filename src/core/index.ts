@@ -6,6 +6,9 @@
 // The pipeline and its stages.
 export { summarize, prepareDocument, rankPrepared, finishSummary, rankOptionsOf, candidateSentences } from './summarize';
 export type { SummarizeRequest, SummaryStage, PreparedDocument, Preparation } from './summarize';
+// Sessions: repeated summaries of one document, reading again only what an edit changed.
+export { createSummarySession } from './session';
+export type { SummarySession, SessionUpdate } from './session';
 
 // Options: the schema every surface reads, and their resolution.
 export {

@@ -35,6 +35,7 @@ const PUBLIC_VALUES = [
   'checkAbstract',
   'checkOptions',
   'countWords',
+  'createSummarySession',
   'defaultModel',
   'escapeMarkdown',
   'exampleFromDocument',
