@@ -57,13 +57,17 @@ export type { BayesModel, ModelLoad } from './rank/trained/model';
 export { trainModel, exampleFromDocument } from './rank/trained/train-model';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
+// Key phrases (TextRank keyword extraction).
+export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
+export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
+
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
 export type { RepairOutcome } from './summary/apply-repair';
 export { sectionPath, unitOfSection } from './summary/sections';
 export { WORDS_PER_MINUTE, minutesToRead } from './summary/report';
 export { summaryToMarkdown, escapeMarkdown } from './render/markdown';
-export { checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
+export { abstractChecker, checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
 export type { CheckAbstractRequest } from './check/abstract';
 export type * from './check/abstract-report';
 

@@ -14,13 +14,11 @@ import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOpt
 import { SUMMARY_OPTIONS } from './options/schema';
 import type { RankOptions } from './rank/blend';
 import { rankWith } from './rank/registry';
-import { sentenceFitness, summaryRelevance } from './select/fitness';
 import { selectSentences } from './select/select';
-import { candidateUnits } from './select/units';
+import { prepareSelection, summaryCandidates } from './select/selection-input';
 import { honourBudget } from './summary/budget';
 import { describeSummary } from './summary/report';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
-import { sentenceVectorsOf, termIndexOf } from './vectors';
 
 /** What the engine is doing, for progress shown to people. */
 export type SummaryStage = 'reading' | 'ranking' | 'checking';
@@ -35,7 +33,7 @@ export interface SummarizeRequest extends SummaryRequestOptions {
 }
 
 /** Request fields besides the schema's options. */
-const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'format', 'baseOffset', 'onStage']);
+const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'templates', 'previous', 'format', 'baseOffset', 'onStage']);
 
 /** A document read and analysed, with the options it is summarized under. */
 export interface PreparedDocument {
@@ -92,10 +90,9 @@ export function summarize(text: string, request: SummarizeRequest = {}): Summary
   return finishSummary(prepared, ranked);
 }
 
-/** The sentences a summary may pick (prose with words, outside excluded sections), in document order. */
+/** The sentences a summary may pick (prose with words, outside excluded sections, not barred), in document order. */
 export function candidateSentences(prepared: PreparedDocument, options: SummaryOptions = prepared.options): number[] {
-  const { analyzed } = prepared;
-  const { unitOf } = candidateUnits(analyzed.doc, analyzed.words.map((w) => w.length), options);
+  const { unitOf } = summaryCandidates(prepared.analyzed, options);
   const list: number[] = [];
   for (let i = 0; i < unitOf.length; i++) if (unitOf[i]! >= 0) list.push(i);
   return list;
@@ -105,24 +102,10 @@ export function candidateSentences(prepared: PreparedDocument, options: SummaryO
 export function finishSummary(prepared: PreparedDocument, ranked: RankResult, options: SummaryOptions = prepared.options): Summary {
   const { analyzed } = prepared;
   const { doc } = analyzed;
-  const wordCounts = analyzed.words.map((w) => w.length);
-  const candidates = candidateUnits(doc, wordCounts, options);
-  const { unitOf, unitWeights } = candidates;
-  const candidateList = candidateSentences(prepared, options);
-
-  const selection = selectSentences({
-    relevance: summaryRelevance(ranked.scores, sentenceFitness(analyzed), candidateList),
-    wordCounts,
-    vectors: sentenceVectorsOf(analyzed),
-    vocabularySize: termIndexOf(analyzed).vocabulary.size,
-    unitOf,
-    unitWeights,
-    budget: options.budget,
-    minSentences: options.minSentences,
-    minPerSection: options.minPerSection,
-    balance: options.balance,
-    mmrLambda: options.mmrLambda,
-  });
+  const { input, candidates, candidateList, kinds } = prepareSelection(analyzed, ranked, options);
+  const { wordCounts } = input;
+  const { unitOf } = candidates;
+  const selection = selectSentences(input);
 
   const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: candidateList, wordLimit: selection.wordLimit });
   let picked = [...honoured.picked];
@@ -141,10 +124,13 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
     });
     picked = repaired.picked;
     edited = repaired.edited;
+    // A repair may bring in a sentence whose text is already in the summary; no text twice.
+    const seen = new Set<number>();
+    picked = picked.filter((i) => !seen.has(kinds.textKey[i]!) && seen.add(kinds.textKey[i]!) !== undefined);
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
   const notices = [...(prepared.notices ?? []), ...honoured.notices];
-  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings, notices });
+  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, leftOut: selection.leftOut, kinds, edited, warnings, notices });
 }
 
 function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {
@@ -164,6 +150,7 @@ function refusedSummary(text: string, format: DocumentFormat, baseOffset: number
     language: options.language === 'auto' ? 'en' : options.language,
     sentences: [],
     shares: [],
+    keyPhrases: [],
     stats: { wordsIn: 0, wordsOut: 0, compression: 0, sentencesIn: 0, sentencesOut: 0, sectionsCovered: 0, sectionsWithContent: 0, minutesToRead: 0, documentMinutesToRead: 0 },
     warnings: [],
     ranking: {},
