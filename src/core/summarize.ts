@@ -17,6 +17,7 @@ import { rankWith } from './rank/registry';
 import { sentenceFitness, summaryRelevance } from './select/fitness';
 import { selectSentences } from './select/select';
 import { candidateUnits } from './select/units';
+import { focusNotice, focusRanking } from './focus/focus';
 import { honourBudget } from './summary/budget';
 import { describeSummary } from './summary/report';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
@@ -102,13 +103,16 @@ export function candidateSentences(prepared: PreparedDocument, options: SummaryO
 }
 
 /** Selection and checks for ranked sentences: fitness, balance, MMR, the stand-alone check and repairs. */
-export function finishSummary(prepared: PreparedDocument, ranked: RankResult, options: SummaryOptions = prepared.options): Summary {
+export function finishSummary(prepared: PreparedDocument, generic: RankResult, options: SummaryOptions = prepared.options): Summary {
   const { analyzed } = prepared;
   const { doc } = analyzed;
   const wordCounts = analyzed.words.map((w) => w.length);
-  const candidates = candidateUnits(doc, wordCounts, options);
+  // A focus re-ranks and narrows the candidates to the sentences that speak to it (focus/focus.ts).
+  const focused = options.focus !== '' ? focusRanking(analyzed, options.focus, generic, candidateUnits(doc, wordCounts, options)) : null;
+  const ranked = focused?.ranked ?? generic;
+  const candidates = focused?.candidates ?? candidateUnits(doc, wordCounts, options);
   const { unitOf, unitWeights } = candidates;
-  const candidateList = candidateSentences(prepared, options);
+  const candidateList = focused ? [...unitOf.keys()].filter((i) => unitOf[i]! >= 0) : candidateSentences(prepared, options);
 
   const selection = selectSentences({
     relevance: summaryRelevance(ranked.scores, sentenceFitness(analyzed), candidateList),
@@ -124,7 +128,9 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
     mmrLambda: options.mmrLambda,
   });
 
-  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: candidateList, wordLimit: selection.wordLimit });
+  // With a focus, too few matching sentences is the focus notice's to say, not the budget's.
+  const budgetCandidates = focused ? candidateSentences(prepared, options) : candidateList;
+  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: budgetCandidates, wordLimit: selection.wordLimit });
   let picked = [...honoured.picked];
   let edited: ReadonlyMap<number, string> | undefined;
   if (options.repair === 'auto' && picked.length > 0) {
@@ -144,7 +150,14 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
   const notices = [...(prepared.notices ?? []), ...honoured.notices];
-  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings, notices });
+  if (focused) {
+    const words = picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
+    const short = options.budget.unit === 'sentences' ? picked.length < options.budget.value : picked.length === candidateList.length && words < selection.wordLimit;
+    const notice = focusNotice(focused.report, short);
+    if (notice) notices.push(notice);
+  }
+  const summary = describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings, notices });
+  return focused ? { ...summary, focus: focused.report } : summary;
 }
 
 function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {
