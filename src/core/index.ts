@@ -67,7 +67,7 @@ export type { RepairOutcome } from './summary/apply-repair';
 export { sectionPath, unitOfSection } from './summary/sections';
 export { WORDS_PER_MINUTE, minutesToRead } from './summary/report';
 export { summaryToMarkdown, escapeMarkdown } from './render/markdown';
-export { checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
+export { abstractChecker, checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
 export type { CheckAbstractRequest } from './check/abstract';
 export type * from './check/abstract-report';
 

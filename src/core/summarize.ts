@@ -14,14 +14,12 @@ import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOpt
 import { SUMMARY_OPTIONS } from './options/schema';
 import type { RankOptions } from './rank/blend';
 import { rankWith } from './rank/registry';
-import { sentenceFitness, summaryRelevance } from './select/fitness';
 import { selectSentences } from './select/select';
-import { candidateUnits } from './select/units';
-import { focusNotice, focusRanking } from './focus/focus';
+import { prepareSelection, summaryCandidates } from './select/selection-input';
+import { focusNotice, focusSelection } from './focus/focus';
 import { honourBudget } from './summary/budget';
 import { describeSummary } from './summary/report';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
-import { sentenceVectorsOf, termIndexOf } from './vectors';
 
 /** What the engine is doing, for progress shown to people. */
 export type SummaryStage = 'reading' | 'ranking' | 'checking';
@@ -36,7 +34,7 @@ export interface SummarizeRequest extends SummaryRequestOptions {
 }
 
 /** Request fields besides the schema's options. */
-const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'format', 'baseOffset', 'onStage']);
+const REQUEST_KEYS: ReadonlySet<string> = new Set(['model', 'templates', 'previous', 'format', 'baseOffset', 'onStage']);
 
 /** A document read and analysed, with the options it is summarized under. */
 export interface PreparedDocument {
@@ -93,10 +91,9 @@ export function summarize(text: string, request: SummarizeRequest = {}): Summary
   return finishSummary(prepared, ranked);
 }
 
-/** The sentences a summary may pick (prose with words, outside excluded sections), in document order. */
+/** The sentences a summary may pick (prose with words, outside excluded sections, not barred), in document order. */
 export function candidateSentences(prepared: PreparedDocument, options: SummaryOptions = prepared.options): number[] {
-  const { analyzed } = prepared;
-  const { unitOf } = candidateUnits(analyzed.doc, analyzed.words.map((w) => w.length), options);
+  const { unitOf } = summaryCandidates(prepared.analyzed, options);
   const list: number[] = [];
   for (let i = 0; i < unitOf.length; i++) if (unitOf[i]! >= 0) list.push(i);
   return list;
@@ -106,31 +103,17 @@ export function candidateSentences(prepared: PreparedDocument, options: SummaryO
 export function finishSummary(prepared: PreparedDocument, generic: RankResult, options: SummaryOptions = prepared.options): Summary {
   const { analyzed } = prepared;
   const { doc } = analyzed;
-  const wordCounts = analyzed.words.map((w) => w.length);
+  const general = prepareSelection(analyzed, generic, options);
   // A focus re-ranks and narrows the candidates to the sentences that speak to it (focus/focus.ts).
-  const focused = options.focus !== '' ? focusRanking(analyzed, options.focus, generic, candidateUnits(doc, wordCounts, options)) : null;
+  const focused = options.focus !== '' ? focusSelection(analyzed, options.focus, generic, general) : null;
+  const { input, candidates, candidateList, kinds } = focused ?? general;
   const ranked = focused?.ranked ?? generic;
-  const candidates = focused?.candidates ?? candidateUnits(doc, wordCounts, options);
-  const { unitOf, unitWeights } = candidates;
-  const candidateList = focused ? [...unitOf.keys()].filter((i) => unitOf[i]! >= 0) : candidateSentences(prepared, options);
-
-  const selection = selectSentences({
-    relevance: summaryRelevance(ranked.scores, sentenceFitness(analyzed), candidateList),
-    wordCounts,
-    vectors: sentenceVectorsOf(analyzed),
-    vocabularySize: termIndexOf(analyzed).vocabulary.size,
-    unitOf,
-    unitWeights,
-    budget: options.budget,
-    minSentences: options.minSentences,
-    minPerSection: options.minPerSection,
-    balance: options.balance,
-    mmrLambda: options.mmrLambda,
-  });
+  const { wordCounts } = input;
+  const { unitOf } = candidates;
+  const selection = selectSentences(input);
 
   // With a focus, too few matching sentences is the focus notice's to say, not the budget's.
-  const budgetCandidates = focused ? candidateSentences(prepared, options) : candidateList;
-  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: budgetCandidates, wordLimit: selection.wordLimit });
+  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: general.candidateList, wordLimit: selection.wordLimit });
   let picked = [...honoured.picked];
   let edited: ReadonlyMap<number, string> | undefined;
   if (options.repair === 'auto' && picked.length > 0) {
@@ -147,6 +130,9 @@ export function finishSummary(prepared: PreparedDocument, generic: RankResult, o
     });
     picked = repaired.picked;
     edited = repaired.edited;
+    // A repair may bring in a sentence whose text is already in the summary; no text twice.
+    const seen = new Set<number>();
+    picked = picked.filter((i) => !seen.has(kinds.textKey[i]!) && seen.add(kinds.textKey[i]!) !== undefined);
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
   const notices = [...(prepared.notices ?? []), ...honoured.notices];
@@ -156,7 +142,7 @@ export function finishSummary(prepared: PreparedDocument, generic: RankResult, o
     const notice = focusNotice(focused.report, short);
     if (notice) notices.push(notice);
   }
-  const summary = describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, edited, warnings, notices });
+  const summary = describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, leftOut: selection.leftOut, kinds, edited, warnings, notices });
   return focused ? { ...summary, focus: focused.report } : summary;
 }
 

@@ -258,6 +258,21 @@ export interface FocusReport {
   readonly matchingSentences: number;
 }
 
+/** Why a section with content got no sentence in the summary (balance reports it; coverage stays a goal). */
+export type LeftOutReason = 'belowQualityFloor' | 'onlyFragments' | 'onlyBarred';
+
+export interface SectionLeftOut {
+  /** The balance unit (a section index, as in `shares`). */
+  readonly section: number;
+  readonly heading: string;
+  readonly reason: LeftOutReason;
+  /** One line for people. */
+  readonly message: string;
+}
+
+/** Why a sentence is never picked (select/sentence-kinds.ts). */
+export type BarredKind = 'placeholder' | 'boilerplate' | 'byline' | 'metadata' | 'template';
+
 export interface Summary {
   readonly document: ParsedDocument;
   readonly method: RankerName;
@@ -276,4 +291,8 @@ export interface Summary {
   readonly notices: readonly string[];
   /** Set when no summary was attempted (too large, binary content); the reason, for people. */
   readonly refused?: string;
+  /** Sections with content left out as not summary-worthy, and why (set by the engine). */
+  readonly leftOut?: readonly SectionLeftOut[];
+  /** Sentences never picked because of what they are (placeholders, boilerplate, template text), set by the engine. */
+  readonly barred?: readonly { readonly sentence: number; readonly kind: BarredKind }[];
 }

@@ -31,6 +31,7 @@ const PUBLIC_VALUES = [
   'SUMMARY_OPTIONS',
   'SUPPORTED_LANGUAGES',
   'WORDS_PER_MINUTE',
+  'abstractChecker',
   'applyRepair',
   'candidateSentences',
   'checkAbstract',

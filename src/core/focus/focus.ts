@@ -15,7 +15,8 @@
 import { contentTerms, wordTokens } from '../text/tokens';
 import { minMax } from '../scale';
 import { cosine, inverseFrequency, makeVector, sentenceVectorsOf, termIndexOf, type SparseVector } from '../vectors';
-import type { Candidates } from '../select/units';
+import { sentenceFitness, summaryRelevance } from '../select/fitness';
+import type { PreparedSelection } from '../select/selection-input';
 import type { AnalyzedDocument, FocusReport, RankResult } from '../types';
 import { biasedLexRank, termCounts, type BiasedLexRankSettings } from './biased-lexrank';
 
@@ -31,11 +32,9 @@ export interface FocusWeights {
 /** Ours, to be chosen on the benchmark's train half (bench/focus.ts reports the test half). */
 export const FOCUS_WEIGHTS: FocusWeights = { generic: 0.3, biased: 0.4, query: 0.3 };
 
-export interface FocusedRanking {
+export interface FocusedSelection extends PreparedSelection {
   /** Combined scores in [0, 1] over the eligible sentences (0 elsewhere), with the parts as features. */
   readonly ranked: RankResult;
-  /** Candidates restricted to sentences that share a term with the focus; unit weights follow. */
-  readonly candidates: Candidates;
   readonly report: FocusReport;
 }
 
@@ -57,25 +56,27 @@ function focusVector(a: AnalyzedDocument, terms: ReadonlyMap<string, number>): S
   return makeVector(Int32Array.from(entries, (e) => e[0]), Float64Array.from(entries, (e) => e[1]));
 }
 
-export function focusRanking(
+/**
+ * The general selection input narrowed and re-weighted for a focus: the selector itself is
+ * unchanged; it gets other relevance, candidates and section importance.
+ */
+export function focusSelection(
   a: AnalyzedDocument,
   focus: string,
   generic: RankResult,
-  candidates: Candidates,
+  general: PreparedSelection,
   weights: FocusWeights = FOCUS_WEIGHTS,
   settings: Partial<BiasedLexRankSettings> = {},
-): FocusedRanking {
+): FocusedSelection {
   const terms = focusTerms(focus, a.language);
   const walk = biasedLexRank(a, terms, settings);
   const n = a.terms.length;
   const unitOf = new Int32Array(n).fill(-1);
-  const unitWeights = new Map<number, number>();
   const eligible: number[] = [];
   for (let i = 0; i < n; i++) {
-    if (candidates.unitOf[i]! < 0 || !(walk.relevance[i]! > 0)) continue;
+    if (general.candidates.unitOf[i]! < 0 || !(walk.relevance[i]! > 0)) continue;
     eligible.push(i);
-    unitOf[i] = candidates.unitOf[i]!;
-    unitWeights.set(unitOf[i]!, (unitWeights.get(unitOf[i]!) ?? 0) + a.words[i]!.length);
+    unitOf[i] = general.candidates.unitOf[i]!;
   }
   const query = focusVector(a, terms);
   // The same tf·idf vectors MMR's redundancy term compares (cached per document).
@@ -88,15 +89,28 @@ export function focusRanking(
     similarity[i] = cosine(vectors[i]!, query);
     scores[i] = weights.generic * genericScaled[i]! + weights.biased * biasedScaled[i]! + weights.query * similarity[i]!;
   }
+  const relevance = summaryRelevance(scores, sentenceFitness(a), eligible);
+  // A section's claim to seats: the focused relevance of its content words, as for the general summary.
+  const importance = new Map<number, number>();
+  const unitWeights = new Map<number, number>();
+  for (const i of eligible) {
+    const unit = unitOf[i]!;
+    const words = a.words[i]!.length;
+    importance.set(unit, (importance.get(unit) ?? 0) + (general.kinds.fragment[i] === 1 ? 0 : relevance[i]! * words));
+    unitWeights.set(unit, (unitWeights.get(unit) ?? 0) + words);
+  }
   const found = [...terms.keys()].filter((t) => termIndexOf(a).vocabulary.has(t));
   return {
+    input: { ...general.input, relevance, unitOf, unitWeights: importance },
+    candidates: { unitOf, unitWeights },
+    candidateList: eligible,
+    kinds: general.kinds,
     ranked: {
       scores,
       features: { ...(generic.features ?? {}), focusWalk: walk.scores, focusMatch: similarity },
       converged: (generic.converged ?? true) && walk.converged,
       iterations: Math.max(generic.iterations ?? 0, walk.iterations),
     },
-    candidates: { unitOf, unitWeights },
     report: { text: focus, terms: terms.size, termsFound: found.length, matchingSentences: eligible.length },
   };
 }

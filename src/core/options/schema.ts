@@ -202,6 +202,12 @@ export const HOST_OPTIONS = {
     setting: { key: 'modelFile', order: 16, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
   }),
+  problemsView: define({
+    kind: booleanKind,
+    default: false,
+    description: 'Also list the summary’s notes (sentences that may not stand alone) and abstract-check findings in the Problems view. They always show in the panel and as a faint mark in the editor.',
+    setting: { key: 'problemsView', order: 17 },
+  }),
 } as const;
 
 export type SummaryOptionKey = keyof typeof SUMMARY_OPTIONS;
