@@ -9,7 +9,7 @@ export type LengthUnit = 'sentences' | 'percent' | 'words';
 
 export const LENGTH_UNITS: readonly LengthUnit[] = ['sentences', 'percent', 'words'];
 
-export const METHOD_NAMES: readonly RankerName[] = ['blend', 'position', 'luhn', 'edmundson', 'lexrank', 'textrank', 'centroid', 'bayes'];
+export const METHOD_NAMES: readonly RankerName[] = ['blend', 'position', 'luhn', 'edmundson', 'lexrank', 'textrank', 'centroid', 'bayes', 'maxent'];
 
 /** Bounds of the length value per unit (the webview's stepper uses the same bounds). */
 export const LENGTH_BOUNDS: Readonly<Record<LengthUnit, { min: number; max: number; step: number }>> = {

@@ -3,12 +3,12 @@
  * program) into complete summary options. Every value is checked against the schema; an invalid
  * one is reported with the option's name and the reason, never clamped or replaced in silence.
  */
-import { loadModel, type BayesModel } from '../rank/trained/model';
+import { loadModel, modelMismatch, type SentenceModel } from '../rank/trained/sentence-model';
 import { SUMMARY_OPTIONS, type SummaryOptionKey, type SummaryOptionValues } from './schema';
 
 export interface SummaryOptions extends SummaryOptionValues {
-  /** A validated trained sentence model for the trained method; the shipped one when absent. */
-  readonly model?: BayesModel;
+  /** A validated trained sentence model for the trained methods; the shipped one of each kind when absent. */
+  readonly model?: SentenceModel;
 }
 
 export type SummaryRequestOptions = { readonly [K in SummaryOptionKey]?: unknown } & { readonly model?: unknown };
@@ -56,8 +56,12 @@ export function checkOptions(partial: SummaryRequestOptions = {}): CheckedOption
   }
   if (partial.model !== undefined) {
     const loaded = loadModel(partial.model);
-    if (loaded.ok) options.model = loaded.model;
-    else problems.push({ key: 'model', reason: loaded.error });
+    if (!loaded.ok) problems.push({ key: 'model', reason: loaded.error });
+    else {
+      const mismatch = modelMismatch(options.method as SummaryOptions['method'], loaded.model);
+      if (mismatch === null) options.model = loaded.model;
+      else problems.push({ key: 'model', reason: mismatch });
+    }
   }
   return { options: options as unknown as SummaryOptions, problems };
 }
