@@ -131,6 +131,7 @@ export type RankerName =
   | 'textrank'
   | 'centroid'
   | 'bayes'
+  | 'maxent'
   | 'blend';
 
 /** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
