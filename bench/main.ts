@@ -5,6 +5,7 @@
  *   node dist/bench.cjs tune [options]      weight search on the train half (bench/tune.ts)
  *   node dist/bench.cjs tune-repair         repair strategies on the train half (bench/tune-repair.ts)
  *   node dist/bench.cjs check [options]     the abstract check on perturbed author abstracts (bench/check.ts)
+ *   node dist/bench.cjs audit [--limit N]   what the default summaries pick, counted by rule (bench/audit.ts)
  */
 async function main(): Promise<number> {
   const mode = process.argv[2];
@@ -12,8 +13,9 @@ async function main(): Promise<number> {
   if (mode === 'tune') return (await import('./tune')).run(process.argv.slice(3));
   if (mode === 'tune-repair') return (await import('./tune-repair')).run(process.argv.slice(3));
   if (mode === 'check') return (await import('./check')).run(process.argv.slice(3));
+  if (mode === 'audit') return (await import('./audit')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
-  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check [options]');
+  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|audit [options]');
   return 2;
 }
 

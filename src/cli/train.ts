@@ -5,7 +5,7 @@
  */
 import { readdir, writeFile } from 'node:fs/promises';
 import { join, relative } from 'node:path';
-import { exampleFromDocument, FORMATS, formatForFileName, inputProblem, modelFeatureReport, SUMMARY_OPTIONS, trainModel, type BayesModel, type TrainingExample } from '../core/index';
+import { exampleFromDocument, FORMATS, learnTemplateText, formatForFileName, inputProblem, modelFeatureReport, SUMMARY_OPTIONS, trainModel, type BayesModel, type TrainingExample } from '../core/index';
 import { UsageError } from './args';
 import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
@@ -130,11 +130,15 @@ export async function runTrain(args: string[]): Promise<number> {
     if (error instanceof RangeError) throw new InputError(error.message);
     throw error;
   }
+  // Sentences recurring across independent documents are template text: the model carries them so they are never picked.
+  const templateText = learnTemplateText(examples.map((example) => example.analyzed.doc));
+  if (templateText.length > 0) model = { ...model, templateText };
   await writeFile(out, modelJson(model));
   const skippedText = Object.entries(skipped).map(([reason, n]) => `${n} × ${reason}`).join(', ');
   say(`trained on ${examples.length} documents (${model.classes.positive} summary-like sentences, ${model.classes.negative} others)`);
   say(skippedText ? `; skipped ${skippedText}\n` : '\n');
   say(strongestValues(model).join('\n') + '\n');
+  say(`${templateText.length} template ${templateText.length === 1 ? 'sentence' : 'sentences'} found recurring across the documents (never picked)\n`);
   say(`model written to ${out}\n`);
   return 0;
 }

@@ -57,6 +57,14 @@ export type { BayesModel, ModelLoad } from './rank/trained/model';
 export { trainModel, exampleFromDocument } from './rank/trained/train-model';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
+// Sentence kinds, template text and hysteresis (what is never picked, and what is kept).
+export { barredKind, fragmentKind, normalizeSentence, SENTENCE_KIND_DEFAULTS } from './select/sentence-kinds';
+export type { FragmentKind } from './select/sentence-kinds';
+export { learnTemplateText, TEMPLATE_LEARNING_DEFAULTS, TEMPLATE_LIMITS } from './select/template-text';
+export type { TemplateInput } from './select/template-text';
+export { HYSTERESIS_DEFAULTS } from './select/hysteresis';
+export { SELECTION_DEFAULTS } from './select/selection-input';
+
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
 export type { RepairOutcome } from './summary/apply-repair';
