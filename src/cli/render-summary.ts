@@ -29,6 +29,7 @@ export function renderText(name: string, summary: Summary, style: Style): string
     ),
   );
   out.push(style.dim(EXTRACTIVE_NOTE));
+  if (summary.keyPhrases.length > 0) out.push(`${style.dim('key phrases:')} ${summary.keyPhrases.map((k) => safe(k.text)).join(' · ')}`);
   for (const notice of summary.notices) out.push(style.warn(`note: ${safe(notice)}`));
   const leftOut = summary.leftOut ?? [];
   if (leftOut.length > 0) {
@@ -75,6 +76,12 @@ export function summaryToJson(name: string, summary: Summary, input: { readonly 
       score: round(p.score),
       rank: p.rank,
       ...(p.edited ? { edited: p.edited.reason } : {}),
+    })),
+    keyPhrases: summary.keyPhrases.map((k) => ({
+      text: k.text,
+      score: round(k.score),
+      count: k.count,
+      occurrences: k.occurrences.map((o) => ({ start: o.start, end: o.end })),
     })),
     stats: {
       ...summary.stats,

@@ -64,6 +64,9 @@ export { learnTemplateText, TEMPLATE_LEARNING_DEFAULTS, TEMPLATE_LIMITS } from '
 export type { TemplateInput } from './select/template-text';
 export { HYSTERESIS_DEFAULTS } from './select/hysteresis';
 export { SELECTION_DEFAULTS } from './select/selection-input';
+// Key phrases (TextRank keyword extraction).
+export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
+export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
 
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
@@ -71,7 +74,7 @@ export type { RepairOutcome } from './summary/apply-repair';
 export { sectionPath, unitOfSection } from './summary/sections';
 export { WORDS_PER_MINUTE, minutesToRead } from './summary/report';
 export { summaryToMarkdown, escapeMarkdown } from './render/markdown';
-export { checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
+export { abstractChecker, checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
 export type { CheckAbstractRequest } from './check/abstract';
 export type * from './check/abstract-report';
 

@@ -150,6 +150,7 @@ function refusedSummary(text: string, format: DocumentFormat, baseOffset: number
     language: options.language === 'auto' ? 'en' : options.language,
     sentences: [],
     shares: [],
+    keyPhrases: [],
     stats: { wordsIn: 0, wordsOut: 0, compression: 0, sentencesIn: 0, sentencesOut: 0, sectionsCovered: 0, sectionsWithContent: 0, minutesToRead: 0, documentMinutesToRead: 0 },
     warnings: [],
     ranking: {},

@@ -239,6 +239,18 @@ export interface SectionShare {
   readonly quota: number;
 }
 
+/** A key phrase of the document (TextRank keyword extraction, keyphrases/textrank-keywords.ts). */
+export interface KeyPhrase {
+  /** The phrase as it is most often written (lower case). */
+  readonly text: string;
+  /** Sum of the TextRank scores of its words. */
+  readonly score: number;
+  /** How many times it occurs in the text. */
+  readonly count: number;
+  /** Where it occurs in the source (capped; a phrase interrupted by markup the reader rewrote may have fewer). */
+  readonly occurrences: readonly Span[];
+}
+
 /** Why a section with content got no sentence in the summary (balance reports it; coverage stays a goal). */
 export type LeftOutReason = 'belowQualityFloor' | 'onlyFragments' | 'onlyBarred';
 
@@ -261,6 +273,8 @@ export interface Summary {
   /** Picked sentences in document order. */
   readonly sentences: readonly PickedSentence[];
   readonly shares: readonly SectionShare[];
+  /** The document's key phrases, best first. */
+  readonly keyPhrases: readonly KeyPhrase[];
   readonly stats: SummaryStats;
   readonly warnings: readonly StandAloneWarning[];
   readonly ranking: RankingReport;

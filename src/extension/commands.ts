@@ -45,8 +45,8 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
   'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
   'tersely.toggleLive': (context) => context.live.toggle(),
-  'tersely.checkAbstract': (context) => withEditor(context, (editor) => context.abstractCheck.run(editor)),
-  'tersely.showPanel': (context) => context.panel.show(),
+  'tersely.checkAbstract': (context, heading) => withEditor(context, (editor) => context.abstractCheck.run(editor, typeof heading === 'string' ? heading : undefined)),
+  'tersely.showPanel': (context) => context.panel.show(true),
   'tersely.applyRepair': (context, args) => {
     if (!isRepairArgs(args)) {
       context.log.warn('tersely.applyRepair was called without a valid repair.');

@@ -17,9 +17,10 @@ export function watchEditors(context: TerselyContext): void {
   vscode.workspace.onDidChangeTextDocument(
     (event) => {
       if (event.contentChanges.length === 0 || !isSummarizable(event.document)) return;
+      context.abstractCheck.markStale(event.document);
       const key = event.document.uri.toString();
       if (context.live.on && vscode.window.activeTextEditor?.document === event.document) {
-        debouncer.schedule(key, context.settings.read().liveDelayMs, () => {
+        debouncer.schedule(key, context.settings.read().host.liveDelay, () => {
           const editor = vscode.window.visibleTextEditors.find((e) => e.document === event.document);
           if (editor) void summarizer.summarize(editor, 'document', 'live');
         });
@@ -67,6 +68,7 @@ export function watchEditors(context: TerselyContext): void {
       debouncer.cancel(key);
       summarizer.cancelFor(key);
       if (store.has(key)) summarizer.forget(document);
+      context.abstractCheck.forget(document);
     },
     undefined,
     disposables,
@@ -75,6 +77,8 @@ export function watchEditors(context: TerselyContext): void {
   vscode.workspace.onDidChangeConfiguration(
     (event) => {
       if (!event.affectsConfiguration(SETTINGS_SECTION)) return;
+      context.abstractCheck.settingsChanged();
+      editorView.settingsChanged();
       panel.post({ type: 'controls', controls: context.controls() });
       debouncer.schedule('settings', SETTINGS_REFRESH_DELAY_MS, () => void summarizer.refresh());
     },

@@ -12,7 +12,7 @@ import { join } from 'node:path';
 import { summarize } from '../../src/core/summarize';
 import { LineIndex } from '../../src/extension/ranges';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
-import { parseSettings, toEngineOptions, type SettingKey } from '../../src/extension/settings';
+import { parseSettings, toEngineOptions } from '../../src/extension/settings';
 import { openSession, timer } from './browser';
 import { firstSummaryBreakdown, parseTerselyLog, recordTimings } from './timings';
 import { countDecorations, cursorStatus, openFile, outputChannelText, panelFrame, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
@@ -25,7 +25,7 @@ const checks: Record<string, unknown> = {};
 
 function expectedSummary(file: string) {
   const user = JSON.parse(readFileSync(settingsFile, 'utf8')) as Record<string, unknown>;
-  const { settings } = parseSettings((key: SettingKey) => user[`tersely.${key}`]);
+  const { settings } = parseSettings((key) => user[`tersely.${key}`]);
   const text = readFileSync(join(workspace, file), 'utf8');
   return { text, summary: summarize(text, toEngineOptions(settings, 'markdown', 0)) };
 }
@@ -134,7 +134,7 @@ async function main(): Promise<void> {
     const demoNow = readFileSync(join(workspace, DEMO), 'utf8');
     let flagged: { length: number; warnings: number; repairs: number } | undefined;
     for (let length = 3; length <= 120 && !flagged; length++) {
-      const { settings } = parseSettings((key: SettingKey) => (key === 'length.value' ? length : user[`tersely.${key}`]));
+      const { settings } = parseSettings((key) => (key === 'length' ? `${length}s` : user[`tersely.${key}`]));
       const summary = summarize(demoNow, toEngineOptions(settings, 'markdown', 0));
       if (summary.warnings.length > 0) flagged = { length, warnings: summary.warnings.length, repairs: summary.warnings[0]!.repairs.length };
     }

@@ -15,7 +15,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { summarize } from '../../src/core/summarize';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
-import { parseSettings, toEngineOptions, type SettingKey } from '../../src/extension/settings';
+import { parseSettings, toEngineOptions } from '../../src/extension/settings';
 import { openSession, timer } from './browser';
 import { firstSummaryBreakdown, joinWrappedEntries, parseTerselyLog, recordTimings } from './timings';
 import { countDecorations, openFile, outputChannelText, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
@@ -32,7 +32,7 @@ function userSettings(): Record<string, unknown> {
 }
 
 function engineOptions(user = userSettings()) {
-  const { settings } = parseSettings((key: SettingKey) => user[`tersely.${key}`]);
+  const { settings } = parseSettings((key) => user[`tersely.${key}`]);
   return toEngineOptions(settings, 'markdown', 0);
 }
 

@@ -55,8 +55,27 @@ describe('check consistency: numbers', () => {
     assert.deepEqual(checkNumbers(input('Rebalancing trips fell by 50% in May.', ['Rebalancing trips fell by half in May.'])), []);
   });
 
-  it('stays silent about a number the body never counts (left to the support rule)', () => {
-    assert.deepEqual(checkNumbers(input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.'])), []);
+  it('reports a figure the body never writes anywhere, with no place to cite', () => {
+    const findings = checkNumbers(input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.evidence, null);
+    assert.match(findings[0]!.note ?? '', /never gives 2019/);
+  });
+
+  it('accepts a figure the body writes only outside its sentences (a table, a code block)', () => {
+    const base = input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.']);
+    assert.deepEqual(checkNumbers({ ...base, body: { ...base.body, textNumbers: new Set([2019]) } }), []);
+  });
+
+  it('does not read a reference marker or a link target as a figure', () => {
+    assert.deepEqual(checkNumbers(input('Riders joined early [3].', ['Riders joined in large numbers.'])), []);
+    assert.deepEqual(checkNumbers(input('Riders joined early, see https://example.org/report/2019.', ['Riders joined in large numbers.'])), []);
+  });
+
+  it('reads a number joined to its word ("6-dock stations")', () => {
+    const findings = checkNumbers(input('The city opened 8-dock stations.', ['The city opened 6-dock stations.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.bodySays, '6-dock stations');
   });
 
   it('reports a value the body never gives when it counts the same thing elsewhere', () => {

@@ -216,12 +216,18 @@ export const HOST_OPTIONS = {
     setting: { key: 'modelFile', order: 16, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
   }),
+  problemsView: define({
+    kind: booleanKind,
+    default: false,
+    description: 'Also list the summary’s notes (sentences that may not stand alone) and abstract-check findings in the Problems view. They always show in the panel and as a faint mark in the editor.',
+    setting: { key: 'problemsView', order: 17 },
+  }),
   templateFiles: define<readonly string[]>({
     kind: wordListKind(50, 1024),
     default: CONVENTIONAL_TEMPLATE_LOCATIONS,
     description:
       'The team’s document templates: sentences that occur in one are never picked. Files, or folders (ending in /) whose Markdown, reStructuredText and text files are all templates; relative paths start at the workspace folder (the current folder on the command line). Locations that do not exist are passed over.',
-    setting: { key: 'templateFiles', order: 17, restricted: true, scope: 'machine-overridable' },
+    setting: { key: 'templateFiles', order: 18, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'template', placeholder: 'FILE', repeatable: true, commands: ['summarize'], help: 'A document template (file, or folder ending in /) whose sentences are never picked; repeat for several. Without it, the conventional pull-request and issue template locations are read when present.' },
   }),
 } as const;

@@ -5,6 +5,7 @@
 import type { SummaryOptions } from '../options/resolve';
 import type { SentenceKinds } from '../select/sentence-kinds';
 import { balanceUnits, excludedSections, type Candidates } from '../select/units';
+import { extractKeyPhrases } from '../keyphrases/textrank-keywords';
 import { sectionPath } from './sections';
 import type {
   AnalyzedDocument,
@@ -99,6 +100,7 @@ export function describeSummary(input: ReportInput): Summary {
     language: analyzed.language,
     sentences,
     shares,
+    keyPhrases: extractKeyPhrases(analyzed),
     stats: {
       wordsIn,
       wordsOut,
