@@ -58,7 +58,11 @@ export function abstractView(report: AbstractReport, documentName: string, wordi
   const findings: AbstractFinding[] = [];
   for (const sentence of abstract.sentences) {
     if (!sentence.claim) continue;
-    const links = sentence.support.map((support) => lineLink(support.span, support.line));
+    // A consistency finding is part of its claim's verdict: its body line joins the claim's links, not an item of its own.
+    const links = [
+      ...sentence.support.map((support) => lineLink(support.span, support.line)),
+      ...sentence.findings.filter((f) => f.body && !sentence.support.some((s) => s.sentence === f.body!.sentence)).map((f) => lineLink(f.body!.span, f.body!.line)),
+    ];
     const target = place(sentence.span);
     if (sentence.supported) {
       items.push({ severity: 'ok', text: t('“{0}” is supported by the body.', quote(sentence.text)), target, links });
@@ -71,7 +75,8 @@ export function abstractView(report: AbstractReport, documentName: string, wordi
     items.push({ severity: 'warning', text, target, links });
     if (sentence.span) findings.push({ span: sentence.span, message: text });
   }
-  for (const finding of report.findings) {
+  // Findings on sentences that are not claims (rare) still show, each on its own.
+  for (const finding of report.findings.filter((f) => !abstract.sentences[f.abstractSentence]?.claim)) {
     const links = finding.body ? [lineLink(finding.body.span, finding.body.line)] : [];
     items.push({ severity: 'warning', text: finding.message, target: place(finding.abstractSpan), links });
   }

@@ -88,6 +88,8 @@ export interface PanelSummary {
   readonly notices: readonly string[];
   /** How many picks are new since the previous summary of the same document (0 for a first one). */
   readonly changed: number;
+  /** Sections with content the engine left out, and why (one line each). */
+  readonly leftOut: readonly string[];
 }
 
 /** A place the panel can ask the extension to show: an index into the check's own list of places. */

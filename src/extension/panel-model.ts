@@ -114,5 +114,6 @@ export function buildPanelSummary(summary: Summary, id: number, documentName: st
     figures: panelFigures(summary, wording),
     notices: summary.refused ? [summary.refused, ...summary.notices.filter((n) => n !== summary.refused)] : [...summary.notices],
     changed,
+    leftOut: (summary.leftOut ?? []).map((section) => section.message),
   };
 }

@@ -28,6 +28,7 @@ export const PANEL_TEXT = {
   sharesHeading: 'Where the summary comes from',
   legendDocument: 'share of the document',
   legendSummary: 'share of the summary',
+  leftOut: 'Sections left out',
   why: 'Why this sentence',
   numbers: 'Show the numbers',
   newPick: 'new',

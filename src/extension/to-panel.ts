@@ -57,6 +57,7 @@ const summary = shape({
   figures: shape({ words: text, reading: text, sections: text, sentences: text }),
   notices: list(text),
   changed: whole,
+  leftOut: list(text),
 });
 const link = shape({ label: text, target: whole });
 const check = shape({

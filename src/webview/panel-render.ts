@@ -146,6 +146,7 @@ export function renderSummary(summary: PanelSummary, text: PanelText, actions: R
           el('div', { attrs: { 'data-figure': 'sections' } }, [el('dd', {}, [summary.figures.sections])]),
         ]),
         renderShares(summary.shares, text),
+        summary.leftOut.length > 0 ? el('ul', { className: 'left-out', attrs: { 'aria-label': text.leftOut } }, summary.leftOut.map((line) => el('li', {}, [line]))) : null,
       ],
       actions,
       'details-part',

@@ -8,6 +8,8 @@ import { el } from './dom';
 export function progressView(): { readonly element: HTMLElement; render(value: PanelProgress | null): void } {
   const element = el('section', { className: 'progress', attrs: { role: 'status', 'aria-live': 'polite', hidden: '' } });
   const render = (value: PanelProgress | null): void => {
+    // A job starting after a quiet spell starts a fresh list of stages seen.
+    if (value !== null && element.hidden) element.dataset['seen'] = '';
     element.hidden = value === null;
     if (!value) {
       element.replaceChildren();
@@ -27,6 +29,10 @@ export function progressView(): { readonly element: HTMLElement; render(value: P
       );
     }
     element.dataset['stage'] = value.stage;
+    // Every stage this job showed, so a test (or a person reading the DOM) can see the sequence after it ends.
+    const seen = new Set((element.dataset['seen'] ?? '').split(' ').filter(Boolean));
+    seen.add(value.stage);
+    element.dataset['seen'] = [...seen].join(' ');
     element.replaceChildren(...children);
   };
   return { element, render };

@@ -325,7 +325,12 @@ async function main(): Promise<void> {
     mark(`abstract check: ${checks['abstractCheck'] ? JSON.stringify(checks['abstractCheck']) : ''}`);
 
     // ---- back to the demo summary; narrow and wide panel; dark, light and high-contrast themes ----
-    await openFile(page, DEMO, 'Quillhaven Bike Share');
+    // The demo keeps its scroll position from earlier steps, so any rendered line will do; then to the top.
+    // Its tab is still open: a click brings it back.
+    await page.locator('.tabs-container .tab', { hasText: DEMO }).first().click();
+    await page.locator('.tabs-container .tab.active', { hasText: DEMO }).waitFor({ timeout: 15_000 });
+    await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
+    await page.keyboard.press('Control+Home');
     await panel.locator('#length').fill('6s');
     await panel.locator('#length').press('Enter');
     await runCommand(page, 'Tersely: Summarize Document');
@@ -353,15 +358,21 @@ async function main(): Promise<void> {
     }
     checks['widths'] = widths;
     await setSidebarWidth(page, 340);
-    for (const [name, theme] of [
-      ['light', 'Default Light Modern'],
-      ['high-contrast', 'Default High Contrast'],
-      ['dark', 'Default Dark Modern'],
+    // Themes are picked the way a person does, from Preferences: Color Theme.
+    for (const [name, theme, themeClass] of [
+      ['light', 'Light Modern', /\bvs\b(?!-dark)/],
+      ['high-contrast', 'Dark High Contrast', /hc-black/],
+      ['dark', 'Dark Modern', /vs-dark/],
     ] as const) {
-      const user = JSON.parse(readFileSync(settingsFile, 'utf8')) as Record<string, unknown>;
-      user['workbench.colorTheme'] = theme;
-      writeFileSync(settingsFile, JSON.stringify(user, null, 2));
-      await poll(() => page.evaluate(() => document.querySelector('.monaco-workbench')!.className), (c) => (name === 'light' ? /\bvs\b(?!-dark)/.test(c) : name === 'dark' ? /vs-dark/.test(c) : /hc-black/.test(c)), 15_000, `the ${name} theme`);
+      await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
+      await page.keyboard.press('Control+K');
+      await page.keyboard.press('Control+T');
+      const input = page.locator('.quick-input-widget .quick-input-box input');
+      await input.waitFor({ state: 'visible', timeout: 15_000 });
+      await input.fill(theme);
+      await page.locator('.quick-input-widget .quick-input-list .monaco-list-row', { hasText: theme }).first().waitFor({ timeout: 15_000 });
+      await page.keyboard.press('Enter');
+      await poll(() => page.evaluate(() => document.querySelector('.monaco-workbench')!.className), (c) => themeClass.test(c), 40_000, `the ${name} theme`);
       await page.waitForTimeout(800);
       await page.screenshot({ path: join(artifacts, `08-theme-${name}.png`) });
     }
