@@ -82,8 +82,12 @@ export interface CheckCorpusLoad {
   readonly skipped: Readonly<Record<CorpusName, number>>;
 }
 
-/** Both corpora, the wanted half, sorted by file name; `limit` documents per corpus at most. */
-export async function loadCheckCorpus(half: Half, limit: number, root = '.'): Promise<CheckCorpusLoad> {
+/**
+ * Both corpora, the wanted half, sorted by file name; `limit` documents per corpus at most (the
+ * first ones), or with `sample`, that many spread evenly over the half (for quick iteration: old
+ * and new documents alike, the same ones on every run).
+ */
+export async function loadCheckCorpus(half: Half, limit: number, root = '.', sample = Infinity): Promise<CheckCorpusLoad> {
   const documents: AbstractDocument[] = [];
   const files: Record<CorpusName, number> = { 'rust-rfcs': 0, 'nova-specs': 0 };
   const skipped: Record<CorpusName, number> = { 'rust-rfcs': 0, 'nova-specs': 0 };
@@ -95,6 +99,7 @@ export async function loadCheckCorpus(half: Half, limit: number, root = '.'): Pr
     const directory = resolve(root, folder);
     const names = (await readdir(directory)).filter((f) => f.endsWith(extension)).sort();
     let taken = 0;
+    const usable: AbstractDocument[] = [];
     for (const file of names) {
       if (taken >= limit) break;
       const number = documentNumber(file);
@@ -104,10 +109,12 @@ export async function loadCheckCorpus(half: Half, limit: number, root = '.'): Pr
       const document = split(file, await readFile(join(directory, file), 'utf8'));
       if (document === null) skipped[name]++;
       else {
-        documents.push(document);
+        usable.push(document);
         taken++;
       }
     }
+    if (usable.length <= sample) documents.push(...usable);
+    else for (let k = 0; k < sample; k++) documents.push(usable[Math.floor((k * usable.length) / sample)]!);
   }
   return { documents, files, skipped };
 }

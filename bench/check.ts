@@ -2,7 +2,10 @@
  * Abstract-check benchmark: real author abstracts (bench/check-corpus.ts), unperturbed and with one
  * sentence perturbed by rule (bench/perturb.ts).
  *
- *   node dist/bench.cjs check [--split test|train] [--limit N] [--examples FILE] [--save-baseline FILE --label TEXT]
+ *   node dist/bench.cjs check [--split test|train] [--limit N | --sample N] [--examples FILE] [--save-baseline FILE --label TEXT]
+ *
+ * --sample N takes N documents per corpus spread evenly over the half (quick iteration); --limit N
+ * the first N. Only the full test-half run writes bench/RESULTS.md.
  *
  * --curve prints false alarms and recall for other support thresholds (tuning, train half).
  * --examples writes the false alarms and the missed perturbations, with the check's reasons, for tuning (train half).
@@ -17,7 +20,7 @@
  * engine with --save-baseline).
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
-import { checkAbstract, type AbstractReport } from '../src/core/index';
+import { abstractChecker, parseDocument, type AbstractReport } from '../src/core/index';
 import { loadCheckCorpus, type AbstractDocument, type CorpusName } from './check-corpus';
 import { BodyFacts, PERTURBATION_KINDS, perturbAbstract, type PerturbationKind } from './perturb';
 import { RESULTS_FILE, writeResultsBlock } from './results-file';
@@ -89,9 +92,13 @@ const KIND_FINDINGS: Readonly<Record<PerturbationKind, readonly string[]>> = {
 
 type Check = Extract<AbstractReport, { ok: true }>;
 
-function checkText(document: AbstractDocument, abstractText: string): Check | null {
-  const report = checkAbstract(document.bodyText, { format: document.format, abstract: { kind: 'text', text: abstractText, format: document.format } });
-  return report.ok ? report : null;
+/** The document read once; each abstract (the original, its perturbed copies) checked against it. */
+function checkerFor(document: AbstractDocument): (abstractText: string) => Check | null {
+  const check = abstractChecker(document.bodyText, { format: document.format });
+  return (abstractText) => {
+    const report = check({ kind: 'text', text: abstractText, format: document.format });
+    return report.ok ? report : null;
+  };
 }
 
 /** Finding kinds of a sentence, when the engine reports them (older engines do not). */
@@ -100,14 +107,15 @@ function findingKinds(check: Check, sentence: number): string[] {
   return (s?.findings ?? []).map((f) => f.kind);
 }
 
-export async function measure(split: Half, limit: number, engine: string, onProgress?: (line: string) => void, onExample?: (line: string) => void): Promise<CheckFigures & { files: object; skipped: object }> {
-  const load = await loadCheckCorpus(split, limit);
+export async function measure(split: Half, limit: number, engine: string, onProgress?: (line: string) => void, onExample?: (line: string) => void, sample = Infinity): Promise<CheckFigures & { files: object; skipped: object }> {
+  const load = await loadCheckCorpus(split, limit, '.', sample);
   const byCorpus: Record<CorpusName, Tally> = { 'rust-rfcs': emptyTally(), 'nova-specs': emptyTally() };
   const random = seededRandom(SEED);
   load.documents.forEach((document, index) => {
     const tally = byCorpus[document.corpus];
     const started = performance.now();
-    const original = checkText(document, document.abstractText);
+    const checkText = checkerFor(document);
+    const original = checkText(document.abstractText);
     if (original === null) return;
     tally.documents++;
     original.abstract.sentences.forEach((sentence, k) => {
@@ -127,7 +135,7 @@ export async function measure(split: Half, limit: number, engine: string, onProg
     for (const p of perturbations) {
       const counts = tally.perturbed[p.kind];
       counts.cases++;
-      const changed = checkText(document, p.abstractText);
+      const changed = checkText(p.abstractText);
       if (changed === null || changed.abstract.sentences.length !== original.abstract.sentences.length) continue;
       curveCases.push({ kind: p.kind, before: curvePoint(original.abstract.sentences[p.sentence]!), after: curvePoint(changed.abstract.sentences[p.sentence]!) });
       if (!original.abstract.sentences[p.sentence]?.supported) continue;
@@ -147,9 +155,9 @@ export async function measure(split: Half, limit: number, engine: string, onProg
   return { engine, split, byCorpus, files: load.files, skipped: load.skipped };
 }
 
+/** An abstract's sentences as the check reads them (the same reader, without checking). */
 function checkSentences(document: AbstractDocument): string[] {
-  const check = checkText(document, document.abstractText);
-  return check ? check.abstract.sentences.map((s) => s.text) : [];
+  return parseDocument(document.abstractText, { format: document.format }).sentences.map((s) => s.text);
 }
 
 
@@ -214,9 +222,10 @@ export async function run(args: readonly string[]): Promise<number> {
   };
   const split: Half = value('--split') === 'train' ? 'train' : 'test';
   const limit = Number(value('--limit') ?? Infinity);
+  const sample = Number(value('--sample') ?? Infinity);
   const examples = value('--examples');
   const exampleLines: string[] = [];
-  const figures = await measure(split, limit, value('--label') ?? 'this build', (line) => process.stderr.write(`${line}\n`), examples ? (line) => exampleLines.push(line) : undefined);
+  const figures = await measure(split, limit, value('--label') ?? 'this build', (line) => process.stderr.write(`${line}\n`), examples ? (line) => exampleLines.push(line) : undefined, sample);
   if (examples) writeFileSync(examples, exampleLines.join('\n') + '\n');
   const saveBaseline = value('--save-baseline');
   if (saveBaseline) writeFileSync(saveBaseline, JSON.stringify({ engine: figures.engine, split: figures.split, byCorpus: figures.byCorpus }, null, 2) + '\n');
@@ -224,7 +233,7 @@ export async function run(args: readonly string[]): Promise<number> {
   const table = renderFigures(figures, baseline && baseline.split === split ? baseline : null);
   process.stdout.write(table + '\n');
   if (args.includes('--curve')) process.stdout.write('\nThreshold curve (this run):\n' + curve() + '\n');
-  if (split === 'test' && !Number.isFinite(limit) && !saveBaseline) {
+  if (split === 'test' && !Number.isFinite(limit) && !Number.isFinite(sample) && !saveBaseline) {
     writeResultsBlock(RESULTS_FILE, 'check', resultsBlock(figures, table));
     process.stderr.write(`wrote the check block of ${RESULTS_FILE}\n`);
   }

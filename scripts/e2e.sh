@@ -118,8 +118,7 @@ start_server() {
   "workbench.editor.enablePreview": false,
   "editor.minimap.enabled": false,
   "files.autoSave": "off",
-  "tersely.length.unit": "sentences",
-  "tersely.length.value": 6
+  "tersely.length": "6s"
 }
 JSON
   if [ "$name" = web ]; then

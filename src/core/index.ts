@@ -6,6 +6,9 @@
 // The pipeline and its stages.
 export { summarize, prepareDocument, rankPrepared, finishSummary, rankOptionsOf, candidateSentences } from './summarize';
 export type { SummarizeRequest, SummaryStage, PreparedDocument, Preparation } from './summarize';
+// Sessions: repeated summaries of one document, reading again only what an edit changed.
+export { createSummarySession } from './session';
+export type { SummarySession, SessionUpdate } from './session';
 
 // Options: the schema every surface reads, and their resolution.
 export {
@@ -63,13 +66,17 @@ export { LABEL_RULES } from './rank/trained/labels';
 export type { LabelRule } from './rank/trained/labels';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
+// Key phrases (TextRank keyword extraction).
+export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
+export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
+
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
 export type { RepairOutcome } from './summary/apply-repair';
 export { sectionPath, unitOfSection } from './summary/sections';
 export { WORDS_PER_MINUTE, minutesToRead } from './summary/report';
 export { summaryToMarkdown, escapeMarkdown } from './render/markdown';
-export { checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
+export { abstractChecker, checkAbstract, ABSTRACT_CHECK_DEFAULTS } from './check/abstract';
 export type { CheckAbstractRequest } from './check/abstract';
 export type * from './check/abstract-report';
 

@@ -236,6 +236,44 @@ export interface SectionShare {
   readonly quota: number;
 }
 
+/** A key phrase of the document (TextRank keyword extraction, keyphrases/textrank-keywords.ts). */
+export interface KeyPhrase {
+  /** The phrase as it is most often written (lower case). */
+  readonly text: string;
+  /** Sum of the TextRank scores of its words. */
+  readonly score: number;
+  /** How many times it occurs in the text. */
+  readonly count: number;
+  /** Where it occurs in the source (capped; a phrase interrupted by markup the reader rewrote may have fewer). */
+  readonly occurrences: readonly Span[];
+}
+
+/** How a focus was applied (present only on a focused summary). */
+export interface FocusReport {
+  /** The focus as given. */
+  readonly text: string;
+  /** Its distinct content terms, and how many of them the document uses. */
+  readonly terms: number;
+  readonly termsFound: number;
+  /** Sentences that share a term with the focus: the only ones a focused summary may pick. */
+  readonly matchingSentences: number;
+}
+
+/** Why a section with content got no sentence in the summary (balance reports it; coverage stays a goal). */
+export type LeftOutReason = 'belowQualityFloor' | 'onlyFragments' | 'onlyBarred';
+
+export interface SectionLeftOut {
+  /** The balance unit (a section index, as in `shares`). */
+  readonly section: number;
+  readonly heading: string;
+  readonly reason: LeftOutReason;
+  /** One line for people. */
+  readonly message: string;
+}
+
+/** Why a sentence is never picked (select/sentence-kinds.ts). */
+export type BarredKind = 'placeholder' | 'boilerplate' | 'byline' | 'metadata' | 'template';
+
 export interface Summary {
   readonly document: ParsedDocument;
   readonly method: RankerName;
@@ -243,6 +281,10 @@ export interface Summary {
   /** Picked sentences in document order. */
   readonly sentences: readonly PickedSentence[];
   readonly shares: readonly SectionShare[];
+  /** Set when the summary was asked for with a focus. */
+  readonly focus?: FocusReport;
+  /** The document's key phrases, best first. */
+  readonly keyPhrases: readonly KeyPhrase[];
   readonly stats: SummaryStats;
   readonly warnings: readonly StandAloneWarning[];
   readonly ranking: RankingReport;
@@ -250,4 +292,8 @@ export interface Summary {
   readonly notices: readonly string[];
   /** Set when no summary was attempted (too large, binary content); the reason, for people. */
   readonly refused?: string;
+  /** Sections with content left out as not summary-worthy, and why (set by the engine). */
+  readonly leftOut?: readonly SectionLeftOut[];
+  /** Sentences never picked because of what they are (placeholders, boilerplate, template text), set by the engine. */
+  readonly barred?: readonly { readonly sentence: number; readonly kind: BarredKind }[];
 }

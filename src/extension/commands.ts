@@ -41,12 +41,12 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
       void context.panel.show();
       return outcomeResult(await context.summarizer.summarize(editor, 'selection', 'command'));
     }),
-  'tersely.insertSummary': (context) => withEditor(context, (editor) => context.actions.insertSummary(editor)),
+  'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
   'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
   'tersely.toggleLive': (context) => context.live.toggle(),
-  'tersely.checkAbstract': (context) => withEditor(context, (editor) => context.abstractCheck.run(editor)),
-  'tersely.showPanel': (context) => context.panel.show(),
+  'tersely.checkAbstract': (context, heading) => withEditor(context, (editor) => context.abstractCheck.run(editor, typeof heading === 'string' ? heading : undefined)),
+  'tersely.showPanel': (context) => context.panel.show(true),
   'tersely.applyRepair': (context, args) => {
     if (!isRepairArgs(args)) {
       context.log.warn('tersely.applyRepair was called without a valid repair.');

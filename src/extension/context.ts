@@ -4,6 +4,7 @@
  * on screen; each feature lives in a file of its own and reaches the others through it.
  */
 import * as vscode from 'vscode';
+import { formatLength, METHOD_INFO } from '../core/index';
 import { AbstractCheck } from './abstract-check';
 import { watchEditors } from './editor-events';
 import { EditorView } from './editor-view';
@@ -11,6 +12,7 @@ import type { EngineHosts } from './engine-hosts';
 import { OUTPUT_CHANNEL, VIEW_ID } from './ids';
 import { LiveMode } from './live-mode';
 import type { PanelControls } from './messages';
+import { editorWording, localizedPanelText } from './localize';
 import { ModelFiles } from './model-file';
 import { handlePanelMessage } from './panel-actions';
 import { SummaryPanel } from './panel-provider';
@@ -38,6 +40,8 @@ export class TerselyContext implements vscode.Disposable {
   readonly summarizer: Summarizer;
   readonly actions: SummaryActions;
   readonly abstractCheck: AbstractCheck;
+  /** Every user-visible string goes through this (the editor's localization API). */
+  readonly wording = editorWording();
 
   constructor(extension: vscode.ExtensionContext, hosts: EngineHosts) {
     this.log = this.own(vscode.window.createOutputChannel(OUTPUT_CHANNEL, { log: true }));
@@ -55,6 +59,7 @@ export class TerselyContext implements vscode.Disposable {
     this.abstractCheck = new AbstractCheck(this, this.ownEngine(hosts));
     this.own(vscode.window.registerWebviewViewProvider(VIEW_ID, this.panel));
     watchEditors(this);
+    this.panel.post({ type: 'text', text: localizedPanelText() });
     this.panel.post({ type: 'controls', controls: this.controls() });
   }
 
@@ -70,8 +75,15 @@ export class TerselyContext implements vscode.Disposable {
   }
 
   controls(): PanelControls {
-    const settings = this.settings.read();
-    return { unit: settings.length.unit, value: settings.length.value, method: settings.method, balance: settings.balance.enabled, live: this.live.on };
+    const { summary } = this.settings.read();
+    const { t } = this.wording;
+    return {
+      length: formatLength(summary.budget),
+      method: summary.method,
+      methods: METHOD_INFO.map((m) => ({ value: m.name, label: t(m.label), detail: t(m.detail) })),
+      balance: summary.balance,
+      live: this.live.on,
+    };
   }
 
   /** The editor a command acts on: the active one, else the one whose summary the panel shows. */

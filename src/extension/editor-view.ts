@@ -1,7 +1,7 @@
 /**
  * What a summary looks like in the editor: highlights on the picked sentences, a hover on each
- * (why it was picked), stand-alone warnings in the Problems view with their quick fixes, and the
- * status bar item. A summary shows only while its document is at the version it was made from.
+ * (why it was picked, in words), a faint mark on sentences that may not stand alone (and, when
+ * `tersely.problemsView` asks, Problems entries with quick fixes), and the status bar item. A summary shows only while its document is at the version it was made from.
  */
 import * as vscode from 'vscode';
 import type { Summary } from '../core/index';
@@ -11,7 +11,7 @@ import { RepairQuickFixes, standAloneDiagnostics } from './diagnostics';
 import { rangeOf } from './editor-ranges';
 import { convergenceOf, describePick } from './hover-text';
 import { DIAGNOSTIC_SOURCE, STAND_ALONE_CODE } from './ids';
-import { spanAt } from './ranges';
+import { checkedSpan, spanAt } from './ranges';
 import { SummaryStatus } from './status-bar';
 import { isCurrent, type ShownSummary } from './summaries';
 
@@ -44,13 +44,16 @@ export class EditorView {
         this.highlights.clear(editor);
         continue;
       }
+      const text = editor.document.getText();
       this.highlights.show(
         editor,
         shown.summary.sentences.map((pick) => rangeOf(editor.document, pick.span)),
+        shown.summary.warnings.map((w) => checkedSpan(w.span, text)).filter((span) => span !== null).map((span) => rangeOf(editor.document, span)),
       );
     }
     const document = editors[0]?.document ?? vscode.workspace.textDocuments.find((d) => d.uri.toString() === shown.key);
-    if (document && shown.highlighted && document.version === shown.version) {
+    // Notes belong to the summary (panel and editor mark); the Problems view only when asked.
+    if (document && shown.highlighted && document.version === shown.version && this.context.settings.read().host.problemsView) {
       this.diagnostics.set(document.uri, standAloneDiagnostics(document, shown.summary));
     } else {
       this.diagnostics.delete(shown.uri);
@@ -71,12 +74,17 @@ export class EditorView {
     this.diagnostics.clear();
   }
 
+  /** A setting changed: Problems entries follow `tersely.problemsView` at once. */
+  settingsChanged(): void {
+    for (const shown of this.context.store.all()) this.apply(shown);
+  }
+
   /** The status bar follows the active editor's summary (else the panel's). */
   updateStatus(): void {
     const { store } = this.context;
     const editor = vscode.window.activeTextEditor;
     const shown = editor ? store.get(editor.document.uri.toString()) : store.inPanel();
-    if (shown && shown.highlighted && isCurrent(shown)) this.status.show(shown.summary.stats, this.context.live.on);
+    if (shown && shown.highlighted && isCurrent(shown)) this.status.show(shown.summary.stats, this.context.live.on, this.context.wording);
     else this.status.hide();
   }
 
@@ -90,7 +98,7 @@ export class EditorView {
     );
     if (at < 0) return undefined;
     const pick = picks[at]!;
-    const markdown = new vscode.MarkdownString(describePick(pick, shown.summary.stats.sentencesIn, shown.summary.method, convergenceOf(shown.summary)));
+    const markdown = new vscode.MarkdownString(describePick(pick, shown.summary, this.context.wording, convergenceOf(shown.summary)));
     markdown.isTrusted = false;
     markdown.supportHtml = false;
     return new vscode.Hover(markdown, rangeOf(document, pick.span));

@@ -7,7 +7,7 @@
  * size), the host validates and keeps it, and each job names the key it expects. Document text
  * and settings travel with every job.
  */
-import type { AbstractReport, DocumentFormat, Summary, SummaryStage as SummarizeStage } from '../core/index';
+import type { AbstractReport, CheckAbstractRequest, Summary, SummaryStage as SummarizeStage } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
 export type EngineStage = SummarizeStage;
@@ -20,7 +20,7 @@ export interface EngineModel {
 
 export type EngineTask =
   | { readonly kind: 'summarize'; readonly text: string; readonly options: Omit<EngineRequestOptions, 'model'> }
-  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: { readonly format: DocumentFormat; readonly language: string } };
+  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: Omit<CheckAbstractRequest, 'thresholds' | 'model'> };
 
 /** Extension → host. */
 export type ToEngine =

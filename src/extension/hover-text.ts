@@ -1,8 +1,8 @@
-/** The hover on a highlighted sentence: its rank, score and the features behind the score. Pure. */
+/** The hover on a highlighted sentence: why it was picked, in words, then the numbers behind it. Pure. */
 import { escapeMarkdown } from '../core/index';
 import type { PickedSentence, Summary } from '../core/index';
-
-const MAX_FEATURES = 8;
+import { whyInWords, whyNumbers } from './why-text';
+import { ENGLISH, type Wording } from './wording';
 
 /** Whether an iterative ranker (LexRank, TextRank) converged, and in how many iterations. */
 export interface Convergence {
@@ -27,27 +27,15 @@ function convergenceLine(convergence: Convergence): string {
     : `Ranking did not converge${count ? ` within${count}` : ''}: the scores are approximate.`;
 }
 
-function formatNumber(value: number): string {
-  if (!Number.isFinite(value)) return String(value);
-  return Math.abs(value) >= 100 ? value.toFixed(0) : value.toFixed(3);
-}
-
-export function describePick(pick: PickedSentence, sentencesInDocument: number, method: string, convergence?: Convergence): string {
+export function describePick(pick: PickedSentence, summary: Summary, wording: Wording = ENGLISH, convergence?: Convergence): string {
   const lines: string[] = [];
-  if (pick.rank > 0) {
-    lines.push(`**Tersely** · rank ${pick.rank} of ${sentencesInDocument} · score ${formatNumber(pick.score)} (${escapeMarkdown(method)})`);
-  } else {
-    lines.push('**Tersely** · added to the summary by a repair (not ranked)');
+  lines.push(`**${wording.t('Why Tersely picked this sentence')}**`, '', escapeMarkdown(whyInWords(pick, summary, wording)));
+  if (pick.edited) lines.push('', escapeMarkdown(wording.t('Shown in the summary with an edit: {0}', pick.edited.reason)));
+  const numbers = whyNumbers(pick, summary, wording);
+  if (numbers.length > 0) {
+    // The published method names and raw values stay here, in the detail.
+    lines.push('', `*${wording.t('The numbers behind it')}:* ${numbers.map(escapeMarkdown).join(' · ')}`);
   }
-  if (pick.edited) lines.push('', `Shown in the summary with an edit: ${escapeMarkdown(pick.edited.reason)}`);
-  const features = Object.entries(pick.features)
-    .filter(([, value]) => Number.isFinite(value))
-    .sort((a, b) => Math.abs(b[1]) - Math.abs(a[1]))
-    .slice(0, MAX_FEATURES);
-  if (features.length > 0 && pick.rank > 0) {
-    lines.push('', '| feature | value |', '| --- | ---: |');
-    for (const [name, value] of features) lines.push(`| ${escapeMarkdown(name)} | ${formatNumber(value)} |`);
-  }
-  if (convergence && pick.rank > 0) lines.push('', convergenceLine(convergence));
+  if (convergence && pick.rank > 0) lines.push('', escapeMarkdown(convergenceLine(convergence)));
   return lines.join('\n');
 }

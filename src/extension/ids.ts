@@ -12,8 +12,9 @@ export const CONTEXT_KEYS = {
 } as const;
 
 export const COLOR_IDS = {
-  pickedBackground: 'tersely.pickedSentenceBackground',
-  pickedBorder: 'tersely.pickedSentenceBorder',
+  pickedUnderline: 'tersely.pickedSentenceUnderline',
+  pickedBar: 'tersely.pickedSentenceBar',
+  noteMark: 'tersely.noteMark',
   pickedRuler: 'tersely.pickedSentenceOverviewRuler',
   documentShareBar: 'tersely.documentShareBar',
   summaryShareBar: 'tersely.summaryShareBar',

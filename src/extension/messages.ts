@@ -1,12 +1,17 @@
 /**
- * Messages between the extension and its side panel, as discriminated unions, with validators.
- * Anything arriving from the webview is untrusted until `parsePanelMessage` accepts it; unknown
- * or malformed messages are rejected with a reason (the caller logs it and does nothing else).
- * No editor API here: the webview bundle imports these types too.
+ * Messages between the extension and its side panel, as discriminated unions. Anything arriving
+ * from the webview is untrusted until `parsePanelMessage` (from-panel.ts) accepts it; the webview
+ * accepts only what `isToPanel` (to-panel.ts) checks field by field. No editor API here: the
+ * webview bundle imports these types too. Every user-visible string arrives already worded and
+ * localized by the extension (panel-text.ts holds the panel's own labels).
  */
-import type { RankerName, SummaryStats } from '../core/index';
+import type { RankerName } from '../core/index';
 import type { EngineStage } from './engine-protocol';
-import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from './settings';
+import type { PanelText } from './panel-text';
+
+export { parsePanelMessage, PANEL_COMMANDS } from './from-panel';
+export type { PanelCommand, ParseResult } from './from-panel';
+export { isToPanel } from './to-panel';
 
 // ---------- what the panel shows (extension → webview) ----------
 
@@ -20,7 +25,6 @@ export interface PanelWarning {
   /** Index into the summary's warnings (what `applyRepair` sends back). */
   readonly index: number;
   readonly message: string;
-  readonly words: string;
   readonly repairs: readonly PanelRepair[];
 }
 
@@ -35,12 +39,18 @@ export interface PanelSentence {
   /** Why the shown text differs from the source, when it does. */
   readonly edited: string | null;
   readonly warnings: readonly PanelWarning[];
+  /** Picked now but not in the previous summary of the same document (after an edit). */
+  readonly isNew: boolean;
+  /** Why it was picked, in words. */
+  readonly why: string;
+  /** The numbers behind `why`, one line each (shown behind a toggle). */
+  readonly whyNumbers: readonly string[];
 }
 
 export interface PanelGroup {
   readonly heading: string;
-  /** Share of the summary's words (0-1). */
-  readonly summaryShare: number;
+  /** "40% of the summary", worded. */
+  readonly share: string;
   readonly sentences: readonly PanelSentence[];
 }
 
@@ -48,40 +58,73 @@ export interface PanelShare {
   readonly heading: string;
   readonly documentShare: number;
   readonly summaryShare: number;
-  readonly picked: number;
+  /** "12% of the document, 20% of the summary", worded. */
+  readonly label: string;
 }
 
-/** The engine's figures, passed through unchanged. */
-export type PanelFigures = SummaryStats;
+/** The summary's figures, worded and formatted for the display language. */
+export interface PanelFigures {
+  /** "151 of 2,444 words" */
+  readonly words: string;
+  /** "reads in about 1 min (document about 40 min)" */
+  readonly reading: string;
+  /** "covers 5 of 7 sections" */
+  readonly sections: string;
+  /** "6 of 72 sentences" */
+  readonly sentences: string;
+}
 
 export interface PanelSummary {
   /** Identifies this summary; messages about a replaced summary are ignored. */
   readonly id: number;
   readonly documentName: string;
   readonly scope: 'document' | 'selection';
+  /** The method, described by what it does. */
   readonly method: string;
   readonly language: string;
   readonly groups: readonly PanelGroup[];
   readonly shares: readonly PanelShare[];
   readonly figures: PanelFigures;
   readonly notices: readonly string[];
+  /** How many picks are new since the previous summary of the same document (0 for a first one). */
+  readonly changed: number;
 }
 
-export interface PanelAbstractFinding {
-  readonly severity: 'information' | 'warning';
-  readonly message: string;
+/** A place the panel can ask the extension to show: an index into the check's own list of places. */
+export interface PanelLink {
+  readonly label: string;
+  readonly target: number;
+}
+
+export interface PanelCheckItem {
+  readonly severity: 'ok' | 'warning' | 'information';
+  readonly text: string;
+  /** The item's own place in the document (the abstract sentence, the section heading), or null. */
+  readonly target: number | null;
+  /** Further places: the body lines that support a claim. */
+  readonly links: readonly PanelLink[];
 }
 
 export interface PanelAbstractCheck {
+  readonly id: number;
   readonly documentName: string;
+  /** The document changed since the check; its places may have moved. */
+  readonly stale: boolean;
   readonly headline: string;
-  readonly findings: readonly PanelAbstractFinding[];
+  readonly items: readonly PanelCheckItem[];
+}
+
+export interface PanelMethodChoice {
+  readonly value: RankerName;
+  readonly label: string;
+  readonly detail: string;
 }
 
 export interface PanelControls {
-  readonly unit: LengthUnit;
-  readonly value: number;
+  /** In the length grammar: "15%", "120w", "6s". */
+  readonly length: string;
   readonly method: RankerName;
+  readonly methods: readonly PanelMethodChoice[];
   readonly balance: boolean;
   readonly live: boolean;
 }
@@ -94,6 +137,10 @@ export type ProgressStage = 'waiting' | EngineStage | 'checkingAbstract';
 export interface PanelProgress {
   readonly task: 'summarize' | 'checkAbstract';
   readonly stage: ProgressStage;
+  /** The stage in words, localized ("Summarizing: ranking sentences (step 2 of 3)…"). */
+  readonly label: string;
+  /** Each summary stage's name, localized, in order. */
+  readonly stages: readonly string[];
 }
 
 /** The stages a summary goes through, in order, with the words the panel and status area show. */
@@ -103,124 +150,39 @@ export const SUMMARY_STAGES: readonly { readonly stage: EngineStage; readonly la
   { stage: 'checking', label: 'Picking and checking sentences' },
 ];
 
-export function progressLabel(progress: PanelProgress): string {
-  if (progress.task === 'checkAbstract') return 'Checking the abstract…';
+/** A stage in words; `t` localizes (the English text is the key), English when absent. */
+export function progressLabel(
+  progress: { readonly task: PanelProgress['task']; readonly stage: ProgressStage },
+  t: (message: string, ...args: (string | number)[]) => string = (message, ...args) => message.replace(/\{(\d+)\}/g, (_, i: string) => String(args[Number(i)])),
+): string {
+  if (progress.task === 'checkAbstract') return t('Checking the abstract…');
   const step = SUMMARY_STAGES.findIndex((entry) => entry.stage === progress.stage);
-  if (step < 0) return 'Summarizing: waiting for the engine…';
-  return `Summarizing: ${SUMMARY_STAGES[step]!.label.toLowerCase()} (step ${step + 1} of ${SUMMARY_STAGES.length})…`;
+  if (step < 0) return t('Summarizing: waiting for the engine…');
+  return t('Summarizing: {0} (step {1} of {2})…', t(SUMMARY_STAGES[step]!.label).toLowerCase(), step + 1, SUMMARY_STAGES.length);
 }
 
 export type ToPanel =
   | { readonly type: 'summary'; readonly summary: PanelSummary }
   | { readonly type: 'controls'; readonly controls: PanelControls }
+  | { readonly type: 'text'; readonly text: PanelText }
   /** null: nothing is running (or it is quick enough not to show). */
   | { readonly type: 'progress'; readonly progress: PanelProgress | null }
   | { readonly type: 'notice'; readonly kind: NoticeKind; readonly text: string }
   | { readonly type: 'abstractCheck'; readonly check: PanelAbstractCheck | null }
+  /** An announcement for screen readers ("Summary ready: 6 sentences"). */
+  | { readonly type: 'announce'; readonly text: string }
+  /** Move the keyboard focus to the summary list (the panel was shown on purpose). */
+  | { readonly type: 'focus' }
   | { readonly type: 'clear' };
 
 // ---------- what the panel asks for (webview → extension) ----------
 
-export const PANEL_COMMANDS = ['summarizeDocument', 'copySummary', 'insertSummary', 'toggleLive', 'clearHighlights'] as const;
-export type PanelCommand = (typeof PANEL_COMMANDS)[number];
-
 export type FromPanel =
   | { readonly type: 'ready' }
   | { readonly type: 'reveal'; readonly summaryId: number; readonly sentence: number }
+  | { readonly type: 'revealCheck'; readonly checkId: number; readonly target: number }
   | { readonly type: 'applyRepair'; readonly summaryId: number; readonly warning: number; readonly repair: number }
-  | { readonly type: 'setLength'; readonly unit: LengthUnit; readonly value: number }
+  | { readonly type: 'setLength'; readonly length: string }
   | { readonly type: 'setMethod'; readonly method: RankerName }
   | { readonly type: 'setBalance'; readonly enabled: boolean }
-  | { readonly type: 'command'; readonly command: PanelCommand };
-
-export type ParseResult<T> = { readonly ok: true; readonly message: T } | { readonly ok: false; readonly reason: string };
-
-const MAX_INDEX = 10_000_000;
-
-function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === 'object' && value !== null && !Array.isArray(value);
-}
-
-function isIndex(value: unknown): value is number {
-  return typeof value === 'number' && Number.isInteger(value) && value >= 0 && value <= MAX_INDEX;
-}
-
-/** Only the listed keys may be present: extra fields mean the sender is not our panel script. */
-function hasOnlyKeys(record: Record<string, unknown>, keys: readonly string[]): boolean {
-  return Object.keys(record).every((key) => keys.includes(key));
-}
-
-function reject(reason: string): ParseResult<never> {
-  return { ok: false, reason };
-}
-
-/** Validates a message from the webview. Never throws. */
-export function parsePanelMessage(raw: unknown): ParseResult<FromPanel> {
-  if (!isRecord(raw)) return reject('not an object');
-  const type = raw['type'];
-  if (typeof type !== 'string') return reject('no type');
-  const shape = (keys: readonly string[]): boolean => hasOnlyKeys(raw, ['type', ...keys]);
-  switch (type) {
-    case 'ready':
-      return shape([]) ? { ok: true, message: { type } } : reject('unexpected fields on ready');
-    case 'reveal': {
-      const { summaryId, sentence } = raw;
-      if (!shape(['summaryId', 'sentence']) || !isIndex(summaryId) || !isIndex(sentence)) return reject('malformed reveal');
-      return { ok: true, message: { type, summaryId, sentence } };
-    }
-    case 'applyRepair': {
-      const { summaryId, warning, repair } = raw;
-      if (!shape(['summaryId', 'warning', 'repair']) || !isIndex(summaryId) || !isIndex(warning) || !isIndex(repair) || repair > 10) {
-        return reject('malformed applyRepair');
-      }
-      return { ok: true, message: { type, summaryId, warning, repair } };
-    }
-    case 'setLength': {
-      const { unit, value } = raw;
-      if (!shape(['unit', 'value']) || typeof unit !== 'string' || !(LENGTH_UNITS as readonly string[]).includes(unit)) return reject('malformed setLength');
-      const bounds = LENGTH_BOUNDS[unit as LengthUnit];
-      if (typeof value !== 'number' || !Number.isInteger(value) || value < bounds.min || value > bounds.max) return reject('length out of range');
-      return { ok: true, message: { type, unit: unit as LengthUnit, value } };
-    }
-    case 'setMethod': {
-      const { method } = raw;
-      if (!shape(['method']) || typeof method !== 'string' || !(METHOD_NAMES as readonly string[]).includes(method)) return reject('unknown method');
-      return { ok: true, message: { type, method: method as RankerName } };
-    }
-    case 'setBalance': {
-      const { enabled } = raw;
-      if (!shape(['enabled']) || typeof enabled !== 'boolean') return reject('malformed setBalance');
-      return { ok: true, message: { type, enabled } };
-    }
-    case 'command': {
-      const { command } = raw;
-      if (!shape(['command']) || typeof command !== 'string' || !(PANEL_COMMANDS as readonly string[]).includes(command)) return reject('unknown command');
-      return { ok: true, message: { type, command: command as PanelCommand } };
-    }
-    default:
-      return reject(`unknown type ${JSON.stringify(type.slice(0, 40))}`);
-  }
-}
-
-/** A shallow check on the webview side that a message really is one of ours (defence in depth). */
-export function isToPanel(raw: unknown): raw is ToPanel {
-  if (!isRecord(raw)) return false;
-  switch (raw['type']) {
-    case 'summary':
-      return isRecord(raw['summary']) && Array.isArray(raw['summary']['groups']) && isRecord(raw['summary']['figures']);
-    case 'controls':
-      return isRecord(raw['controls']);
-    case 'progress': {
-      const progress = raw['progress'];
-      return progress === null || (isRecord(progress) && typeof progress['task'] === 'string' && typeof progress['stage'] === 'string');
-    }
-    case 'notice':
-      return typeof raw['text'] === 'string' && typeof raw['kind'] === 'string';
-    case 'abstractCheck':
-      return raw['check'] === null || isRecord(raw['check']);
-    case 'clear':
-      return true;
-    default:
-      return false;
-  }
-}
+  | { readonly type: 'command'; readonly command: import('./from-panel').PanelCommand };

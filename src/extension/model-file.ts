@@ -1,20 +1,25 @@
 /**
  * Loads the trained sentence model named by `tersely.modelFile`. Workspace Trust: in an
  * untrusted workspace no model file is read at all (package.json also marks the setting as
- * restricted, so a workspace cannot set it there). A malformed file gives one clear message and
- * the engine's built-in model is used. Read through the editor's file system API, so the same
+ * restricted, so a workspace cannot set it there). The engine's size cap and validation apply
+ * here, before the model is sent; a refused file gives one clear message (naming the file and the
+ * reason) and the engine's built-in model is used. Read through the editor's file system API, so the same
  * code works in the desktop editor and in the browser editor's web worker.
  */
 import * as vscode from 'vscode';
+import { loadModel, MODEL_LIMITS } from '../core/index';
 import type { EngineModel } from './engine-protocol';
 
-const MAX_MODEL_BYTES = 20 * 1024 * 1024;
+/** The engine's own cap on a model file (MODEL_LIMITS), checked before anything is read. */
+const MAX_MODEL_BYTES = MODEL_LIMITS.maxFileBytes;
 
 export type ModelValidator = (json: unknown) => { ok: true; model: unknown } | { ok: false; error: string };
 
-/** Until a stricter validator is plugged in, only the outer shape is checked here. */
-const shapeOnly: ModelValidator = (json) =>
-  typeof json === 'object' && json !== null && !Array.isArray(json) ? { ok: true, model: json } : { ok: false, error: 'the file is not a JSON object' };
+/** The engine's full validation (own properties, known features, finite counts), so a bad file is refused here, once. */
+const engineValidation: ModelValidator = (json) => {
+  const loaded = loadModel(json);
+  return loaded.ok ? { ok: true, model: json } : { ok: false, error: loaded.error };
+};
 
 export class ModelFiles {
   private cache: EngineModel | undefined;
@@ -22,7 +27,7 @@ export class ModelFiles {
 
   constructor(
     private readonly log: vscode.LogOutputChannel,
-    private readonly validate: ModelValidator = shapeOnly,
+    private readonly validate: ModelValidator = engineValidation,
   ) {}
 
   /**
@@ -43,12 +48,17 @@ export class ModelFiles {
     try {
       const stat = await vscode.workspace.fs.stat(uri);
       if (stat.size > MAX_MODEL_BYTES) {
-        this.fail(setting, `the file is larger than ${MAX_MODEL_BYTES / 1024 / 1024} MB`);
+        this.fail(setting, `the file has ${stat.size.toLocaleString('en')} bytes, more than the ${MAX_MODEL_BYTES.toLocaleString('en')} a model file may have`);
         return undefined;
       }
       const key = `${uri.toString()}@${stat.mtime}:${stat.size}`;
       if (this.cache?.key === key) return this.cache;
       const bytes = await vscode.workspace.fs.readFile(uri);
+      // The file may have grown between stat and read.
+      if (bytes.byteLength > MAX_MODEL_BYTES) {
+        this.fail(setting, `the file has more than the ${MAX_MODEL_BYTES.toLocaleString('en')} bytes a model file may have`);
+        return undefined;
+      }
       let json: unknown;
       try {
         json = JSON.parse(new TextDecoder().decode(bytes));

@@ -2,6 +2,7 @@
 import * as vscode from 'vscode';
 import type { TerselyContext } from './context';
 import type { FromPanel } from './messages';
+import { settingKeyOf } from './settings';
 
 export async function handlePanelMessage(context: TerselyContext, message: FromPanel): Promise<void> {
   const { actions, settings } = context;
@@ -11,18 +12,20 @@ export async function handlePanelMessage(context: TerselyContext, message: FromP
     case 'reveal':
       await actions.reveal(message.summaryId, message.sentence);
       return;
+    case 'revealCheck':
+      await context.abstractCheck.reveal(message.checkId, message.target);
+      return;
     case 'applyRepair':
       await actions.repair({ summaryId: message.summaryId, warning: message.warning, repair: message.repair });
       return;
     case 'setLength':
-      await settings.update('length.unit', message.unit);
-      await settings.update('length.value', message.value);
+      await settings.update(settingKeyOf('budget')!, message.length);
       return;
     case 'setMethod':
-      await settings.update('method', message.method);
+      await settings.update(settingKeyOf('method')!, message.method);
       return;
     case 'setBalance':
-      await settings.update('balance.enabled', message.enabled);
+      await settings.update(settingKeyOf('balance')!, message.enabled);
       return;
     case 'command':
       await vscode.commands.executeCommand(`tersely.${message.command}`);

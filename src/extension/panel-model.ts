@@ -1,38 +1,37 @@
 /**
- * Turns an engine summary into what the side panel shows: sentences grouped by balance unit,
- * shares, figures and the coherence warnings with their repair buttons. Pure, so it is tested
- * under Node; the webview only renders what this returns.
+ * Turns an engine summary into what the side panel shows: sentences grouped by balance unit, each
+ * with why it was picked, the worded figures, shares and the stand-alone warnings with their
+ * repair buttons. Pure, so it is tested under Node; the webview only renders what this returns.
  */
+import { METHOD_INFO, unitOfSection } from '../core/index';
 import type { Repair, StandAloneWarning, Summary } from '../core/index';
-import type { PanelGroup, PanelRepair, PanelSentence, PanelSummary, PanelWarning } from './messages';
-
-export const UNTITLED_SECTION = '(before the first heading)';
-
-/** The balance unit (a section index listed in `summary.shares`) that contains a section, or -1. */
-import { unitOfSection } from '../core/index';
+import type { PanelFigures, PanelGroup, PanelRepair, PanelSentence, PanelSummary, PanelWarning } from './messages';
+import { whyInWords, whyNumbers } from './why-text';
+import { ENGLISH, type Wording } from './wording';
 
 export { unitOfSection };
 
-export function repairLabel(repair: Repair, warning: StandAloneWarning): string {
+export const UNTITLED_SECTION = '(before the first heading)';
+
+export function repairLabel(repair: Repair, warning: StandAloneWarning, wording: Wording = ENGLISH): string {
   switch (repair.kind) {
     case 'addContext':
-      return repair.sentences.length === 1 ? 'Add the context sentence' : `Add ${repair.sentences.length} context sentences`;
+      return repair.sentences.length === 1 ? wording.t('Add the context sentence') : wording.t('Add {0} context sentences', repair.sentences.length);
     case 'replace':
-      return repair.replacement === null ? 'Drop it from the summary' : 'Swap for the next best sentence';
+      return repair.replacement === null ? wording.t('Drop it from the summary') : wording.t('Swap for the next best sentence');
     case 'trimConnective':
-      return `Show without “${warning.words}”`;
+      return wording.t('Show without “{0}”', warning.words);
   }
 }
 
-function panelWarnings(summary: Summary, sentence: number): PanelWarning[] {
+function panelWarnings(summary: Summary, sentence: number, wording: Wording): PanelWarning[] {
   return summary.warnings
     .map((warning, index) => ({ warning, index }))
     .filter(({ warning }) => warning.sentence === sentence)
     .map(({ warning, index }) => ({
       index,
       message: warning.message,
-      words: warning.words,
-      repairs: warning.repairs.map((repair, index): PanelRepair => ({ index, label: repairLabel(repair, warning) })),
+      repairs: warning.repairs.map((repair, index): PanelRepair => ({ index, label: repairLabel(repair, warning, wording) })),
     }));
 }
 
@@ -42,8 +41,35 @@ function headingOf(summary: Summary, unit: number): string {
   return heading.length > 0 ? heading : UNTITLED_SECTION;
 }
 
-export function buildPanelSummary(summary: Summary, id: number, documentName: string, scope: 'document' | 'selection'): PanelSummary {
+/** The method as people know it in the panel: by what it does. */
+export function methodLabel(method: string): string {
+  return METHOD_INFO.find((m) => m.name === method)?.label ?? method;
+}
+
+/** Whole minutes, never "0 min": a summary always takes some reading. */
+const minutes = (value: number): number => Math.max(1, Math.round(value));
+
+export function panelFigures(summary: Summary, wording: Wording = ENGLISH): PanelFigures {
+  const s = summary.stats;
+  return {
+    words: wording.t('{0} of {1} words', wording.count(s.wordsOut), wording.count(s.wordsIn)),
+    reading: wording.t('reads in about {0} min (document about {1} min)', wording.count(minutes(s.minutesToRead)), wording.count(minutes(s.documentMinutesToRead))),
+    sections: wording.t('covers {0} of {1} sections', wording.count(s.sectionsCovered), wording.count(s.sectionsWithContent)),
+    sentences: wording.t('{0} of {1} sentences', wording.count(s.sentencesOut), wording.count(s.sentencesIn)),
+  };
+}
+
+export interface BuildOptions {
+  readonly wording?: Wording;
+  /** Source text of the picks of the previous summary of the same document; picks not among them are marked new. */
+  readonly previousPicks?: ReadonlySet<string>;
+}
+
+export function buildPanelSummary(summary: Summary, id: number, documentName: string, scope: 'document' | 'selection', options: BuildOptions = {}): PanelSummary {
+  const wording = options.wording ?? ENGLISH;
+  const previous = options.previousPicks;
   const groups = new Map<number, { heading: string; sentences: PanelSentence[] }>();
+  let changed = 0;
   for (const pick of summary.sentences) {
     const unit = unitOfSection(summary, pick.section);
     let group = groups.get(unit);
@@ -53,45 +79,40 @@ export function buildPanelSummary(summary: Summary, id: number, documentName: st
     }
     const unitHeading = summary.document.sections[unit]?.heading ?? '';
     const at = unitHeading ? pick.sectionPath.lastIndexOf(unitHeading) : -1;
+    const isNew = previous !== undefined && !previous.has(pick.text);
+    if (isNew) changed++;
     group.sentences.push({
       sentence: pick.sentence,
       text: pick.text,
       rank: pick.rank,
       subPath: at >= 0 ? pick.sectionPath.slice(at + 1) : [],
       edited: pick.edited?.reason ?? null,
-      warnings: panelWarnings(summary, pick.sentence),
+      warnings: panelWarnings(summary, pick.sentence, wording),
+      isNew,
+      why: whyInWords(pick, summary, wording),
+      whyNumbers: whyNumbers(pick, summary, wording),
     });
   }
   const panelGroups: PanelGroup[] = [...groups.entries()].map(([unit, group]) => ({
     heading: group.heading,
-    summaryShare: summary.shares.find((share) => share.section === unit)?.summaryShare ?? 0,
+    share: wording.t('{0} of the summary', wording.percent(summary.shares.find((share) => share.section === unit)?.summaryShare ?? 0)),
     sentences: group.sentences,
   }));
-  const { stats } = summary;
   return {
     id,
     documentName,
     scope,
-    method: summary.method,
+    method: methodLabel(summary.method),
     language: summary.language,
     groups: panelGroups,
     shares: summary.shares.map((share) => ({
       heading: share.heading.length > 0 ? share.heading : UNTITLED_SECTION,
-      documentShare: share.documentShare,
-      summaryShare: share.summaryShare,
-      picked: share.picked,
+      documentShare: Math.max(0, Math.min(1, share.documentShare)),
+      summaryShare: Math.max(0, Math.min(1, share.summaryShare)),
+      label: wording.t('{0} of the document, {1} of the summary', wording.percent(share.documentShare), wording.percent(share.summaryShare)),
     })),
-    figures: {
-      wordsIn: stats.wordsIn,
-      wordsOut: stats.wordsOut,
-      compression: stats.compression,
-      sentencesIn: stats.sentencesIn,
-      sentencesOut: stats.sentencesOut,
-      sectionsCovered: stats.sectionsCovered,
-      sectionsWithContent: stats.sectionsWithContent,
-      minutesToRead: stats.minutesToRead,
-      documentMinutesToRead: stats.documentMinutesToRead,
-    },
+    figures: panelFigures(summary, wording),
     notices: summary.refused ? [summary.refused, ...summary.notices.filter((n) => n !== summary.refused)] : [...summary.notices],
+    changed,
   };
 }

@@ -10,6 +10,11 @@ import { VIEW_ID } from './ids';
 
 type Remembered = Partial<Record<ToPanel['type'], ToPanel>>;
 
+/** The only files the panel loads. */
+export function panelResources(extensionUri: vscode.Uri): { script: vscode.Uri; style: vscode.Uri } {
+  return { script: vscode.Uri.joinPath(extensionUri, 'dist', 'webview', 'panel.js'), style: vscode.Uri.joinPath(extensionUri, 'media', 'panel.css') };
+}
+
 export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposable {
   private view: vscode.WebviewView | undefined;
   private readonly remembered: Remembered = {};
@@ -31,14 +36,15 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
   resolveWebviewView(view: vscode.WebviewView): void {
     this.view = view;
     this.onFirstShow();
-    const media = vscode.Uri.joinPath(this.extensionUri, 'media');
-    const dist = vscode.Uri.joinPath(this.extensionUri, 'dist');
-    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [media, dist] };
+    const { script, style } = panelResources(this.extensionUri);
+    // Roots are folders: the panel's own script folder (no other bundle in it) and media/, which
+    // in the VSIX holds only the stylesheet and icons (.vscodeignore).
+    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [vscode.Uri.joinPath(script, '..'), vscode.Uri.joinPath(style, '..')] };
     view.webview.html = panelHtml({
       cspSource: view.webview.cspSource,
       nonce: makeNonce(),
-      scriptUri: view.webview.asWebviewUri(vscode.Uri.joinPath(dist, 'webview.js')).toString(),
-      styleUri: view.webview.asWebviewUri(vscode.Uri.joinPath(media, 'panel.css')).toString(),
+      scriptUri: view.webview.asWebviewUri(script).toString(),
+      styleUri: view.webview.asWebviewUri(style).toString(),
     });
     view.webview.onDidReceiveMessage((raw: unknown) => this.receive(raw), undefined, this.disposables);
     view.onDidDispose(() => {
@@ -55,13 +61,16 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     }
     if (parsed.message.type === 'ready') {
       this.replay();
+      if (this.focusWhenReady) void this.view?.webview.postMessage({ type: 'focus' } satisfies ToPanel);
+      this.focusWhenReady = false;
       return;
     }
     this.onMessage(parsed.message);
   }
 
   post(message: ToPanel): void {
-    this.remembered[message.type] = message;
+    // An announcement is said once, never replayed.
+    if (message.type !== 'announce') this.remembered[message.type] = message;
     if (message.type === 'summary' || message.type === 'clear') {
       // A new summary replaces any earlier notice about the old one.
       delete this.remembered.notice;
@@ -93,17 +102,26 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     this.post({ type: 'progress', progress: newest });
   }
 
-  /** Makes the panel visible without taking focus from the editor when possible. */
-  async show(): Promise<void> {
-    if (this.view) {
+  /** Makes the panel visible; `focus`: move the keyboard focus into it (Show Summary Panel), else it stays in the editor. */
+  async show(focus = false): Promise<void> {
+    if (this.view && !focus) {
       this.view.show(true);
       return;
     }
+    if (focus && this.view) {
+      this.view.show(false);
+      void this.view.webview.postMessage({ type: 'focus' } satisfies ToPanel);
+      return;
+    }
+    // A panel that is not there yet gets the focus once its script says it is ready.
+    this.focusWhenReady = focus;
     await vscode.commands.executeCommand(`${VIEW_ID}.focus`);
   }
 
+  private focusWhenReady = false;
+
   private replay(): void {
-    for (const type of ['controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {
+    for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {
       const message = this.remembered[type];
       if (message) void this.view?.webview.postMessage(message);
     }

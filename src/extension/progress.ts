@@ -6,7 +6,8 @@
 import * as vscode from 'vscode';
 import type { EngineStage } from './engine-protocol';
 import { VIEW_ID } from './ids';
-import { progressLabel, type PanelProgress, type ProgressStage } from './messages';
+import { progressLabel, SUMMARY_STAGES, type PanelProgress, type ProgressStage } from './messages';
+import type { Wording } from './wording';
 import type { SummaryPanel } from './panel-provider';
 
 /** How long a request may run before progress is shown (~300 ms, issue 12). */
@@ -17,8 +18,14 @@ export interface Progress {
   end(): void;
 }
 
-export function startProgress(panel: SummaryPanel, task: PanelProgress['task']): Progress {
-  let current: PanelProgress = { task, stage: task === 'summarize' ? 'waiting' : 'checkingAbstract' };
+export function startProgress(panel: SummaryPanel, task: PanelProgress['task'], wording: Wording): Progress {
+  const make = (stage: ProgressStage): PanelProgress => ({
+    task,
+    stage,
+    label: progressLabel({ task, stage }, wording.t),
+    stages: SUMMARY_STAGES.map((entry) => wording.t(entry.label)),
+  });
+  let current: PanelProgress = make(task === 'summarize' ? 'waiting' : 'checkingAbstract');
   let report: ((message: string) => void) | undefined;
   let finish: () => void = () => undefined;
   const finished = new Promise<void>((resolve) => (finish = resolve));
@@ -28,16 +35,16 @@ export function startProgress(panel: SummaryPanel, task: PanelProgress['task']):
     void vscode.window.withProgress({ location: { viewId: VIEW_ID } }, () => finished);
     void vscode.window.withProgress({ location: vscode.ProgressLocation.Window, title: 'Tersely' }, (progress) => {
       report = (message) => progress.report({ message });
-      report(progressLabel(current));
+      report(current.label);
       return finished;
     });
   }, PROGRESS_DELAY_MS);
   return {
     stage: (stage: ProgressStage) => {
-      current = { task, stage };
+      current = make(stage);
       if (token === undefined) return;
       panel.updateProgress(token, current);
-      report?.(progressLabel(current));
+      report?.(current.label);
     },
     end: () => {
       clearTimeout(timer);

@@ -1,14 +1,21 @@
-/** Status bar item shown while a summary is on screen: compression and sections covered. */
+/** Status bar item shown while a summary is on screen: words kept and sections covered. */
 import * as vscode from 'vscode';
 import type { SummaryStats } from '../core/index';
 import { VIEW_ID } from './ids';
+import { ENGLISH, type Wording } from './wording';
 
-export function statusText(stats: SummaryStats, live: boolean): { text: string; tooltip: string } {
-  const percent = Math.round(stats.compression * 100);
-  const text = `${live ? '$(sync) ' : ''}$(list-selection) ${percent}% · ${stats.sectionsCovered}/${stats.sectionsWithContent} sections`;
-  const tooltip =
-    `Tersely summary: ${stats.sentencesOut} sentences, ${stats.wordsOut} of ${stats.wordsIn} words (${percent}%); ` +
-    `${stats.sectionsCovered} of ${stats.sectionsWithContent} sections covered${live ? '; live updates on' : ''}. Click to show the panel.`;
+export function statusText(stats: SummaryStats, live: boolean, wording: Wording = ENGLISH): { text: string; tooltip: string } {
+  const { t, count } = wording;
+  const text = `${live ? '$(sync) ' : ''}$(list-selection) ${t('{0} of {1} words · {2}/{3} sections', count(stats.wordsOut), count(stats.wordsIn), count(stats.sectionsCovered), count(stats.sectionsWithContent))}`;
+  const tooltip = t(
+    'Tersely summary: {0} sentences, {1} of {2} words; covers {3} of {4} sections{5}. Click to show the panel.',
+    count(stats.sentencesOut),
+    count(stats.wordsOut),
+    count(stats.wordsIn),
+    count(stats.sectionsCovered),
+    count(stats.sectionsWithContent),
+    live ? t('; live updates on') : '',
+  );
   return { text, tooltip };
 }
 
@@ -20,8 +27,8 @@ export class SummaryStatus implements vscode.Disposable {
     this.item.command = `${VIEW_ID}.focus`;
   }
 
-  show(stats: SummaryStats, live: boolean): void {
-    const { text, tooltip } = statusText(stats, live);
+  show(stats: SummaryStats, live: boolean, wording?: Wording): void {
+    const { text, tooltip } = statusText(stats, live, wording);
     this.item.text = text;
     this.item.tooltip = tooltip;
     this.item.show();

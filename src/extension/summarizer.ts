@@ -11,7 +11,7 @@ import { buildPanelSummary } from './panel-model';
 import { startProgress } from './progress';
 import { CONTEXT_KEYS } from './ids';
 import { checkedSpan } from './ranges';
-import { formatFor, toEngineOptions } from './settings';
+import { formatFor, settingKeyOf, toEngineOptions } from './settings';
 import type { Scope, ShownSummary } from './summaries';
 import { CancelledError } from './worker-client';
 
@@ -31,7 +31,7 @@ export class Summarizer {
   async prepare(): Promise<void> {
     const { engine, models, settings } = this.context;
     engine.warm();
-    engine.useModel(await models.load(settings.read().modelFile));
+    engine.useModel(await models.load(settings.read().host.modelFile));
   }
 
   async summarize(editor: vscode.TextEditor, scope: Scope, trigger: Trigger, selection?: Span): Promise<SummarizeOutcome> {
@@ -46,21 +46,26 @@ export class Summarizer {
     let selectionSpan: Span | null = null;
     if (scope === 'selection') {
       const span = selection ?? { start: document.offsetAt(editor.selection.start), end: document.offsetAt(editor.selection.end) };
-      if (span.end <= span.start) return this.explain('empty', 'Select some text first, then run Summarize Selection.', trigger);
+      if (span.end <= span.start) return this.explain('empty', this.context.wording.t('Select some text first, then run Summarize Selection.'), trigger);
       selectionSpan = span;
       baseOffset = span.start;
       text = text.slice(span.start, span.end);
     }
-    if (text.length > settings.maxDocumentSize) {
+    const maxChars = settings.summary.maxChars;
+    if (text.length > maxChars) {
       this.forget(document);
-      const message = `This ${scope === 'selection' ? 'selection' : 'document'} has ${text.length.toLocaleString('en')} characters, more than the ${settings.maxDocumentSize.toLocaleString('en')} set in tersely.maxDocumentSize, so Tersely did not summarize it.`;
+      const { t, count } = this.context.wording;
+      const message =
+        scope === 'selection'
+          ? t('This selection has {0} characters, more than the {1} set in tersely.{2}, so Tersely did not summarize it.', count(text.length), count(maxChars), settingKeyOf('maxChars')!)
+          : t('This document has {0} characters, more than the {1} set in tersely.{2}, so Tersely did not summarize it.', count(text.length), count(maxChars), settingKeyOf('maxChars')!);
       return this.explain('tooLarge', message, trigger);
     }
 
     const ticket = sequencer.issue(key, document.version);
-    engine.useModel(await models.load(settings.modelFile));
+    engine.useModel(await models.load(settings.host.modelFile));
     const format = formatFor(document.languageId, document.fileName);
-    const progress = startProgress(this.context.panel, 'summarize');
+    const progress = startProgress(this.context.panel, 'summarize', this.context.wording);
     this.runningKey = key;
     const requested = performance.now();
     let begun: number | undefined;
@@ -73,7 +78,7 @@ export class Summarizer {
       const result = await engine.run({ kind: 'summarize', text, options: toEngineOptions(settings, format, baseOffset) }, { onStage });
       if (result.kind !== 'summarize') return { kind: 'failed' };
       summary = result.summary;
-      if (result.modelProblem) models.reportProblem(settings.modelFile, result.modelProblem);
+      if (result.modelProblem) models.reportProblem(settings.host.modelFile, result.modelProblem);
       const waited = begun === undefined ? '' : `; the engine host began after ${(begun - requested).toFixed(0)} ms`;
       log.info(
         `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}.`,
@@ -82,7 +87,7 @@ export class Summarizer {
       if (error instanceof CancelledError) return { kind: 'cancelled' };
       const message = error instanceof Error ? error.message : String(error);
       log.error(`Summary failed: ${message}`);
-      return this.explain('failed', `Tersely could not summarize this document: ${message}`, trigger);
+      return this.explain('failed', this.context.wording.t('Tersely could not summarize this document: {0}', message), trigger);
     } finally {
       progress.end();
       if (this.runningKey === key) this.runningKey = undefined;
@@ -93,6 +98,9 @@ export class Summarizer {
       log.debug(`Dropped a stale result for ${document.fileName} v${ticket.version}.`);
       return { kind: 'stale' };
     }
+    // Picks of the summary this one replaces (same document), so new ones can be marked.
+    const before = store.get(key);
+    const previousPicks = before && before.scope === scope && trigger !== 'command' ? new Set(before.summary.sentences.map((p) => p.text)) : undefined;
     const shown = store.add({
       key,
       uri: document.uri,
@@ -103,7 +111,7 @@ export class Summarizer {
       documentName: vscode.workspace.asRelativePath(document.uri, false),
       summary: this.withCheckedSpans(summary, document.getText()),
     });
-    this.display(shown);
+    this.display(shown, { previousPicks, fresh: true });
     if (summary.refused) this.context.panel.post({ type: 'notice', kind: 'tooLarge', text: summary.refused });
     return { kind: 'shown', shown };
   }
@@ -122,11 +130,19 @@ export class Summarizer {
   }
 
   /** Puts a summary in the editor and the panel. */
-  display(shown: ShownSummary): void {
-    const { editorView, panel, store } = this.context;
+  display(shown: ShownSummary, how: { previousPicks?: ReadonlySet<string>; fresh?: boolean } = {}): void {
+    const { editorView, panel, store, wording } = this.context;
     store.panelKey = shown.key;
     editorView.apply(shown);
-    panel.post({ type: 'summary', summary: buildPanelSummary(shown.summary, shown.id, shown.documentName, shown.scope) });
+    const built = buildPanelSummary(shown.summary, shown.id, shown.documentName, shown.scope, { wording, previousPicks: how.previousPicks });
+    panel.post({ type: 'summary', summary: built });
+    if (how.fresh) {
+      const count = wording.count(shown.summary.sentences.length);
+      panel.post({
+        type: 'announce',
+        text: built.changed > 0 ? wording.t('Summary ready: {0} sentences, {1} new since the edit.', count, built.changed) : wording.t('Summary ready: {0} sentences.', count),
+      });
+    }
     editorView.updateStatus();
     void vscode.commands.executeCommand('setContext', CONTEXT_KEYS.hasSummary, true);
   }

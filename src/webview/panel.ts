@@ -1,298 +1,244 @@
 /**
- * The side panel's script (runs in the webview). Every piece of document text is put on the page
- * with `textContent` or as an attribute value set through the DOM — never parsed as HTML — so a
- * document full of markup stays inert text. The panel keeps its state with getState/setState so
- * hiding and re-showing it loses nothing.
+ * The side panel's script (runs in the webview). Every message is checked field by field before
+ * use (to-panel.ts); a malformed one is dropped and logged. Document text is put on the page with
+ * `textContent` only. The saved webview state holds only what restoring needs (scroll position,
+ * open parts, the summary id): the content itself is sent again by the extension on `ready`.
  */
-import {
-  isToPanel,
-  type FromPanel,
-  type NoticeKind,
-  type PanelAbstractCheck,
-  type PanelControls,
-  type PanelGroup,
-  type PanelSentence,
-  type PanelShare,
-  type PanelSummary,
-  type ToPanel,
-} from '../extension/messages';
-import { LENGTH_BOUNDS, LENGTH_UNITS, METHOD_NAMES, type LengthUnit } from '../extension/settings';
-import { el, type Child } from './dom';
+import type { FromPanel, NoticeKind, PanelAbstractCheck, PanelControls, PanelProgress, PanelSummary } from '../extension/messages';
+import { PANEL_TEXT, type PanelText } from '../extension/panel-text';
+import { isToPanel } from '../extension/to-panel';
+import { el } from './dom';
+import { renderCheck, renderEmpty, renderSummary, collapsible, type RenderActions } from './panel-render';
 import { progressView } from './progress-view';
+import { rovingList, type RovingList } from './roving-list';
 
 interface VsCodeApi {
   postMessage(message: FromPanel): void;
   getState(): unknown;
-  setState(state: PanelState): void;
+  setState(state: SavedState): void;
 }
 declare function acquireVsCodeApi(): VsCodeApi;
 
-interface PanelState {
-  summary: PanelSummary | null;
-  controls: PanelControls | null;
-  notice: { kind: NoticeKind; text: string } | null;
-  abstractCheck: PanelAbstractCheck | null;
-  scrollY: number;
+/** What survives a reload: no document text. */
+interface SavedState {
+  readonly scrollY: number;
+  readonly open: readonly string[];
+  readonly summaryId: number | null;
 }
 
 const vscode = acquireVsCodeApi();
-const state: PanelState = restoreState();
+const saved = restore(vscode.getState());
+let text: PanelText = PANEL_TEXT;
+let summary: PanelSummary | null = null;
+let controls: PanelControls | null = null;
+let check: PanelAbstractCheck | null = null;
+let notice: { kind: NoticeKind; text: string } | null = null;
+let busy: PanelProgress | null = null;
+const open = new Set<string>(saved.open);
+let summaryList: RovingList | null = null;
 
-const UNIT_LABELS: Record<LengthUnit, string> = { sentences: 'sentences', percent: '% of words', words: 'words' };
-const METHOD_LABELS: Record<string, string> = {
-  blend: 'Blend (default)',
-  position: 'Position',
-  luhn: 'Luhn',
-  edmundson: 'Edmundson',
-  lexrank: 'LexRank',
-  textrank: 'TextRank',
-  centroid: 'Centroid',
-  bayes: 'Naive Bayes (trained)',
-};
-
-function restoreState(): PanelState {
-  const saved = vscode.getState() as Partial<PanelState> | undefined;
-  return {
-    summary: saved?.summary ?? null,
-    controls: saved?.controls ?? null,
-    notice: saved?.notice ?? null,
-    abstractCheck: saved?.abstractCheck ?? null,
-    scrollY: typeof saved?.scrollY === 'number' ? saved.scrollY : 0,
-  };
+function restore(raw: unknown): SavedState {
+  const state = typeof raw === 'object' && raw !== null ? (raw as Record<string, unknown>) : {};
+  const scrollY = typeof state['scrollY'] === 'number' && Number.isFinite(state['scrollY']) ? state['scrollY'] : 0;
+  const openParts = Array.isArray(state['open']) ? state['open'].filter((v): v is string => typeof v === 'string' && v.length < 100).slice(0, 200) : [];
+  const summaryId = typeof state['summaryId'] === 'number' ? state['summaryId'] : null;
+  return { scrollY, open: openParts, summaryId };
 }
 
 function save(): void {
-  vscode.setState(state);
+  vscode.setState({ scrollY: window.scrollY, open: [...open], summaryId: summary?.id ?? null });
 }
 
-const integer = new Intl.NumberFormat('en', { maximumFractionDigits: 0 });
-const percent = (fraction: number): string => `${Math.round(fraction * 100)}%`;
+const post = (message: FromPanel): void => vscode.postMessage(message);
 
-// ---------- static skeleton ----------
+const actions: RenderActions = {
+  reveal: (summaryId, sentence) => post({ type: 'reveal', summaryId, sentence }),
+  repair: (summaryId, warning, repair) => post({ type: 'applyRepair', summaryId, warning, repair }),
+  revealCheck: (checkId, target) => post({ type: 'revealCheck', checkId, target }),
+  dismissCheck: () => {
+    check = null;
+    renderCheckPart();
+  },
+  toggled: (name, isOpen) => {
+    if (isOpen) open.add(name);
+    else open.delete(name);
+    save();
+  },
+};
+
+// ---------- skeleton: toolbar, progress, notice, content, settings, check, announcer ----------
 
 const app = document.getElementById('app')!;
-const note = el('p', { className: 'note', attrs: { role: 'note' } }, [
-  'Extractive summary: these sentences are quoted from the document and can lose the context around them.',
-]);
+const toolbar = el('div', { className: 'toolbar', attrs: { role: 'toolbar' } });
 const progress = progressView();
+const noticeBox = el('div', { className: 'notice', attrs: { role: 'status', hidden: '' } });
+const content = el('div', { className: 'content', attrs: { id: 'content' } });
+const settingsPart = el('div', { className: 'settings-slot' });
+const checkPart = el('div', { className: 'check-slot' });
+const announcer = el('div', { className: 'visually-hidden', attrs: { role: 'status', 'aria-live': 'polite', id: 'announcer' } });
+app.append(toolbar, progress.element, noticeBox, content, checkPart, settingsPart, announcer);
 
-const lengthValue = el('input', { attrs: { id: 'length-value', type: 'number', inputmode: 'numeric', 'aria-label': 'Summary length' } });
-const lengthUnit = el('select', { attrs: { id: 'length-unit', 'aria-label': 'Length unit' } }, LENGTH_UNITS.map((unit) => el('option', { attrs: { value: unit } }, [UNIT_LABELS[unit]])));
-const method = el('select', { attrs: { id: 'method' } }, METHOD_NAMES.map((name) => el('option', { attrs: { value: name } }, [METHOD_LABELS[name] ?? name])));
-const balance = el('input', { attrs: { id: 'balance', type: 'checkbox' } });
-const liveButton = el('button', { className: 'secondary', attrs: { type: 'button', id: 'live', 'aria-pressed': 'false', title: 'Follow edits and the active editor' } }, ['Live']);
-
-function commandButton(label: string, command: Extract<FromPanel, { type: 'command' }>['command'], title: string, primary = false): HTMLButtonElement {
-  const button = el('button', { className: primary ? 'primary' : 'secondary', attrs: { type: 'button', title, 'data-command': command } }, [label]);
-  button.addEventListener('click', () => vscode.postMessage({ type: 'command', command }));
+function commandButton(label: string, title: string, command: Extract<FromPanel, { type: 'command' }>['command'], primary: boolean, disabled = false): HTMLButtonElement {
+  const button = el('button', { className: primary ? 'primary' : 'secondary', attrs: { type: 'button', title, 'aria-label': title, 'data-command': command } }, [label]);
+  button.disabled = disabled;
+  button.addEventListener('click', () => post({ type: 'command', command }));
   return button;
 }
 
-const controls = el('section', { className: 'controls', attrs: { 'aria-label': 'Summary settings' } }, [
-  el('div', { className: 'row' }, [el('label', { attrs: { for: 'length-value' } }, ['Length']), lengthValue, lengthUnit]),
-  el('div', { className: 'row' }, [el('label', { attrs: { for: 'method' } }, ['Method']), method]),
-  el('div', { className: 'row' }, [balance, el('label', { attrs: { for: 'balance' } }, ['Balance topics across sections'])]),
-  el('div', { className: 'actions' }, [
-    commandButton('Summarize', 'summarizeDocument', 'Summarize the active document', true),
+function renderToolbar(): void {
+  const none = summary === null;
+  const live = controls?.live ?? false;
+  const liveButton = commandButton(live ? text.liveOn : text.liveOff, text.liveTitle, 'toggleLive', false);
+  liveButton.id = 'live';
+  liveButton.setAttribute('aria-pressed', String(live));
+  toolbar.setAttribute('aria-label', text.summaryHeading);
+  toolbar.replaceChildren(
+    commandButton(text.summarize, text.summarizeTitle, 'summarizeDocument', true, busy?.task === 'summarize'),
+    commandButton(text.copy, text.copyTitle, 'copySummary', false, none),
+    commandButton(text.insert, text.insertTitle, 'insertSummary', false, none),
     liveButton,
-    commandButton('Copy', 'copySummary', 'Copy the summary as Markdown'),
-    commandButton('Insert', 'insertSummary', 'Insert the summary into the document (one undoable edit)'),
-  ]),
-]);
-liveButton.addEventListener('click', () => vscode.postMessage({ type: 'command', command: 'toggleLive' }));
-
-const noticeBox = el('div', { className: 'notice', attrs: { role: 'status', 'aria-live': 'polite', hidden: '' } });
-const content = el('div', { className: 'content', attrs: { id: 'content' } });
-app.append(note, progress.element, controls, noticeBox, content);
-
-function sendLength(): void {
-  const unit = lengthUnit.value as LengthUnit;
-  const bounds = LENGTH_BOUNDS[unit];
-  const raw = Math.round(Number(lengthValue.value));
-  const value = Number.isFinite(raw) ? Math.min(bounds.max, Math.max(bounds.min, raw)) : bounds.min;
-  lengthValue.value = String(value);
-  vscode.postMessage({ type: 'setLength', unit, value });
-}
-
-lengthValue.addEventListener('change', sendLength);
-lengthUnit.addEventListener('change', () => {
-  const bounds = LENGTH_BOUNDS[lengthUnit.value as LengthUnit];
-  lengthValue.min = String(bounds.min);
-  lengthValue.max = String(bounds.max);
-  lengthValue.step = String(bounds.step);
-  sendLength();
-});
-method.addEventListener('change', () => vscode.postMessage({ type: 'setMethod', method: method.value as PanelControls['method'] }));
-balance.addEventListener('change', () => vscode.postMessage({ type: 'setBalance', enabled: balance.checked }));
-
-// ---------- rendering ----------
-
-function renderControls(value: PanelControls | null): void {
-  if (!value) return;
-  const bounds = LENGTH_BOUNDS[value.unit];
-  lengthUnit.value = value.unit;
-  lengthValue.min = String(bounds.min);
-  lengthValue.max = String(bounds.max);
-  lengthValue.step = String(bounds.step);
-  if (document.activeElement !== lengthValue) lengthValue.value = String(value.value);
-  method.value = value.method;
-  balance.checked = value.balance;
-  liveButton.setAttribute('aria-pressed', String(value.live));
-  liveButton.textContent = value.live ? 'Live: on' : 'Live: off';
-}
-
-function renderNotice(value: PanelState['notice']): void {
-  noticeBox.textContent = value?.text ?? '';
-  noticeBox.dataset['kind'] = value?.kind ?? '';
-  noticeBox.hidden = !value || value.text.length === 0;
-  content.classList.toggle('stale', value?.kind === 'stale');
-}
-
-function figure(name: string, label: string, value: string): HTMLElement {
-  return el('div', { className: 'figure', attrs: { 'data-figure': name } }, [el('dt', {}, [label]), el('dd', {}, [value])]);
-}
-
-function renderFigures(summary: PanelSummary): HTMLElement {
-  const f = summary.figures;
-  return el('dl', { className: 'figures' }, [
-    figure('words', 'Words', `${integer.format(f.wordsIn)} → ${integer.format(f.wordsOut)}`),
-    figure('compression', 'Compression', percent(f.compression)),
-    figure('sections', 'Sections covered', `${f.sectionsCovered} / ${f.sectionsWithContent}`),
-    figure('reading', 'Reads in', `about ${integer.format(Math.max(1, Math.round(f.minutesToRead)))} min (document about ${integer.format(Math.max(1, Math.round(f.documentMinutesToRead)))} min)`),
-  ]);
-}
-
-function bar(kind: 'document' | 'summary', share: number, label: string): HTMLElement {
-  const fill = el('div', { className: `bar-fill ${kind}` });
-  fill.style.width = `${Math.max(0, Math.min(100, share * 100)).toFixed(1)}%`;
-  return el('div', { className: 'bar', attrs: { role: 'img', 'aria-label': label } }, [fill]);
-}
-
-function renderShares(shares: readonly PanelShare[]): HTMLElement | null {
-  if (shares.length === 0) return null;
-  const rows = shares.map((share) =>
-    el('div', { className: 'share-row' }, [
-      el('div', { className: 'share-heading', attrs: { title: share.heading } }, [share.heading]),
-      el('div', { className: 'share-bars' }, [
-        bar('document', share.documentShare, `${share.heading}: ${percent(share.documentShare)} of the document`),
-        bar('summary', share.summaryShare, `${share.heading}: ${percent(share.summaryShare)} of the summary`),
-      ]),
-      el('div', { className: 'share-numbers' }, [`${percent(share.documentShare)} → ${percent(share.summaryShare)}`]),
-    ]),
   );
-  return el('section', { className: 'shares', attrs: { 'aria-label': 'Where the summary comes from' } }, [
-    el('h3', {}, ['Where the summary comes from']),
-    el('div', { className: 'legend' }, [
-      el('span', { className: 'swatch document', attrs: { 'aria-hidden': 'true' } }),
-      'share of the document ',
-      el('span', { className: 'swatch summary', attrs: { 'aria-hidden': 'true' } }),
-      'share of the summary',
-    ]),
-    ...rows,
-  ]);
 }
 
-function renderSentence(summary: PanelSummary, sentence: PanelSentence): HTMLElement {
-  const button = el('button', { className: 'sentence', attrs: { type: 'button', 'data-sentence': String(sentence.sentence), title: 'Show this sentence in the editor' } }, [sentence.text]);
-  button.addEventListener('click', () => vscode.postMessage({ type: 'reveal', summaryId: summary.id, sentence: sentence.sentence }));
-  const meta: Child[] = [];
-  if (sentence.subPath.length > 0) meta.push(el('span', { className: 'sub-path' }, [sentence.subPath.join(' › ')]));
-  meta.push(el('span', { className: 'rank' }, [sentence.rank > 0 ? `rank ${sentence.rank}` : 'added by a repair']));
-  if (sentence.edited) meta.push(el('span', { className: 'edited' }, [`edited: ${sentence.edited}`]));
-  const warnings = sentence.warnings.map((warning) =>
-    el('div', { className: 'warning', attrs: { role: 'note' } }, [
-      el('span', { className: 'warning-label' }, ['May not stand alone: ']),
-      el('span', {}, [warning.message]),
-      el(
-        'div',
-        { className: 'repairs' },
-        warning.repairs.map((repair) => {
-          const repairButton = el('button', { className: 'secondary', attrs: { type: 'button' } }, [repair.label]);
-          repairButton.addEventListener('click', () => vscode.postMessage({ type: 'applyRepair', summaryId: summary.id, warning: warning.index, repair: repair.index }));
-          return repairButton;
-        }),
-      ),
-    ]),
+function renderSettings(): void {
+  if (!controls) {
+    settingsPart.replaceChildren();
+    return;
+  }
+  const current = controls;
+  const length = el('input', { attrs: { id: 'length', type: 'text', inputmode: 'text', spellcheck: 'false', 'aria-describedby': 'length-help', size: '7' } });
+  length.value = current.length;
+  const send = (): void => {
+    if (length.value.trim() !== current.length) post({ type: 'setLength', length: length.value.trim() });
+  };
+  length.addEventListener('change', send);
+  length.addEventListener('keydown', (event) => {
+    if (event.key === 'Enter') send();
+  });
+  const method = el(
+    'select',
+    { attrs: { id: 'method' } },
+    current.methods.map((m) => el('option', { attrs: { value: m.value, title: m.detail } }, [m.label])),
   );
-  return el('li', { className: sentence.warnings.length > 0 ? 'flagged' : '' }, [button, el('div', { className: 'meta' }, meta), ...warnings]);
+  method.value = current.method;
+  method.title = current.methods.find((m) => m.value === current.method)?.detail ?? '';
+  method.addEventListener('change', () => post({ type: 'setMethod', method: method.value as PanelControls['method'] }));
+  const balance = el('input', { attrs: { id: 'balance', type: 'checkbox' } });
+  balance.checked = current.balance;
+  balance.addEventListener('change', () => post({ type: 'setBalance', enabled: balance.checked }));
+  settingsPart.replaceChildren(
+    collapsible(
+      'settings',
+      text.settings,
+      open.has('settings'),
+      [
+        el('div', { className: 'row' }, [el('label', { attrs: { for: 'length' } }, [text.length]), length, el('span', { className: 'help', attrs: { id: 'length-help' } }, [text.lengthHelp])]),
+        el('div', { className: 'row' }, [el('label', { attrs: { for: 'method' } }, [text.method]), method]),
+        el('div', { className: 'row' }, [balance, el('label', { attrs: { for: 'balance' } }, [text.balance])]),
+      ],
+      actions,
+      'settings',
+    ),
+  );
 }
 
-function renderGroup(summary: PanelSummary, group: PanelGroup): HTMLElement {
-  return el('section', { className: 'group', attrs: { 'data-heading': group.heading } }, [
-    el('h3', {}, [el('span', { className: 'group-heading' }, [group.heading]), el('span', { className: 'group-share' }, [`${percent(group.summaryShare)} of summary`])]),
-    el(
-      'ol',
-      {},
-      group.sentences.map((sentence) => renderSentence(summary, sentence)),
-    ),
-  ]);
-}
-
-function renderAbstract(check: PanelAbstractCheck | null): HTMLElement | null {
-  if (!check) return null;
-  return el('section', { className: 'abstract', attrs: { 'aria-label': 'Abstract check' } }, [
-    el('h3', {}, ['Abstract check']),
-    el('p', {}, [check.headline]),
-    el(
-      'ul',
-      {},
-      check.findings.map((finding) => el('li', { className: finding.severity }, [finding.message])),
-    ),
-  ]);
+function renderNotice(): void {
+  noticeBox.textContent = notice?.text ?? '';
+  noticeBox.dataset['kind'] = notice?.kind ?? '';
+  noticeBox.hidden = !notice || notice.text.length === 0;
+  content.classList.toggle('stale', notice?.kind === 'stale');
 }
 
 function renderContent(): void {
-  const summary = state.summary;
-  const children: Child[] = [];
+  const hadFocus = content.contains(document.activeElement);
+  const at = summaryList?.current ?? 0;
   if (!summary) {
-    const start = el('button', { className: 'primary', attrs: { type: 'button' } }, ['Summarize the active document']);
-    start.addEventListener('click', () => vscode.postMessage({ type: 'command', command: 'summarizeDocument' }));
-    children.push(el('p', { className: 'empty' }, ['No summary yet. Open a Markdown or text document and summarize it.']), start);
-  } else {
-    children.push(
-      el('h2', { className: 'document-name' }, [summary.scope === 'selection' ? `${summary.documentName} (selection)` : summary.documentName]),
-      el('p', { className: 'method' }, [`${METHOD_LABELS[summary.method] ?? summary.method} · language ${summary.language} · ${summary.figures.sentencesOut} of ${summary.figures.sentencesIn} sentences`]),
-      renderFigures(summary),
-      ...summary.notices.map((notice) => el('p', { className: 'summary-notice' }, [notice])),
-      renderShares(summary.shares),
-      el(
-        'div',
-        { className: 'summary', attrs: { 'data-summary-id': String(summary.id) } },
-        summary.groups.map((group) => renderGroup(summary, group)),
-      ),
-    );
+    summaryList = null;
+    content.replaceChildren(renderEmpty(text));
+    return;
   }
-  children.push(renderAbstract(state.abstractCheck));
-  content.replaceChildren(...children.filter((child): child is Node | string => Boolean(child)));
+  const current = summary;
+  const { element, items } = renderSummary(current, text, actions, open);
+  content.replaceChildren(element);
+  summaryList = rovingList(element, items, (index) => actions.reveal(current.id, Number(items[index]!.dataset['sentence'])), Math.min(at, items.length - 1));
+  if (hadFocus) summaryList.focus(summaryList.current);
 }
 
-function handle(message: ToPanel): void {
+function renderCheckPart(): void {
+  if (!check) {
+    checkPart.replaceChildren();
+    return;
+  }
+  const current = check;
+  const { element, items } = renderCheck(current, text, actions);
+  checkPart.replaceChildren(element);
+  rovingList(element, items, (index) => {
+    const target = items[index]!.dataset['target'];
+    if (target !== undefined) actions.revealCheck(current.id, Number(target));
+  });
+}
+
+function renderAll(): void {
+  document.documentElement.lang = text === PANEL_TEXT ? 'en' : document.documentElement.lang;
+  renderToolbar();
+  renderSettings();
+  renderNotice();
+  renderContent();
+  renderCheckPart();
+}
+
+function handle(message: import('../extension/messages').ToPanel): void {
   switch (message.type) {
-    case 'summary':
-      state.summary = message.summary;
-      state.notice = null;
-      renderNotice(null);
+    case 'summary': {
+      const isNewSummary = summary?.id !== message.summary.id;
+      summary = message.summary;
+      notice = null;
+      renderNotice();
       renderContent();
+      renderToolbar();
+      // A new summary starts at its top; a repair of the same one keeps the place.
+      if (isNewSummary) window.scrollTo(0, 0);
       break;
+    }
     case 'controls':
-      state.controls = message.controls;
-      renderControls(message.controls);
+      controls = message.controls;
+      renderSettings();
+      renderToolbar();
+      break;
+    case 'text':
+      text = message.text;
+      renderAll();
       break;
     case 'progress':
+      busy = message.progress;
       progress.render(message.progress);
       content.setAttribute('aria-busy', String(message.progress !== null));
+      renderToolbar();
       return;
     case 'notice':
-      state.notice = message.text ? { kind: message.kind, text: message.text } : null;
-      renderNotice(state.notice);
+      notice = message.text ? { kind: message.kind, text: message.text } : null;
+      renderNotice();
       break;
-    case 'abstractCheck':
-      state.abstractCheck = message.check;
-      renderContent();
+    case 'abstractCheck': {
+      const isNewCheck = message.check !== null && check?.id !== message.check.id;
+      check = message.check;
+      renderCheckPart();
+      if (isNewCheck) checkPart.scrollIntoView({ block: 'start' });
       break;
+    }
+    case 'announce':
+      // Cleared first so the same words are announced again.
+      announcer.textContent = '';
+      setTimeout(() => (announcer.textContent = message.text), 50);
+      return;
+    case 'focus':
+      if (summaryList) summaryList.focus(summaryList.current);
+      else toolbar.querySelector<HTMLButtonElement>('button')?.focus();
+      return;
     case 'clear':
-      state.summary = null;
+      summary = null;
       renderContent();
+      renderToolbar();
       break;
   }
   save();
@@ -301,19 +247,15 @@ function handle(message: ToPanel): void {
 window.addEventListener('message', (event: MessageEvent<unknown>) => {
   // Only the extension (through the webview host) posts to this window; anything else is dropped.
   if (isToPanel(event.data)) handle(event.data);
+  else console.warn(`Tersely panel: ignored a malformed message${typeof (event.data as { type?: unknown })?.type === 'string' ? ` of type ${String((event.data as { type: string }).type).slice(0, 40)}` : ''}.`);
 });
 
 let scrollTimer: ReturnType<typeof setTimeout> | undefined;
 window.addEventListener('scroll', () => {
   clearTimeout(scrollTimer);
-  scrollTimer = setTimeout(() => {
-    state.scrollY = window.scrollY;
-    save();
-  }, 150);
+  scrollTimer = setTimeout(save, 150);
 });
 
-renderControls(state.controls);
-renderNotice(state.notice);
-renderContent();
-window.scrollTo(0, state.scrollY);
-vscode.postMessage({ type: 'ready' });
+renderAll();
+window.scrollTo(0, saved.scrollY);
+post({ type: 'ready' });

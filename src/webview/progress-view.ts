@@ -1,8 +1,8 @@
 /**
- * The panel's progress state for a job that takes a while (the extension posts it after ~300 ms):
- * the stage by name and the stages done, current and to come.
+ * The panel's busy state for a job that takes a while (the extension posts it after ~300 ms):
+ * the stage by name and the stages done, current and to come, worded by the extension.
  */
-import { progressLabel, SUMMARY_STAGES, type PanelProgress } from '../extension/messages';
+import { SUMMARY_STAGES, type PanelProgress } from '../extension/messages';
 import { el } from './dom';
 
 export function progressView(): { readonly element: HTMLElement; render(value: PanelProgress | null): void } {
@@ -14,14 +14,14 @@ export function progressView(): { readonly element: HTMLElement; render(value: P
       return;
     }
     const step = SUMMARY_STAGES.findIndex((entry) => entry.stage === value.stage);
-    const children: Node[] = [el('p', { className: 'progress-title' }, [progressLabel(value)])];
+    const children: Node[] = [el('p', { className: 'progress-title' }, [value.label])];
     if (value.task === 'summarize') {
       children.push(
         el(
           'ol',
           { className: 'stages' },
-          SUMMARY_STAGES.map((entry, index) =>
-            el('li', { attrs: { 'data-stage': entry.stage, 'data-state': index < step ? 'done' : index === step ? 'current' : 'pending' } }, [entry.label]),
+          value.stages.map((label, index) =>
+            el('li', { attrs: { 'data-stage': SUMMARY_STAGES[index]?.stage ?? '', 'data-state': index < step ? 'done' : index === step ? 'current' : 'pending' } }, [label]),
           ),
         ),
       );

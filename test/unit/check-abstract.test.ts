@@ -71,7 +71,13 @@ describe('check: abstract against body', () => {
     assert.match(negation!.abstractSays, /not reduce/);
     assert.match(negation!.bodySays ?? '', /^reduce missed/);
     assert.match(negation!.message, /^abstract: .*not reduce.* — body, line \d+: reduce missed/);
-    assert.deepEqual(check.findings, [number, negation]);
+    // The invented claim is unsupported, and its figure is one the body never writes.
+    const [invented] = check.abstract.sentences[3]!.findings;
+    assert.equal(invented?.kind, 'number');
+    assert.equal(invented?.abstractSays, 'fifteen points');
+    assert.equal(invented?.body, null);
+    assert.match(invented!.message, /the body never gives 15$/);
+    assert.deepEqual(check.findings, [number, invented, negation]);
   });
 
   it('follows one rule: a section is covered exactly when it holds support of a claim that reached the threshold', () => {
@@ -161,7 +167,8 @@ describe('check: abstract against body', () => {
     assert.deepEqual(headingsOf(separate, separate.uncoveredSections), UNCOVERED);
     assert.deepEqual(separate.unsupportedSentences, check.unsupportedSentences);
     assert.deepEqual(separate.contradictedSentences, check.contradictedSentences);
-    assert.ok(separate.findings.every((f) => f.abstractSpan === null && f.body !== null));
+    assert.ok(separate.findings.every((f) => f.abstractSpan === null));
+    assert.deepEqual(separate.findings.map((f) => f.body === null), check.findings.map((f) => f.body === null));
   });
 
   it('uses a named heading when asked, and explains a missing one', () => {

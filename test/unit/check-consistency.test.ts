@@ -55,8 +55,27 @@ describe('check consistency: numbers', () => {
     assert.deepEqual(checkNumbers(input('Rebalancing trips fell by 50% in May.', ['Rebalancing trips fell by half in May.'])), []);
   });
 
-  it('stays silent about a number the body never counts (left to the support rule)', () => {
-    assert.deepEqual(checkNumbers(input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.'])), []);
+  it('reports a figure the body never writes anywhere, with no place to cite', () => {
+    const findings = checkNumbers(input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.evidence, null);
+    assert.match(findings[0]!.note ?? '', /never gives 2019/);
+  });
+
+  it('accepts a figure the body writes only outside its sentences (a table, a code block)', () => {
+    const base = input('Riders joined from 2019 onwards.', ['Riders joined in large numbers.']);
+    assert.deepEqual(checkNumbers({ ...base, body: { ...base.body, textNumbers: new Set([2019]) } }), []);
+  });
+
+  it('does not read a reference marker or a link target as a figure', () => {
+    assert.deepEqual(checkNumbers(input('Riders joined early [3].', ['Riders joined in large numbers.'])), []);
+    assert.deepEqual(checkNumbers(input('Riders joined early, see https://example.org/report/2019.', ['Riders joined in large numbers.'])), []);
+  });
+
+  it('reads a number joined to its word ("6-dock stations")', () => {
+    const findings = checkNumbers(input('The city opened 8-dock stations.', ['The city opened 6-dock stations.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.bodySays, '6-dock stations');
   });
 
   it('reports a value the body never gives when it counts the same thing elsewhere', () => {
@@ -87,6 +106,19 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.equal(removed.length, 1);
   });
 
+  it('reads the body where it uses the negated word, even when that sentence shares little else with the claim', () => {
+    // The closest body sentence using "late" says plainly that the ferry runs late.
+    const claim = 'On Sundays the island ferry is not late.';
+    const findings = checkNegation(input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is late most mornings.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.abstractSays, 'is not late');
+    assert.match(findings[0]!.bodySays ?? '', /^late/);
+    // A body sentence that negates the word too agrees with the claim.
+    assert.deepEqual(checkNegation(input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is not late on Sundays.'])), []);
+    // A word the body never uses is left to the support rule.
+    assert.deepEqual(checkNegation(input('On Sundays the island ferry is not crowded.', ['On Sundays the island ferry carries bikes.'])), []);
+  });
+
   it('stays silent when the pool agrees with the claim', () => {
     const findings = checkNegation(input('The new timetable does not reduce waiting times at the pier.', ['The new timetable does reduce waiting times at the pier.'], ['The new timetable does not reduce waiting times at the pier much.']));
     assert.deepEqual(findings, []);
@@ -105,6 +137,12 @@ describe('check consistency: modality', () => {
     assert.equal(swapped[0]!.abstractSays, 'must publish');
     assert.equal(swapped[0]!.bodySays, 'may publish');
     assert.deepEqual(checkModality(input('Operators will publish the winter timetable online.', ['Operators publish the winter timetable online.'])), []);
+  });
+
+  it('accepts the claim\'s modal on the word anywhere in the body\'s closest sentences about it', () => {
+    const claim = 'Operators must publish the winter timetable online.';
+    assert.equal(checkModality(input(claim, ['Operators may publish the winter timetable online.'])).length, 1);
+    assert.deepEqual(checkModality(input(claim, ['Operators may publish the winter timetable online.'], ['Each operator must publish its timetable.'])), []);
   });
 });
 

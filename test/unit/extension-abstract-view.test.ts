@@ -12,9 +12,22 @@ describe('extension abstract view', () => {
     const unsupported = report.abstract.sentences.filter((s) => !s.supported).length;
     const uncovered = report.sections.filter((s) => !s.covered).length;
     assert.match(view.panel.headline, new RegExp(`covers ${report.sections.length - uncovered} of ${report.sections.length} sections`));
-    assert.equal(view.panel.findings.length, unsupported + uncovered + report.notices.length);
+    const claims = report.abstract.sentences.filter((s) => s.claim).length;
+    assert.equal(view.panel.items.length, claims + report.findings.length + uncovered + (report.rouge ? 1 : 0) + report.notices.length);
+    assert.equal(view.panel.items.filter((i) => i.severity === 'warning').length, unsupported + report.findings.length);
     assert.ok(view.findings.length > 0);
     for (const finding of view.findings) assert.ok(finding.span.start >= 0 && finding.span.end <= text.length && finding.span.start < finding.span.end);
+    // Every place an item or link points to is inside the document; a supported claim links to its support lines.
+    for (const span of view.places) assert.ok(span.start >= 0 && span.end <= text.length && span.start <= span.end);
+    const targets = view.panel.items.flatMap((i) => [i.target, ...i.links.map((l) => l.target)]).filter((t) => t !== null);
+    assert.ok(targets.every((t) => t! < view.places.length));
+    const supported = view.panel.items.find((i) => i.severity === 'ok');
+    if (supported) assert.ok(supported.links.length > 0 && supported.links.every((l) => /^line \d+$/.test(l.label)));
+    // Each uncovered section links to its heading's line.
+    for (const section of report.sections.filter((s) => !s.covered)) {
+      const item = view.panel.items.find((i) => i.text.includes(`“${section.heading}”`) && i.text.includes('leaves out'))!;
+      assert.equal(text.slice(view.places[item.target!]!.start).split('\n')[0], text.slice(section.span.start).split('\n')[0]);
+    }
   });
 
   it('shows the engine’s reason when there is no abstract to check', () => {

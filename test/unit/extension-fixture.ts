@@ -77,6 +77,7 @@ export function ferrySummary(text: string = FERRY_TEXT, extra: { sentence?: stri
     method: 'blend',
     language: 'en',
     sentences: picks,
+    keyPhrases: [],
     shares: [
       { section: 1, heading: 'Night Ferry Timetable', documentShare: 0.4, summaryShare: 0.25, picked: 1, quota: 1 },
       { section: 2, heading: 'Fares', documentShare: 0.4, summaryShare: 0.5, picked: 2, quota: 2 },

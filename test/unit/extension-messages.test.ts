@@ -1,13 +1,19 @@
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
 import { isToPanel, parsePanelMessage, progressLabel, SUMMARY_STAGES, type FromPanel } from '../../src/extension/messages';
+import { buildPanelSummary } from '../../src/extension/panel-model';
+import { PANEL_TEXT } from '../../src/extension/panel-text';
+import { ferrySummary } from './extension-fixture';
 
 const valid: FromPanel[] = [
   { type: 'ready' },
   { type: 'reveal', summaryId: 3, sentence: 12 },
   { type: 'applyRepair', summaryId: 3, warning: 0, repair: 2 },
-  { type: 'setLength', unit: 'sentences', value: 5 },
-  { type: 'setLength', unit: 'percent', value: 100 },
+  { type: 'setLength', length: '5s' },
+  { type: 'setLength', length: '100%' },
+  { type: 'setLength', length: '120w' },
+  { type: 'revealCheck', checkId: 2, target: 0 },
+  { type: 'command', command: 'checkAbstract' },
   { type: 'setMethod', method: 'textrank' },
   { type: 'setBalance', enabled: false },
   { type: 'command', command: 'insertSummary' },
@@ -32,9 +38,12 @@ describe('extension messages: validating what the panel sends', () => {
       { type: 'reveal', summaryId: 3, sentence: Number.NaN },
       { type: 'reveal', summaryId: 3, sentence: 1, href: 'https://example.invalid' },
       { type: 'applyRepair', summaryId: 1, warning: 0, repair: 99 },
-      { type: 'setLength', unit: 'pages', value: 3 },
-      { type: 'setLength', unit: 'percent', value: 101 },
-      { type: 'setLength', unit: 'sentences', value: 0 },
+      { type: 'setLength', length: '3 pages' },
+      { type: 'setLength', length: '101%' },
+      { type: 'setLength', length: '0s' },
+      { type: 'setLength', length: 15 },
+      { type: 'setLength', length: '15%', unit: 'percent' },
+      { type: 'revealCheck', checkId: 1, target: -1 },
       { type: 'setMethod', method: '__proto__' },
       { type: 'setBalance', enabled: 'true' },
       { type: 'command', command: 'workbench.action.terminal.new' },
@@ -75,17 +84,45 @@ describe('extension messages: validating what the panel sends', () => {
 });
 
 describe('extension messages: the webview side check', () => {
-  it('recognizes the extension’s messages and drops others', () => {
-    assert.equal(isToPanel({ type: 'progress', progress: { task: 'summarize', stage: 'ranking' } }), true);
+  const summary = buildPanelSummary(ferrySummary(), 3, 'ferry.md', 'document');
+  const progress = { task: 'summarize', stage: 'ranking', label: 'Summarizing…', stages: ['a', 'b', 'c'] };
+
+  it('accepts what the extension really sends', () => {
+    assert.equal(isToPanel({ type: 'summary', summary }), true);
+    assert.equal(isToPanel({ type: 'progress', progress }), true);
     assert.equal(isToPanel({ type: 'progress', progress: null }), true);
-    assert.equal(isToPanel({ type: 'busy', busy: true }), false, 'the old busy flag is gone');
     assert.equal(isToPanel({ type: 'clear' }), true);
-    assert.equal(isToPanel({ type: 'summary', summary: { groups: [], figures: {} } }), true);
+    assert.equal(isToPanel({ type: 'text', text: PANEL_TEXT }), true);
+    assert.equal(isToPanel({ type: 'announce', text: 'Summary ready.' }), true);
+  });
+
+  it('checks every field: a malformed unit, a wrong type deep inside, a missing or extra field each drop the message', () => {
+    const group = summary.groups[0]!;
+    const sentence = group.sentences[0]!;
+    const withSentence = (changed: unknown) => ({ type: 'summary', summary: { ...summary, groups: [{ ...group, sentences: [changed] }] } });
+    assert.equal(isToPanel(withSentence({ ...sentence, rank: 'first' })), false);
+    assert.equal(isToPanel(withSentence({ ...sentence, subPath: [1] })), false);
+    assert.equal(isToPanel(withSentence({ ...sentence, isNew: undefined })), false);
+    assert.equal(isToPanel(withSentence({ ...sentence, onclick: 'alert(1)' })), false);
+    assert.equal(isToPanel({ type: 'summary', summary: { ...summary, shares: [{ heading: 'x', documentShare: 2, summaryShare: 0, label: '' }] } }), false);
+    assert.equal(isToPanel({ type: 'summary', summary: { ...summary, figures: { words: 1 } } }), false);
     assert.equal(isToPanel({ type: 'summary', summary: '<img src=x onerror=alert(1)>' }), false);
+    assert.equal(isToPanel({ type: 'progress', progress: { ...progress, stage: 'dancing' } }), false);
     assert.equal(isToPanel({ type: 'progress', progress: 'ranking' }), false);
-    assert.equal(isToPanel({ type: 'progress', progress: { task: 'summarize' } }), false);
+    assert.equal(isToPanel({ type: 'text', text: { ...PANEL_TEXT, note: 5 } }), false);
+    assert.equal(isToPanel({ type: 'busy', busy: true }), false);
     assert.equal(isToPanel({ type: 'html', html: '<b>x</b>' }), false);
     assert.equal(isToPanel(null), false);
+  });
+
+  it('never throws on anything (property)', () => {
+    fc.assert(
+      fc.property(fc.anything(), fc.constantFrom('summary', 'controls', 'text', 'progress', 'notice', 'abstractCheck', 'announce', 'clear'), (junk, type) => {
+        isToPanel(junk);
+        isToPanel({ type, summary: junk, controls: junk, text: junk, progress: junk, check: junk, kind: junk });
+      }),
+      { numRuns: 2000 },
+    );
   });
 });
 

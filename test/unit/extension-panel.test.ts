@@ -8,17 +8,18 @@ import { planInsertion, summaryForClipboard } from '../../src/extension/summary-
 import { convergenceOf, describePick } from '../../src/extension/hover-text';
 import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';
 import { FERRY_TEXT, ferrySummary } from './extension-fixture';
+import { wordingFor } from '../../src/extension/wording';
 
 describe('extension panel model', () => {
   it('groups sentences by balance unit, in document order, with sub-section paths and warnings', () => {
     const panel = buildPanelSummary(ferrySummary(), 7, 'ferry.md', 'document');
     assert.equal(panel.id, 7);
     assert.deepEqual(
-      panel.groups.map((g) => [g.heading, g.sentences.map((s) => s.sentence), g.summaryShare]),
+      panel.groups.map((g) => [g.heading, g.sentences.map((s) => s.sentence), g.share]),
       [
-        ['Night Ferry Timetable', [0], 0.25],
-        ['Fares', [3, 4], 0.5],
-        ['Safety', [5], 0.25],
+        ['Night Ferry Timetable', [0], '25% of the summary'],
+        ['Fares', [3, 4], '50% of the summary'],
+        ['Safety', [5], '25% of the summary'],
       ],
     );
     const discounts = panel.groups[1]!.sentences[1]!;
@@ -30,7 +31,42 @@ describe('extension panel model', () => {
       flagged.warnings[0]!.repairs.map((r) => r.label),
       ['Add the context sentence', 'Swap for the next best sentence', 'Show without “However,”'],
     );
-    assert.deepEqual(panel.figures, { ...ferrySummary().stats });
+    const { stats } = ferrySummary();
+    assert.deepEqual(panel.figures, {
+      words: `${stats.wordsOut} of ${stats.wordsIn} words`,
+      reading: 'reads in about 1 min (document about 1 min)',
+      sections: `covers ${stats.sectionsCovered} of ${stats.sectionsWithContent} sections`,
+      sentences: `${stats.sentencesOut} of ${stats.sentencesIn} sentences`,
+    });
+    assert.equal(panel.changed, 0, 'a first summary marks nothing as new');
+    assert.ok(panel.groups.every((g) => g.sentences.every((s) => !s.isNew)));
+  });
+
+  it('words the figures for the display language, with thousands separators', () => {
+    const summary = ferrySummary();
+    const big = { ...summary, stats: { ...summary.stats, wordsIn: 2444, wordsOut: 151, minutesToRead: 0.66, documentMinutesToRead: 39.6 } };
+    assert.equal(buildPanelSummary(big, 1, 'x', 'document').figures.words, '151 of 2,444 words');
+    assert.equal(buildPanelSummary(big, 1, 'x', 'document').figures.reading, 'reads in about 1 min (document about 40 min)');
+    assert.equal(buildPanelSummary(big, 1, 'x', 'document', { wording: wordingFor('de') }).figures.words, '151 of 2.444 words');
+  });
+
+  it('marks picks that were not in the previous summary of the document as new', () => {
+    const summary = ferrySummary();
+    const previous = new Set(summary.sentences.slice(1).map((p) => p.text));
+    const panel = buildPanelSummary(summary, 2, 'ferry.md', 'document', { previousPicks: previous });
+    assert.equal(panel.changed, 1);
+    assert.deepEqual(
+      panel.groups.flatMap((g) => g.sentences.filter((s) => s.isNew).map((s) => s.sentence)),
+      [summary.sentences[0]!.sentence],
+    );
+  });
+
+  it('says why a sentence was picked in words, with the numbers apart', () => {
+    const panel = buildPanelSummary(ferrySummary(), 1, 'ferry.md', 'document');
+    const first = panel.groups[0]!.sentences[0]!;
+    assert.match(first.why, /^Opening sentence of “Night Ferry Timetable”; shares the key terms “ferry” with the title; ranked 1st of 6 sentences\.$/);
+    assert.match(first.whyNumbers[0]!, /^rank 1 of 6, score 1\.000 \(blend\)$/);
+    assert.ok(first.whyNumbers.some((line) => line.startsWith('position: ')));
   });
 
   it('labels text before the first heading and puts a refusal first among the notices', () => {
@@ -91,8 +127,8 @@ function blocks(markdown: string): RootContent[] {
 describe('extension summary text: copy and insert', () => {
   it('inserts a Markdown document’s summary as a block right under its title (checked with mdast)', () => {
     const summary = ferrySummary();
-    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', 200, 'document');
-    assert.equal(plan.placement, 'underTitle');
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', { kind: 'heading', section: 1 });
+    assert.equal(plan.placement, 'underHeading');
     assert.equal(plan.offset, '# Night Ferry Timetable'.length);
     const result = FERRY_TEXT.slice(0, plan.offset) + plan.text + FERRY_TEXT.slice(plan.offset);
     // The rest of the document is unchanged, byte for byte.
@@ -111,7 +147,7 @@ describe('extension summary text: copy and insert', () => {
 
   it('follows the document’s CRLF line endings', () => {
     const crlf = FERRY_TEXT.replace(/\n/g, '\r\n');
-    const plan = planInsertion(ferrySummary(crlf), crlf, 'markdown', 0, 'document');
+    const plan = planInsertion(ferrySummary(crlf), crlf, 'markdown', { kind: 'heading', section: 1 });
     assert.ok(plan.text.includes('\r\n'));
     assert.ok(!/[^\r]\n/.test(plan.text), 'no bare LF');
   });
@@ -119,11 +155,11 @@ describe('extension summary text: copy and insert', () => {
   it('puts a selection’s summary, and plain text, at the cursor, on a line of its own', () => {
     const summary = ferrySummary();
     const cursor = FERRY_TEXT.indexOf('returns');
-    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', cursor, 'selection');
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', { kind: 'cursor', offset: cursor });
     assert.equal(plan.placement, 'atCursor');
     assert.equal(plan.offset, cursor);
     assert.ok(plan.text.startsWith('\n\n'));
-    const plain = planInsertion(summary, FERRY_TEXT, 'plaintext', 0, 'document');
+    const plain = planInsertion(summary, FERRY_TEXT, 'plaintext', { kind: 'cursor', offset: 0 });
     assert.equal(plain.offset, 0);
     assert.match(plain.text, /^Summary \(extractive/);
     assert.equal(plain.text.split('\n').filter((line) => line.startsWith('- ')).length, summary.sentences.length);
@@ -132,7 +168,7 @@ describe('extension summary text: copy and insert', () => {
   it('copies Markdown whose sentence text cannot turn into markup (checked with mdast)', () => {
     const hostile = '<img src=x onerror=alert(1)> *not emphasis* [link](javascript:alert(1))';
     const summary = ferrySummary(FERRY_TEXT, { sentence: hostile });
-    const markdown = summaryForClipboard(summary);
+    const markdown = summaryForClipboard(summary, null, 'markdown');
     // External reference: micromark/mdast must see no HTML, emphasis or link nodes in the list items.
     const types = new Set<string>();
     const visit = (node: { type: string; children?: unknown[] }): void => {
@@ -146,25 +182,26 @@ describe('extension summary text: copy and insert', () => {
 });
 
 describe('extension hover text', () => {
-  it('shows rank, score and the strongest features, escaped as Markdown', () => {
+  it('says why in words first, then the numbers (rank, score, strongest feature first), escaped as Markdown', () => {
     const pick = ferrySummary().sentences[1]!;
-    const text = describePick(pick, 6, 'blend');
-    assert.match(text, /rank 2 of 6/);
-    assert.match(text, /score 0\.500/);
-    assert.ok(text.indexOf('position') < text.indexOf('heading'), 'largest feature first');
-    assert.ok(text.includes('heading\\|overlap'), 'a pipe in a feature name cannot break the table');
+    const text = describePick(pick, ferrySummary());
+    assert.match(text, /ranked 2nd of 6 sentences/);
+    assert.match(text, /rank 2 of 6, score 0\.500 \(blend\)/);
+    assert.ok(text.indexOf('ranked 2nd') < text.indexOf('score 0.500'), 'words before numbers');
+    assert.ok(text.indexOf('position:') < text.indexOf('heading'), 'largest feature first');
+    assert.ok(text.includes('heading\\|overlap'), 'a pipe in a feature name is escaped');
   });
 
   it('says when a sentence came from a repair instead of a ranking', () => {
     const pick = { ...ferrySummary().sentences[0]!, rank: 0 };
-    assert.match(describePick(pick, 6, 'blend'), /added to the summary by a repair/);
+    assert.match(describePick(pick, ferrySummary()), /Added by a repair/);
   });
 
   it('reports whether the ranking converged, and in how many iterations, when the summary says', () => {
     const pick = ferrySummary().sentences[1]!;
-    assert.match(describePick(pick, 6, 'lexrank', { converged: true, iterations: 23 }), /Ranking converged after 23 iterations\./);
-    assert.match(describePick(pick, 6, 'textrank', { converged: false, iterations: 100 }), /did not converge within 100 iterations: the scores are approximate/);
-    assert.doesNotMatch(describePick(pick, 6, 'blend'), /converge/, 'nothing is claimed without the figure');
+    assert.match(describePick(pick, ferrySummary(), undefined, { converged: true, iterations: 23 }), /Ranking converged after 23 iterations\./);
+    assert.match(describePick(pick, ferrySummary(), undefined, { converged: false, iterations: 100 }), /did not converge within 100 iterations: the scores are approximate/);
+    assert.doesNotMatch(describePick(pick, ferrySummary()), /converge/, 'nothing is claimed without the figure');
     assert.equal(convergenceOf(ferrySummary()), undefined, 'a ranking without an iterative method reports nothing');
     assert.deepEqual(convergenceOf({ ...ferrySummary(), ranking: { converged: false, iterations: 7 } }), { converged: false, iterations: 7 });
   });

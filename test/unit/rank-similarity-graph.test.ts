@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import fc from 'fast-check';
-import { linkCounts, similarityGraph, termsOverBudget, type CsrGraph } from '../../src/core/rank/similarity-graph';
+import { commonTerms, linkCounts, similarityGraph, SPARSE_GRAPH_DEFAULTS, type CsrGraph } from '../../src/core/rank/similarity-graph';
 import { buildTermIndex, dot, inverseFrequency, invertedIndex, presenceVectors, tfidfVectors } from '../../src/core/vectors';
 
 /** Edge map {"i,j": w} of a CSR graph, checking symmetry, row order and self-loops on the way. */
@@ -44,25 +44,24 @@ describe('rank/similarity-graph', () => {
     );
   });
 
-  it('skips the most widespread terms only when the pair-visit budget is exceeded', () => {
-    // sf = 4, 3, 2, 1 → visits 6, 3, 1, 0 (total 10).
+  it('flags the terms held by more sentences than the proposing limit', () => {
+    // sf = 4, 3, 2, 1.
     const index = buildTermIndex([['a', 'b', 'c', 'd'], ['a', 'b', 'c'], ['a', 'b'], ['a']]);
     const { offsets } = invertedIndex(index.counts, 4);
-    assert.deepEqual(Array.from(termsOverBudget(offsets, 10)), [0, 0, 0, 0]);
-    assert.deepEqual(Array.from(termsOverBudget(offsets, 9)), [1, 0, 0, 0]);
-    assert.deepEqual(Array.from(termsOverBudget(offsets, 4)), [1, 0, 0, 0]);
-    assert.deepEqual(Array.from(termsOverBudget(offsets, 3)), [1, 1, 0, 0]);
-    assert.deepEqual(Array.from(termsOverBudget(offsets, 0)), [1, 1, 1, 0], 'a term held by one sentence visits no pair');
+    assert.deepEqual(Array.from(commonTerms(offsets, 4).flags), [0, 0, 0, 0]);
+    assert.deepEqual(Array.from(commonTerms(offsets, 3).flags), [1, 0, 0, 0]);
+    assert.deepEqual(Array.from(commonTerms(offsets, 1).flags), [1, 1, 1, 0]);
+    assert.equal(commonTerms(offsets, 0).count, 4);
   });
 
-  it('keeps exact weights under the visit budget and loses only pairs linked by skipped terms alone (property)', () => {
+  it('keeps exact weights and loses only pairs linked by common terms alone (property)', () => {
     fc.assert(
-      fc.property(termLists(8, 20), fc.integer({ min: 0, max: 40 }), (lists, maxPairVisits) => {
+      fc.property(termLists(8, 20), fc.integer({ min: 0, max: 8 }), (lists, maxProposingFrequency) => {
         const index = buildTermIndex(lists);
         const presence = presenceVectors(index);
-        const skipped = termsOverBudget(invertedIndex(presence, index.vocabulary.size).offsets, maxPairVisits);
-        const edges = edgeMap(similarityGraph(presence, index.vocabulary.size, product, 0, { maxPairVisits, maxLinks: 1e9 }));
-        const proposes = (t: string) => skipped[index.vocabulary.get(t)!] === 0;
+        const common = commonTerms(invertedIndex(presence, index.vocabulary.size).offsets, maxProposingFrequency).flags;
+        const edges = edgeMap(similarityGraph(presence, index.vocabulary.size, product, 0, { maxProposingFrequency, maxNeighbours: 1e9 }));
+        const proposes = (t: string) => common[index.vocabulary.get(t)!] === 0;
         for (let i = 0; i < lists.length; i++) {
           for (let j = i + 1; j < lists.length; j++) {
             const shared = [...new Set(lists[i])].filter((t) => lists[j]!.includes(t));
@@ -74,17 +73,48 @@ describe('rank/similarity-graph', () => {
     );
   });
 
-  it('keeps only the strongest links when there are more than maxLinks', () => {
-    // Shared-term counts: (0,1) = 3, (0,2) = 2, (1,2) = 2, (2,3) = 1.
-    const index = buildTermIndex([['a', 'b', 'c'], ['a', 'b', 'c', 'x'], ['a', 'b', 'y'], ['y']]);
+  it('keeps every link that is among the k strongest of one of its ends, and no other (property)', () => {
+    fc.assert(
+      fc.property(termLists(10, 30), fc.integer({ min: 0, max: 6 }), (lists, maxNeighbours) => {
+        const index = buildTermIndex(lists);
+        const vectors = tfidfVectors(index, inverseFrequency(index, 'sentence'));
+        const graph = similarityGraph(vectors, index.vocabulary.size, product, 0, { maxNeighbours, maxProposingFrequency: 1e9 });
+        const edges = edgeMap(graph);
+        const n = lists.length;
+        // Each sentence's k strongest partners by the dense definition (ties: the earlier sentence).
+        const strongest = (i: number) =>
+          Array.from({ length: n }, (_, j) => j)
+            .filter((j) => j !== i && dot(vectors[i]!, vectors[j]!) > 0)
+            .sort((x, y) => dot(vectors[i]!, vectors[y]!) - dot(vectors[i]!, vectors[x]!) || x - y)
+            .slice(0, maxNeighbours);
+        const top = Array.from({ length: n }, (_, i) => new Set(strongest(i)));
+        for (let i = 0; i < n; i++) {
+          for (let j = 0; j < n; j++) {
+            if (i === j) continue;
+            const expected = top[i]!.has(j) || top[j]!.has(i);
+            assert.equal(edges.has(`${i},${j}`), expected, `link ${i}-${j}`);
+            if (expected) assert.ok(Math.abs(edges.get(`${i},${j}`)! - dot(vectors[i]!, vectors[j]!)) < 1e-12);
+          }
+        }
+        assert.ok(edges.size <= 2 * n * maxNeighbours, 'at most n·k links');
+      }),
+      { numRuns: 80, seed: 7 },
+    );
+  });
+
+  it('grows linearly: identical sentences keep k partners each, common terms propose nothing', () => {
+    const sentences = Array.from({ length: 500 }, () => ['grid', 'cell', 'storage']);
+    const index = buildTermIndex(sentences);
     const presence = presenceVectors(index);
-    const build = (maxLinks: number) => edgeMap(similarityGraph(presence, index.vocabulary.size, product, 0, { maxPairVisits: 1e9, maxLinks }));
-    assert.equal(build(4).size, 8);
-    assert.deepEqual([...build(3).keys()].sort(), ['0,1', '0,2', '1,0', '1,2', '2,0', '2,1']);
-    assert.deepEqual([...build(1).keys()].sort(), ['0,1', '1,0']);
-    // The two links of weight 2 are tied: with room for 2 links neither is kept over the other.
-    assert.deepEqual([...build(2).keys()].sort(), ['0,1', '1,0']);
-    assert.equal(build(0).size, 0);
+    const limited = similarityGraph(presence, index.vocabulary.size, product, 0, { maxNeighbours: 8, maxProposingFrequency: 1e9 });
+    // Ties keep the earlier sentences: every node links to 0..7 (or to 0..8 without itself), and
+    // those eight keep links to everyone who kept them.
+    assert.ok(limited.targets.length <= 2 * 500 * 8);
+    assert.deepEqual(Array.from(limited.targets.subarray(limited.offsets[100]!, limited.offsets[101]!)), [0, 1, 2, 3, 4, 5, 6, 7]);
+    // 500 sentences share every term, above a proposing limit of 200: no pair is proposed.
+    const pruned = similarityGraph(presence, index.vocabulary.size, product, 0, { maxNeighbours: 8, maxProposingFrequency: 200 });
+    assert.equal(pruned.targets.length, 0);
+    assert.ok(SPARSE_GRAPH_DEFAULTS.maxNeighbours >= 1 && SPARSE_GRAPH_DEFAULTS.maxProposingFrequency > SPARSE_GRAPH_DEFAULTS.maxNeighbours);
   });
 
   it('drops pairs at or below minSimilarity and counts links per node', () => {

@@ -20,12 +20,12 @@ import { claimReport } from './claim-report';
 import { checkedText } from './consistency/claim-tokens';
 import type { BodyFacts, Evidence } from './consistency/detector';
 import { runDetectors } from './consistency/index';
-import { quantitiesIn } from './consistency/quantities';
+import { numbersInText, quantitiesIn } from './consistency/quantities';
 import { identifiersIn } from './consistency/identifiers';
 import { CopyIndex } from './copy';
 import { contentCoverage, sectionCoverage } from './coverage';
 import { termSpace } from './related-terms';
-import { alignClaim, normalizedTerms, SUPPORT_DEFAULTS, type Alignment } from './support';
+import { alignClaim, normalizedTerms, SUPPORT_DEFAULTS, type Alignment, type WeightedTerms } from './support';
 
 export const ABSTRACT_CHECK_DEFAULTS: AbstractThresholds = {
   supported: SUPPORT_DEFAULTS.supported,
@@ -84,36 +84,68 @@ function readBody(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excl
   const abstractSpans = doc.sections.filter((s) => abstractSections[s.index] === 1 && s.parent !== null && abstractSections[s.parent] !== 1).map((s) => s.span);
   let outside = doc.text;
   for (const span of abstractSpans.sort((a, b) => b.start - a.start)) outside = outside.slice(0, span.start - doc.baseOffset) + '\n' + outside.slice(span.end - doc.baseOffset);
-  return { sentences, terms, termLists, evidence, facts: { numbers, lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
+  return { sentences, terms, termLists, evidence, facts: { numbers, textNumbers: numbersInText(outside.toLowerCase()), lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
 }
 
 function isClaim(sentence: AbstractSentence, terms: readonly string[]): boolean {
   return new Set(terms).size >= MIN_CLAIM_TERMS && !/:\s*$/u.test(sentence.text);
 }
 
-/** Null when the document has no prose outside the abstract. */
-export function matchAbstract(
-  analyzed: AnalyzedDocument,
-  located: LocatedAbstract,
-  thresholds: AbstractThresholds,
-  excludeHeadings: readonly string[],
-): AbstractMatch | null {
-  const { language } = analyzed;
-  const body = readBody(analyzed, located.sections, excludeHeadings);
-  if (body.sentences.length === 0) return null;
+/**
+ * What the check reads from the body once, whatever abstract is checked against it: the body's
+ * sentences, their tf·idf weights, the document's term space and the copy index.
+ */
+export interface BodyModel {
+  readonly body: CheckBody;
+  readonly index: ReturnType<typeof buildTermIndex>;
+  readonly idf: Float64Array;
+  readonly bodyWeights: readonly WeightedTerms[];
+  readonly space: ReturnType<typeof termSpace>;
+  readonly copies: CopyIndex;
+}
 
-  const claimTerms = located.sentences.map((s) => normalizedTerms(s.wordList, language));
-  // One idf over body and abstract, so a claim term the body never uses weighs the most.
-  const index = buildTermIndex([...body.termLists, ...claimTerms]);
+/** Null when the document has no prose outside the abstract. */
+export function bodyModel(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excludeHeadings: readonly string[]): BodyModel | null {
+  const body = readBody(analyzed, abstractSections, excludeHeadings);
+  if (body.sentences.length === 0) return null;
+  // idf over the body's sentences: a claim term the body never uses gets the largest weight.
+  const index = buildTermIndex(body.termLists);
   const idf = inverseFrequency(index, 'smoothed');
-  const weighted = (terms: readonly string[]) => {
+  const bodyWeights = body.termLists.map((terms) => {
     const weights = new Map<string, number>();
     for (const t of terms) weights.set(t, (weights.get(t) ?? 0) + idf[index.vocabulary.get(t)!]!);
     return weights;
-  };
-  const bodyWeights = body.termLists.map(weighted);
+  });
   const space = termSpace(body.termLists);
   const copies = new CopyIndex(body.sentences.map((i) => analyzed.words[i]!));
+  return { body, index, idf, bodyWeights, space, copies };
+}
+
+/** Body sentences whose words include `term`, closest to the claim first. */
+function usingTerm(model: BodyModel, alignment: Alignment, term: string, n: number): Evidence[] {
+  const positions: number[] = [];
+  model.body.evidence.forEach((e, p) => {
+    if (e.checked.terms.has(term)) positions.push(p);
+  });
+  return positions
+    .sort((a, b) => alignment.single[b]! - alignment.single[a]! || a - b)
+    .slice(0, n)
+    .map((p) => model.body.evidence[p]!);
+}
+
+export function matchAbstract(analyzed: AnalyzedDocument, located: LocatedAbstract, thresholds: AbstractThresholds, model: BodyModel): AbstractMatch {
+  const { language } = analyzed;
+  const { body, index, idf, bodyWeights, space, copies } = model;
+  const claimTerms = located.sentences.map((s) => normalizedTerms(s.wordList, language));
+  const unseen = 1 + Math.log(Math.max(1, body.sentences.length));
+  const weighted = (terms: readonly string[]) => {
+    const weights = new Map<string, number>();
+    for (const t of terms) {
+      const id = index.vocabulary.get(t);
+      weights.set(t, (weights.get(t) ?? 0) + (id === undefined ? unseen : idf[id]!));
+    }
+    return weights;
+  };
   const settings = { ...SUPPORT_DEFAULTS, supported: thresholds.supported };
 
   const alignments: Alignment[] = [];
@@ -136,6 +168,7 @@ export function matchAbstract(
           frame: alignment.frame === null ? null : evidenceAt(alignment.frame),
           body: body.facts,
           language,
+          using: (term, n) => usingTerm(model, alignment, term, n),
         })
       : [];
     const copy = copies.match(sentence.wordList);

@@ -16,8 +16,9 @@ import { OptionsError, checkOptions, type SummaryOptions, type SummaryRequestOpt
 import { finishSummary, prepareDocument, rankPrepared, type PreparedDocument } from '../summarize';
 import type { DocumentFormat } from '../types';
 import { locateAbstract, type LocatedAbstract } from './abstract-locator';
-import { ABSTRACT_CHECK_DEFAULTS, matchAbstract } from './abstract-match';
+import { ABSTRACT_CHECK_DEFAULTS, bodyModel, matchAbstract, type BodyModel } from './abstract-match';
 import type { AbstractCheck, AbstractReport, AbstractRougeComparison, AbstractSentenceCheck, AbstractSource, AbstractThresholds } from './abstract-report';
+import type { RankResult } from '../types';
 import { compareWithSummary } from './abstract-rouge';
 
 export type { AbstractReport, AbstractSource } from './abstract-report';
@@ -33,24 +34,46 @@ export interface CheckAbstractRequest extends SummaryRequestOptions {
 
 /** Throws OptionsError when an option is invalid, as `summarize` does. */
 export function checkAbstract(documentText: string, request: CheckAbstractRequest = {}): AbstractReport {
+  const { abstract, ...rest } = request;
+  return abstractChecker(documentText, rest)(abstract);
+}
+
+/**
+ * Reads a document once and checks any number of abstracts against it (the editor re-checking
+ * after an edit of a separate abstract, the benchmark's perturbed copies): the parse, the body's
+ * weights, its term space and the ranking behind the comparison summary are made once.
+ * Throws OptionsError when an option is invalid.
+ */
+export function abstractChecker(documentText: string, request: Omit<CheckAbstractRequest, 'abstract'> = {}): (abstract?: AbstractSource) => AbstractReport {
   const thresholds = { ...ABSTRACT_CHECK_DEFAULTS, ...validThresholds(request.thresholds) };
-  const { abstract, thresholds: _thresholds, ...summaryRequest } = request;
+  const { thresholds: _thresholds, ...summaryRequest } = request;
   const preparation = prepareDocument(documentText, summaryRequest);
-  if (!preparation.ok) return { ok: false, reason: 'refused', error: preparation.refused.refused ?? 'The document was not read.' };
+  if (!preparation.ok) {
+    const refused: AbstractReport = { ok: false, reason: 'refused', error: preparation.refused.refused ?? 'The document was not read.' };
+    return () => refused;
+  }
   const { prepared } = preparation;
-  const { analyzed, options } = prepared;
+  const models = new Map<number, BodyModel | null>();
+  let ranked: RankResult | null = null;
+  const ranking = () => (ranked ??= rankPrepared(prepared));
+  return (abstract) => {
+    const located = locateAbstract(prepared.analyzed, abstract, prepared.analyzed.language);
+    if ('error' in located) return { ok: false, reason: located.reason, error: located.error };
+    const key = located.section ?? -1;
+    if (!models.has(key)) models.set(key, bodyModel(prepared.analyzed, located.sections, prepared.options.excludeHeadings));
+    const model = models.get(key)!;
+    if (model === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
+    return report(prepared, located, matchAbstract(prepared.analyzed, located, thresholds, model), thresholds, ranking);
+  };
+}
 
-  const located = locateAbstract(analyzed, abstract, analyzed.language);
-  if ('error' in located) return { ok: false, reason: located.reason, error: located.error };
-
-  const match = matchAbstract(analyzed, located, thresholds, options.excludeHeadings);
-  if (match === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
+function report(prepared: PreparedDocument, located: LocatedAbstract, match: ReturnType<typeof matchAbstract>, thresholds: AbstractThresholds, ranking: () => RankResult): AbstractCheck {
+  const { analyzed } = prepared;
   const { sentences, sections, unjudged, content } = match;
-
   const notices: string[] = [];
-  const rouge = rougeComparison(prepared, located, notices);
+  const rouge = rougeComparison(prepared, located, notices, ranking);
 
-  const result: AbstractCheck = {
+  return {
     ok: true,
     language: analyzed.language,
     abstract: {
@@ -74,7 +97,6 @@ export function checkAbstract(documentText: string, request: CheckAbstractReques
     rouge,
     notices,
   };
-  return result;
 }
 
 /** The one rule, said the same way by every surface. */
@@ -98,7 +120,7 @@ function validThresholds(partial: Partial<AbstractThresholds> | undefined): Part
 }
 
 /** Tersely's own summary at the abstract's length, compared with the abstract both ways. */
-function rougeComparison(prepared: PreparedDocument, located: LocatedAbstract, notices: string[]): AbstractRougeComparison | null {
+function rougeComparison(prepared: PreparedDocument, located: LocatedAbstract, notices: string[], ranking: () => RankResult): AbstractRougeComparison | null {
   const { analyzed } = prepared;
   const words = located.sentences.reduce((sum, s) => sum + s.words, 0);
   // The summary must not simply copy the abstract back, so the abstract section is left out.
@@ -107,7 +129,7 @@ function rougeComparison(prepared: PreparedDocument, located: LocatedAbstract, n
   if (checked.problems.length > 0) throw new OptionsError(checked.problems);
   const options: SummaryOptions = { ...prepared.options, budget: checked.options.budget, minSentences: 1, excludeHeadings };
   // Reuses the parse already made: summarize() would parse the whole document a second time.
-  const summary = finishSummary(prepared, rankPrepared(prepared), options);
+  const summary = finishSummary(prepared, ranking(), options);
   if (summary.sentences.length === 0) {
     notices.push('No comparison summary: the document has no sentences outside the abstract to pick.');
     return null;

@@ -4,14 +4,23 @@
  * one is reported with the option's name and the reason, never clamped or replaced in silence.
  */
 import { loadModel, modelMismatch, type SentenceModel } from '../rank/trained/sentence-model';
+import { checkTemplates } from '../select/template-text';
+import type { DocumentFormat, Span } from '../types';
 import { SUMMARY_OPTIONS, type SummaryOptionKey, type SummaryOptionValues } from './schema';
 
 export interface SummaryOptions extends SummaryOptionValues {
   /** A validated trained sentence model for the trained methods; the shipped one of each kind when absent. */
   readonly model?: SentenceModel;
+  /** The team's document templates (their text): sentences found in them are never picked. */
+  readonly templates?: readonly { readonly text: string; readonly format: DocumentFormat }[];
+  /**
+   * The previous summary's picks (their texts, or their spans in the current document), for live
+   * mode: they are kept unless a new sentence is clearly better (hysteresis.ts).
+   */
+  readonly previous?: readonly (string | Span)[];
 }
 
-export type SummaryRequestOptions = { readonly [K in SummaryOptionKey]?: unknown } & { readonly model?: unknown };
+export type SummaryRequestOptions = { readonly [K in SummaryOptionKey]?: unknown } & { readonly model?: unknown; readonly templates?: unknown; readonly previous?: unknown };
 
 export interface OptionProblem {
   /** The option's key in the schema (`budget`, `method`, …), or `model`. */
@@ -63,7 +72,35 @@ export function checkOptions(partial: SummaryRequestOptions = {}): CheckedOption
       else problems.push({ key: 'model', reason: mismatch });
     }
   }
+  if (partial.templates !== undefined) {
+    try {
+      options.templates = checkTemplates(partial.templates);
+    } catch (error) {
+      problems.push({ key: 'templates', reason: (error as Error).message });
+    }
+  }
+  if (partial.previous !== undefined) {
+    const previous = checkPrevious(partial.previous);
+    if (typeof previous === 'string') problems.push({ key: 'previous', reason: previous });
+    else options.previous = previous;
+  }
   return { options: options as unknown as SummaryOptions, problems };
+}
+
+/** At most this many previous picks (a summary has far fewer; the bound keeps a message cheap). */
+const MAX_PREVIOUS = 10_000;
+
+function checkPrevious(value: unknown): readonly (string | Span)[] | string {
+  if (!Array.isArray(value)) return 'expected a list of sentence texts or spans';
+  if (value.length > MAX_PREVIOUS) return `has ${value.length} entries, more than ${MAX_PREVIOUS}`;
+  const out: (string | Span)[] = [];
+  for (const [k, entry] of value.entries()) {
+    if (typeof entry === 'string') out.push(entry);
+    else if (typeof entry === 'object' && entry !== null && Number.isSafeInteger((entry as Span).start) && Number.isSafeInteger((entry as Span).end) && (entry as Span).start >= 0 && (entry as Span).end >= (entry as Span).start) {
+      out.push({ start: (entry as Span).start, end: (entry as Span).end });
+    } else return `entry ${k + 1} must be a sentence's text or a span { start, end }`;
+  }
+  return out;
 }
 
 /** Complete options, or an OptionsError that names every invalid value. */

@@ -85,7 +85,7 @@ export const SUMMARY_OPTIONS = {
   }),
   method: define<RankerName>({
     kind: methodKind,
-    default: 'blend',
+    default: 'maxent',
     description: 'How sentences are scored.',
     setting: { key: 'method', order: 3 },
     cli: { flag: 'method', placeholder: 'NAME', commands: ['summarize'] },
@@ -172,6 +172,12 @@ export const SUMMARY_OPTIONS = {
     setting: { key: 'maxDocumentSize', order: 14, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check', 'train'] },
   }),
+  focus: define({
+    kind: textKind(500),
+    default: '',
+    description: 'A question or a few words to focus the summary on: only sentences that use its words are picked, ranked towards it; empty for a general summary.',
+    cli: { flag: 'focus', placeholder: 'TEXT', commands: ['summarize'] },
+  }),
   mmrLambda: define({
     kind: numberKind(0, 1),
     // Carbonell & Goldstein (1998) leave λ to the application; 0.7 favours relevance while still
@@ -195,6 +201,12 @@ export const HOST_OPTIONS = {
     description: 'A trained sentence model (JSON from `tersely train`) for the trained method; empty for the built-in one. Relative paths start at the first workspace folder.',
     setting: { key: 'modelFile', order: 16, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
+  }),
+  problemsView: define({
+    kind: booleanKind,
+    default: false,
+    description: 'Also list the summary’s notes (sentences that may not stand alone) and abstract-check findings in the Problems view. They always show in the panel and as a faint mark in the editor.',
+    setting: { key: 'problemsView', order: 17 },
   }),
 } as const;
 

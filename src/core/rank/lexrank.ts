@@ -14,16 +14,16 @@
  * One deviation: the paper's matrix keeps the diagonal (every sentence resembles itself with
  * cosine 1). We drop it, so a sentence that resembles nothing else is a dangling node and spreads
  * its score instead of keeping it — only other sentences vouch for a sentence.
- * The graph is built sparsely, within the budgets documented in similarity-graph.ts.
+ * The graph is built sparsely, within the limits documented in similarity-graph.ts (each sentence keeps its strongest neighbours).
  */
 import type { AnalyzedDocument, RankResult } from '../types';
 import { pageRank, PAGERANK_DEFAULTS, trivialRanking, type PageRankSettings } from './power-iteration';
-import { GRAPH_BUDGET_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphBudget } from './similarity-graph';
+import { SPARSE_GRAPH_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphLimits } from './similarity-graph';
 import { sentenceVectorsOf, termIndexOf } from '../vectors';
 
 export type LexRankVariant = 'threshold' | 'continuous';
 
-export interface LexRankSettings extends PageRankSettings, GraphBudget {
+export interface LexRankSettings extends PageRankSettings, GraphLimits {
   readonly variant: LexRankVariant;
   /** Cosine a link must exceed in the threshold variant; 0.1 is the paper's best setting for DUC 2004. */
   readonly threshold: number;
@@ -33,7 +33,7 @@ export const LEXRANK_DEFAULTS: LexRankSettings = {
   variant: 'threshold',
   threshold: 0.1,
   ...PAGERANK_DEFAULTS,
-  ...GRAPH_BUDGET_DEFAULTS,
+  ...SPARSE_GRAPH_DEFAULTS,
 };
 
 export interface LexRankOptions {

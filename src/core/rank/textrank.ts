@@ -11,14 +11,14 @@
  *
  * Guard: two one-term sentences sharing their term would divide by log 1 + log 1 = 0. The
  * denominator is floored at ln 2 (its value for a one-term and a two-term sentence).
- * The graph is built sparsely, within the budgets documented in similarity-graph.ts.
+ * The graph is built sparsely, within the limits documented in similarity-graph.ts (each sentence keeps its strongest neighbours).
  */
 import type { AnalyzedDocument, RankResult } from '../types';
 import { pageRank, PAGERANK_DEFAULTS, trivialRanking, type PageRankSettings } from './power-iteration';
-import { GRAPH_BUDGET_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphBudget } from './similarity-graph';
+import { SPARSE_GRAPH_DEFAULTS, linkCounts, similarityGraph, type CsrGraph, type GraphLimits } from './similarity-graph';
 import { presenceVectors, termIndexOf } from '../vectors';
 
-export interface TextRankSettings extends PageRankSettings, GraphBudget {
+export interface TextRankSettings extends PageRankSettings, GraphLimits {
   /** Smallest allowed denominator of the overlap similarity. */
   readonly minDenominator: number;
 }
@@ -26,7 +26,7 @@ export interface TextRankSettings extends PageRankSettings, GraphBudget {
 export const TEXTRANK_DEFAULTS: TextRankSettings = {
   minDenominator: Math.LN2,
   ...PAGERANK_DEFAULTS,
-  ...GRAPH_BUDGET_DEFAULTS,
+  ...SPARSE_GRAPH_DEFAULTS,
 };
 
 export interface TextRankOptions {

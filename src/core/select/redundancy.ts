@@ -10,6 +10,8 @@ import { invertedIndex, type InvertedIndex, type SparseVector } from '../vectors
 
 export class RedundancyTracker {
   private readonly maxSim: Float64Array;
+  /** Bumped whenever a sentence's redundancy rises, so a lazy selector knows what to re-evaluate. */
+  private readonly changes: Uint32Array;
   private readonly accumulator: Float64Array;
   private readonly postings: InvertedIndex;
 
@@ -18,6 +20,7 @@ export class RedundancyTracker {
     vocabularySize: number,
   ) {
     this.maxSim = new Float64Array(vectors.length);
+    this.changes = new Uint32Array(vectors.length);
     this.accumulator = new Float64Array(vectors.length);
     this.postings = invertedIndex(vectors, vocabularySize);
   }
@@ -25,6 +28,11 @@ export class RedundancyTracker {
   /** Highest cosine similarity of `sentence` to any pick so far (0 before the first pick). */
   similarityToPicked(sentence: number): number {
     return this.maxSim[sentence] ?? 0;
+  }
+
+  /** How often `sentence`'s redundancy has risen so far. */
+  version(sentence: number): number {
+    return this.changes[sentence] ?? 0;
   }
 
   addPick(sentence: number): void {
@@ -43,7 +51,10 @@ export class RedundancyTracker {
     for (const other of touched) {
       // Rounding can push identical vectors a hair above 1.
       const similarity = Math.min(1, this.accumulator[other]! / (vector.norm * this.vectors[other]!.norm));
-      if (similarity > this.maxSim[other]!) this.maxSim[other] = similarity;
+      if (similarity > this.maxSim[other]!) {
+        this.maxSim[other] = similarity;
+        this.changes[other] = this.changes[other]! + 1;
+      }
       this.accumulator[other] = 0;
     }
   }

@@ -62,24 +62,28 @@ export function excludedSections(doc: ParsedDocument, excludeHeadings: readonly 
 }
 
 export interface Candidates {
-  /** Balance unit of each sentence, or -1 when it is not a candidate (excluded section, no words). */
+  /** Balance unit of each sentence, or -1 when it is not a candidate (excluded section, no words, barred). */
   readonly unitOf: Int32Array;
   /** Content words of each balance unit: the weight it gets in apportionment. */
   readonly unitWeights: Map<number, number>;
 }
 
-/** Which sentences may be picked, and the balance unit and weight each belongs to. */
+/**
+ * Which sentences may be picked, and the balance unit and weight each belongs to. `barred` marks
+ * sentences that are never summary lines (sentence-kinds.ts: placeholders, boilerplate, template text).
+ */
 export function candidateUnits(
   doc: ParsedDocument,
   wordCounts: readonly number[],
   options: { readonly balanceDepth: number; readonly excludeHeadings: readonly string[] },
+  barred?: readonly unknown[],
 ): Candidates {
   const units = balanceUnits(doc, options.balanceDepth);
   const excluded = excludedSections(doc, options.excludeHeadings);
   const unitOf = new Int32Array(doc.sentences.length);
   const unitWeights = new Map<number, number>();
   doc.sentences.forEach((sentence, i) => {
-    if (excluded[sentence.section] === 1 || wordCounts[i] === 0) {
+    if (excluded[sentence.section] === 1 || wordCounts[i] === 0 || (barred?.[i] ?? null) !== null) {
       unitOf[i] = -1;
       return;
     }

@@ -3,10 +3,15 @@
  * rank and the features behind the score; figures; each balance unit's share of document and summary.
  */
 import type { SummaryOptions } from '../options/resolve';
-import type { Candidates } from '../select/units';
+import type { SentenceKinds } from '../select/sentence-kinds';
+import { balanceUnits, excludedSections, type Candidates } from '../select/units';
+import { extractKeyPhrases } from '../keyphrases/textrank-keywords';
 import { sectionPath } from './sections';
 import type {
   AnalyzedDocument,
+  BarredKind,
+  LeftOutReason,
+  SectionLeftOut,
   PickedSentence,
   RankResult,
   SectionShare,
@@ -32,6 +37,10 @@ export interface ReportInput {
   /** Balance unit of each sentence (-1 = not a candidate) and each unit's content words. */
   readonly candidates: Candidates;
   readonly quotas: ReadonlyMap<number, number>;
+  /** Units the selector gave no seat, and why. */
+  readonly leftOut?: ReadonlyMap<number, LeftOutReason>;
+  /** Sentence classes (barred sentences are reported). */
+  readonly kinds?: SentenceKinds;
   /** Display text for sentences edited by a repair. */
   readonly edited?: ReadonlyMap<number, string>;
   readonly warnings?: readonly StandAloneWarning[];
@@ -84,6 +93,7 @@ export function describeSummary(input: ReportInput): Summary {
       quota: input.quotas.get(unit) ?? 0,
     }));
 
+  const { leftOut, barred } = leftOutSections(input, shares);
   const notices = [...(input.notices ?? [])];
   if (doc.sentences.length === 0) notices.push('No prose sentences were found (headings, code, tables and lists of links are not summarized).');
 
@@ -93,6 +103,7 @@ export function describeSummary(input: ReportInput): Summary {
     language: analyzed.language,
     sentences,
     shares,
+    keyPhrases: extractKeyPhrases(analyzed),
     stats: {
       wordsIn,
       wordsOut,
@@ -110,7 +121,40 @@ export function describeSummary(input: ReportInput): Summary {
     },
     warnings: input.warnings ?? [],
     notices,
+    leftOut,
+    barred,
   };
+}
+
+const LEFT_OUT_MESSAGES: Readonly<Record<LeftOutReason, string>> = {
+  belowQualityFloor: 'left out: no sentence here scores high enough to be worth a summary line',
+  onlyFragments: 'left out: only short fragments, lead-ins or links',
+  onlyBarred: 'left out: only placeholders, boilerplate or template text',
+};
+
+/** Sections with content that the summary leaves out on purpose, and the sentences barred outright. */
+function leftOutSections(input: ReportInput, shares: readonly SectionShare[]): { leftOut: SectionLeftOut[]; barred: { sentence: number; kind: BarredKind }[] } {
+  const { doc } = input.analyzed;
+  const heading = (unit: number) => (unit === 0 ? doc.title ?? '' : doc.sections[unit]?.heading ?? '');
+  const reasons = new Map<number, LeftOutReason>();
+  const picked = new Map(shares.map((share) => [share.section, share.picked]));
+  for (const [unit, reason] of input.leftOut ?? []) if ((picked.get(unit) ?? 0) === 0) reasons.set(unit, reason);
+  const barred: { sentence: number; kind: BarredKind }[] = [];
+  if (input.kinds) {
+    const units = balanceUnits(doc, input.options.balanceDepth).unitOfSection;
+    const excluded = excludedSections(doc, input.options.excludeHeadings);
+    input.kinds.barred.forEach((kind, i) => {
+      const sentence = doc.sentences[i]!;
+      if (kind === null || excluded[sentence.section] === 1) return;
+      barred.push({ sentence: i, kind });
+      const unit = units[sentence.section]!;
+      if (!picked.has(unit)) reasons.set(unit, 'onlyBarred');
+    });
+  }
+  const leftOut = [...reasons.entries()]
+    .sort((a, b) => a[0] - b[0])
+    .map(([section, reason]) => ({ section, heading: heading(section), reason, message: LEFT_OUT_MESSAGES[reason] }));
+  return { leftOut, barred };
 }
 
 /** 1-based rank of every candidate by score (ties broken by document order); 0 for non-candidates. */

@@ -43,8 +43,7 @@ describe('Tersely in the editor', function () {
     const started = performance.now();
     api = await extension.activate();
     console.log(`TIMING activation (as seen by the test): ${(performance.now() - started).toFixed(0)} ms; inside activate: ${api.activationMs.toFixed(1)} ms`);
-    await setting('length.unit', 'sentences');
-    await setting('length.value', 5);
+    await setting('length', '5s');
   });
 
   afterEach(async () => {
@@ -54,7 +53,7 @@ describe('Tersely in the editor', function () {
   });
 
   after(async () => {
-    for (const key of ['length.unit', 'length.value', 'maxDocumentSize']) await setting(key, undefined);
+    for (const key of ['length', 'maxDocumentSize']) await setting(key, undefined);
   });
 
   it('runs in the Node extension host, with the engine in a worker thread started on the first summary at the latest', async () => {
@@ -101,13 +100,18 @@ describe('Tersely in the editor', function () {
   it('inserts the summary under the title as one edit that a single undo removes', async () => {
     const editor = await openDemo();
     const original = editor.document.getText();
-    const result = (await vscode.commands.executeCommand('tersely.insertSummary')) as { inserted: boolean; placement: string };
+    const titleLine = original.split('\n')[0]!;
+    const result = (await vscode.commands.executeCommand('tersely.insertSummary', titleLine.replace(/^#\s+/, ''))) as { inserted: boolean; placement: string };
     assert.equal(result.inserted, true);
-    assert.equal(result.placement, 'underTitle');
+    assert.equal(result.placement, 'underHeading');
     const changed = editor.document.getText();
     assert.notEqual(changed, original);
-    const titleLine = original.split('\n')[0]!;
-    assert.ok(changed.startsWith(`${titleLine}\n\n**Summary**`), 'the block sits right under the title');
+    assert.ok(changed.startsWith(`${titleLine}\n\nSummary — extractive`), 'the block sits right under the chosen heading');
+    // The insert itself never makes the summary on screen out of date: its places moved with the text.
+    const after = api.inspect(editor.document.uri)!;
+    assert.equal(after.version, editor.document.version, 'the summary follows the inserted text');
+    assert.equal(after.highlighted, true);
+    for (const span of after.spans) assert.ok(span.start >= titleLine.length + (changed.length - original.length), 'every place moved past the inserted block');
     assert.ok(changed.endsWith(original.slice(titleLine.length)), 'the rest of the document is unchanged');
     await vscode.commands.executeCommand('undo');
     assert.equal(editor.document.getText(), original, 'one undo restores the document exactly');
@@ -166,10 +170,10 @@ describe('Tersely in the editor', function () {
     await vscode.commands.executeCommand('tersely.summarizeDocument');
     const before = api.inspect(editor.document.uri)!;
     assert.equal(before.spans.length, 5);
-    await setting('length.value', 3);
+    await setting('length', '3s');
     const after = await until(() => api.inspect(editor.document.uri)!, (s) => s.id !== before.id, 'a refreshed summary');
     assert.equal(after.spans.length, 3);
-    await setting('length.value', 5);
+    await setting('length', '5s');
   });
 
   it('gives a clear message instead of a summary above the size cap', async () => {
@@ -186,18 +190,45 @@ describe('Tersely in the editor', function () {
   it('copies the summary as Markdown', async () => {
     await openDemo();
     const markdown = (await vscode.commands.executeCommand('tersely.copySummary')) as string;
-    assert.match(markdown, /^\*\*Summary\*\*/);
+    assert.match(markdown, /^Summary of bike-share-rebalancing\.md — extractive/);
     assert.equal(await vscode.env.clipboard.readText(), markdown);
   });
 
-  it('checks an abstract: findings become information diagnostics in the Problems view', async () => {
+  it('checks an abstract: no Problems entries by default; information entries when tersely.problemsView asks, cleared on close', async () => {
+    let editor = await openDemo('abstract-check.md');
+    const quiet = (await vscode.commands.executeCommand('tersely.checkAbstract')) as { ok: boolean; findings: number };
+    assert.equal(quiet.ok, true);
+    assert.ok(quiet.findings > 0, 'the demo abstract leaves something out');
+    assert.deepEqual(vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.source === 'Tersely'), [], 'the Problems view stays quiet by default');
+    await setting('problemsView', true);
+    try {
+      editor = await openDemo('abstract-check.md');
+      const result = (await vscode.commands.executeCommand('tersely.checkAbstract')) as { ok: boolean; findings: number };
+      const diagnostics = vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.code === 'abstract-check');
+      assert.equal(diagnostics.length, result.findings);
+      assert.ok(diagnostics.every((d) => d.severity === vscode.DiagnosticSeverity.Information && d.source === 'Tersely'));
+      const uri = editor.document.uri;
+      await vscode.commands.executeCommand('workbench.action.closeAllEditors');
+      await until(() => vscode.workspace.textDocuments.some((d) => d.uri.toString() === uri.toString()), (open) => !open, 'the document to close', 10_000).catch(() => undefined);
+      if (!vscode.workspace.textDocuments.some((d) => d.uri.toString() === uri.toString())) {
+        assert.deepEqual(vscode.languages.getDiagnostics(uri).filter((d) => d.source === 'Tersely'), [], 'cleared when the document closes');
+      }
+    } finally {
+      await setting('problemsView', undefined);
+    }
+  });
+
+  it('checks the selected text as the abstract, and a heading passed by the picker', async () => {
     const editor = await openDemo('abstract-check.md');
-    const result = (await vscode.commands.executeCommand('tersely.checkAbstract')) as { ok: boolean; findings: number };
-    assert.equal(result.ok, true);
-    const diagnostics = vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.code === 'abstract-check');
-    assert.equal(diagnostics.length, result.findings);
-    assert.ok(diagnostics.length > 0, 'the demo abstract leaves something out');
-    assert.ok(diagnostics.every((d) => d.severity === vscode.DiagnosticSeverity.Information && d.source === 'Tersely'));
+    const text = editor.document.getText();
+    const sentenceEnd = text.indexOf('.', text.indexOf('\n\n', text.indexOf('# ')) + 2) + 1;
+    const start = text.indexOf('\n\n', text.indexOf('# ')) + 2;
+    editor.selection = new vscode.Selection(editor.document.positionAt(start), editor.document.positionAt(sentenceEnd));
+    const selected = (await vscode.commands.executeCommand('tersely.checkAbstract')) as { ok: boolean };
+    assert.equal(selected.ok, true, 'the selection is checked as the abstract');
+    editor.selection = new vscode.Selection(0, 0, 0, 0);
+    const heading = (await vscode.commands.executeCommand('tersely.checkAbstract', 'Summary')) as { ok: boolean };
+    assert.equal(heading.ok, true);
   });
 
   it('offers quick fixes that repair the summary, not the document', async () => {
@@ -207,7 +238,8 @@ describe('Tersely in the editor', function () {
     // The default method mostly avoids sentences that lean on the one before; at 40 sentences the
     // demo's summary has some (checked with the command line). The setting change refreshes the
     // open summary by itself.
-    await setting('length.value', 40);
+    await setting('problemsView', true);
+    await setting('length', '40s');
     const shown = await until(() => api.inspect(editor.document.uri)!, (s) => s.id !== first.id && s.spans.length === 40, 'the refreshed 40-sentence summary');
     const diagnostics = vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.source === 'Tersely');
     assert.equal(diagnostics.length, shown.warnings, 'one diagnostic per coherence warning');
@@ -220,6 +252,7 @@ describe('Tersely in the editor', function () {
     await vscode.commands.executeCommand(ours[0]!.command!.command, ...(ours[0]!.command!.arguments ?? []));
     assert.equal(editor.document.getText(), text, 'the document is unchanged');
     assert.equal(api.inspect(editor.document.uri)!.warnings, shown.warnings - 1);
-    await setting('length.value', 5);
+    await setting('length', '5s');
+    await setting('problemsView', undefined);
   });
 });

@@ -22,6 +22,11 @@ export interface Evidence {
 export interface BodyFacts {
   /** Every numeric value the body states (digits, number words, percentages). */
   readonly numbers: ReadonlySet<number>;
+  /**
+   * Every numeric value written anywhere in the body's text (code and tables too), digits or
+   * number words; when absent, `numbers`.
+   */
+  readonly textNumbers?: ReadonlySet<number>;
   /** The body's source text, lower case, for identifier look-ups. */
   readonly lowerSource: string;
   /** Body sentences in document order, for citing the nearest mention. */
@@ -40,6 +45,17 @@ export interface DetectorInput {
   readonly frame: Evidence | null;
   readonly body: BodyFacts;
   readonly language: string;
+  /**
+   * The body sentences that use a term (a stem, as in `CheckedText.terms`), the closest to the
+   * claim first, at most `n`: where the body speaks of the same thing. Without it, the pool.
+   */
+  readonly using?: (term: string, n: number) => readonly Evidence[];
+}
+
+/** `input.using`, or the pool sentences that use the term. */
+export function sentencesUsing(input: DetectorInput, term: string, n: number): readonly Evidence[] {
+  if (input.using) return input.using(term, n);
+  return input.pool.filter((e) => e.checked.terms.has(term)).slice(0, n);
 }
 
 export interface RawFinding {

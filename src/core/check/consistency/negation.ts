@@ -6,14 +6,17 @@
  * "whether or not", "no doubt") negate nothing. The negated word is the first content word in
  * scope.
  *
- * A finding needs the same word negated on one side and plainly asserted on the other, in a
- * support sentence (the first, or the frame) that shares at least three more content words with the claim, and no sentence of
- * the pool that agrees with the claim at least as closely; one of the three words after the negated
- * word must be the same on both sides (it is said of the same thing). English only.
+ * The body is read where it speaks of the negated word: its sentences that use the word, closest
+ * to the claim first (`NEGATION_NEIGHBOURS`).
+ *   - The claim negates a word that none of them negates: a finding (cited: the closest).
+ *   - The claim asserts a word that the closest of them negates, and that sentence is about the
+ *     claim's matter (its first support, its frame, or sharing `ABOUT_SHARED` more words) while
+ *     the next ones do not assert it: a finding.
+ * A word the body never uses is left to the support rule. English only.
  */
 import type { CheckedText } from './claim-tokens';
 import { sharedTerms } from './claim-tokens';
-import type { Detector, Evidence, RawFinding } from './detector';
+import { sentencesUsing, type Detector, type DetectorInput, type Evidence, type RawFinding } from './detector';
 
 /** NegEx's window: a cue governs at most this many following words. */
 export const NEGATION_WINDOW = 5;
@@ -26,8 +29,8 @@ const PSEUDO_AFTER: Readonly<Record<string, readonly string[]>> = {
 const BREAK = /[,;:()[\]{}!?]|\.\s/u;
 /** "not" negates a statement after an auxiliary ("does not reduce"); elsewhere it mostly contrasts ("a value, not an address"). */
 const AUXILIARIES = new Set(['is', 'are', 'was', 'were', 'be', 'been', 'being', 'am', 'do', 'does', 'did', 'has', 'have', 'had', 'will', 'would', 'can', 'could', 'should', 'shall', 'may', 'might', 'must', 'need', 'also', 'still']);
-/** Context words the two sentences must share besides the negated word. */
-const MIN_SHARED_CONTEXT = 3;
+/** Adverbs that sit between a negation and the word it negates ("does not currently check"). */
+const SCOPE_ADVERBS = new Set(['currently', 'yet', 'always', 'really', 'necessarily', 'actually', 'generally', 'usually', 'normally', 'directly', 'explicitly', 'fully', 'entirely', 'simply', 'easily', 'typically', 'officially', 'today']);
 
 export interface NegationScope {
   /** Token index of the cue. */
@@ -60,7 +63,7 @@ export function negationScopes(text: CheckedText): NegationScope[] {
     for (let k = i + 1; k < tokens.length && scope.length < NEGATION_WINDOW; k++) {
       if (BREAK.test(text.text.slice(tokens[k - 1]!.end, tokens[k]!.start)) || TERMINATORS.has(tokens[k]!.lower) || isCue(text, k)) break;
       scope.push(k);
-      if (head === null && tokens[k]!.term !== null && !/\d/u.test(tokens[k]!.lower)) head = k;
+      if (head === null && tokens[k]!.term !== null && !/\d/u.test(tokens[k]!.lower) && !SCOPE_ADVERBS.has(tokens[k]!.lower)) head = k;
     }
     scopes.push({ cue: i, scope, head });
   }
@@ -99,59 +102,54 @@ function scopesOf(text: CheckedText): NegationScope[] {
   return scopes;
 }
 
+/** Words besides the negated one that a body sentence shares with the claim to speak of the same matter. */
+export const ABOUT_SHARED = 2;
+
+/** Whether a body sentence speaks of the claim's matter: its closest support, its frame, or one sharing enough words besides `term`. */
+function aboutClaim(input: DetectorInput, evidence: Evidence, term: string): boolean {
+  return evidence === input.support[0] || evidence === input.frame || sharedTerms(input.claim, evidence.checked, new Set([term])).length >= ABOUT_SHARED;
+}
+
+/** How many of the body's sentences about a word are read for its polarity (the closest to the claim first). */
+export const NEGATION_NEIGHBOURS = 3;
+
 export const checkNegation: Detector = (input) => {
   if (!input.language.startsWith('en')) return [];
   const findings: RawFinding[] = [];
   const claim = input.claim;
   const claimScopes = scopesOf(claim);
   const reported = new Set<string>();
+  const polarity = (e: Evidence, term: string) => polarityOf(e.checked, scopesOf(e.checked), term);
 
-  const agreeing = (term: string, claimNegated: boolean, needed: number) =>
-    input.pool.some((e) => {
-      const p = polarityOf(e.checked, scopesOf(e.checked), term);
-      const same = claimNegated ? p.negated !== null : p.plain !== null && p.negated === null;
-      return same && sharedTerms(claim, e.checked, new Set([term])).length >= needed;
-    });
-
-  const consider = (term: string, claimNegated: boolean, claimToken: number, claimCue: number | null, evidence: Evidence, bodyToken: number, bodyCue: number | null) => {
-    if (reported.has(term)) return;
-    // The negated word must be said of the same thing: a content word just after it on both sides.
-    const after = (text: CheckedText, at: number) => new Set(text.tokens.slice(at + 1, at + 4).map((t) => t.term).filter((t): t is string => t !== null));
-    const objects = after(claim, claimToken);
-    if (![...after(evidence.checked, bodyToken)].some((t) => objects.has(t))) return;
-    const shared = sharedTerms(claim, evidence.checked, new Set([term])).length;
-    if (shared < MIN_SHARED_CONTEXT || agreeing(term, claimNegated, shared)) return;
-    reported.add(term);
-    findings.push({
-      kind: 'negation',
-      abstractSays: phrase(claim, claimCue, claimToken),
-      bodySays: phrase(evidence.checked, bodyCue, bodyToken),
-      evidence,
-    });
-  };
-
-  // Only the closest sentences are read for a conflict: the first support sentence and the frame.
-  const closest = [...new Set([input.support[0], input.frame].filter((e): e is Evidence => e != null))];
-  // The claim negates a word that a support sentence asserts.
+  // The claim negates a word: the body's closest sentences about that word must negate it too.
   for (const scope of claimScopes) {
     if (scope.head === null) continue;
     const term = claim.tokens[scope.head]!.term!;
-    for (const evidence of closest) {
-      const p = polarityOf(evidence.checked, scopesOf(evidence.checked), term);
-      if (p.plain !== null && p.negated === null) consider(term, true, scope.head, scope.cue, evidence, p.plain, null);
-    }
+    if (reported.has(term)) continue;
+    const near = sentencesUsing(input, term, NEGATION_NEIGHBOURS);
+    if (near.length === 0) continue; // the body never speaks of it: the support rule decides
+    if (near.some((e) => polarity(e, term).negated !== null)) continue;
+    const evidence = near[0]!;
+    reported.add(term);
+    findings.push({ kind: 'negation', abstractSays: phrase(claim, scope.cue, scope.head), bodySays: phrase(evidence.checked, null, polarity(evidence, term).plain!), evidence });
   }
-  // A support sentence negates a word that the claim asserts.
-  for (const evidence of closest) {
-    for (const scope of scopesOf(evidence.checked)) {
-      if (scope.head === null) continue;
-      const term = evidence.checked.tokens[scope.head]!.term!;
-      const p = polarityOf(claim, claimScopes, term);
-      if (p.plain === null || p.negated !== null) continue;
-      const other = polarityOf(evidence.checked, scopesOf(evidence.checked), term);
-      if (other.plain !== null) continue; // the body says it both ways
-      consider(term, false, p.plain, null, evidence, scope.head, scope.cue);
-    }
+  // The claim asserts a word that the body's closest sentence about it negates.
+  const claimPolarity = new Map<string, { negated: number | null; plain: number | null }>();
+  for (const term of claim.terms) claimPolarity.set(term, polarityOf(claim, claimScopes, term));
+  for (const [term, p] of claimPolarity) {
+    if (p.plain === null || p.negated !== null || reported.has(term) || /\d/u.test(term)) continue;
+    const near = sentencesUsing(input, term, NEGATION_NEIGHBOURS);
+    const closest = near[0];
+    if (!closest) continue;
+    const there = polarity(closest, term);
+    if (there.negated === null || there.plain !== null) continue;
+    if (!aboutClaim(input, closest, term)) continue;
+    // Said plainly in the next sentences about it: the body says it both ways.
+    if (near.slice(1).some((e) => polarity(e, term).plain !== null && polarity(e, term).negated === null)) continue;
+    const scope = scopesOf(closest.checked).find((s) => s.scope.includes(there.negated!));
+    if (!scope || scope.head === null || closest.checked.tokens[scope.head]!.term !== term) continue;
+    reported.add(term);
+    findings.push({ kind: 'negation', abstractSays: phrase(claim, null, p.plain), bodySays: phrase(closest.checked, scope.cue, scope.head), evidence: closest });
   }
   return findings;
 };

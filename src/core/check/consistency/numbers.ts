@@ -3,9 +3,9 @@
  *   - Agreement anywhere in the pool (the same value, 50% = half) silences the check.
  *   - Contradiction: a support sentence gives a different value for the same thing (a shared
  *     counted word: "12 stations" against "21 stations"; "Rust 1.50" against "Rust 1.51").
- *   - Absence: the body never states the value, while it does count the same thing somewhere
- *     (that place is cited). A figure the body never mentions at all is left to the support rule:
- *     abstracts cite years, releases and links the body has no reason to repeat.
+ *   - Absence: the body never writes the value anywhere (its code and tables included); the first
+ *     place that counts the same thing is cited when there is one. A figure that appears nowhere
+ *     in the document cannot be checked against it, so it is reported.
  * Ratio words ("half", "twice") only take part in contradictions: "halved" is often said of a fall
  * the body gives as two figures.
  */
@@ -46,8 +46,10 @@ export const checkNumbers: Detector = (input) => {
   if (claimQuantities.length === 0) return findings;
   const primary = input.frame ? [input.frame, ...input.support.filter((s) => s !== input.frame)] : input.support;
   for (const claimed of claimQuantities) {
-    // Numbers inside a link target or a reference are not claims.
-    if (/[/#:=]\S*$/u.test(input.claim.text.slice(0, input.claim.tokens[claimed.token]!.start))) continue;
+    // Numbers inside a link target or a reference ("[3]") are not claims.
+    const token = input.claim.tokens[claimed.token]!;
+    if (/[/#:=]\S*$/u.test(input.claim.text.slice(0, token.start))) continue;
+    if (input.claim.text[token.start - 1] === '[' && input.claim.text[token.end] === ']') continue;
     const agrees = input.pool.some((e) => quantitiesOf(e).some((q) => sameQuantity(claimed, q)));
     if (agrees) continue;
     let conflict: { evidence: Evidence; quantity: Quantity } | null = null;
@@ -63,8 +65,8 @@ export const checkNumbers: Detector = (input) => {
       continue;
     }
     if (claimed.kind === 'ratio') continue;
-    if (stated(claimed, input.body.numbers, input.body.sentences)) continue;
-    // The body counts the same thing elsewhere: cite the first place.
+    if (stated(claimed, input.body.textNumbers ?? input.body.numbers, input.body.sentences)) continue;
+    // The body never gives the value: cite the first place that counts the same thing, if any.
     let elsewhere: { evidence: Evidence; quantity: Quantity } | null = null;
     for (const evidence of input.body.sentences) {
       const other = quantitiesOf(evidence).find((q) => comparable(claimed, q) && sharesContext(claimed, q));
@@ -73,7 +75,6 @@ export const checkNumbers: Detector = (input) => {
         break;
       }
     }
-    if (!elsewhere) continue;
     findings.push({
       kind: KIND_OF[claimed.kind],
       abstractSays: claimed.phrase,

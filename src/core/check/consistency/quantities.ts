@@ -85,6 +85,19 @@ function phraseOf(text: CheckedText, first: number, last: number): string {
   return text.text.slice(tokens[first]!.start, tokens[end]!.end);
 }
 
+/** Numbers written anywhere in a text (digits, with decimals or thousands commas, and number words), for "the body never gives N". */
+export function numbersInText(lowerText: string): Set<number> {
+  const found = new Set<number>();
+  for (const m of lowerText.matchAll(/\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|[a-z]+(?:-[a-z]+)?/gu)) {
+    const value = /\d/u.test(m[0]) ? digitValue(m[0]) : numberWordValue(m[0]);
+    if (value !== null) found.add(value);
+    // "1.50" also states 1 and 50 as written parts (a version, a section number).
+    if (/\d\.\d/u.test(m[0])) for (const part of m[0].split('.')) found.add(Number(part));
+  }
+  for (const [word, value] of Object.entries(SCALES)) if (lowerText.includes(word)) found.add(value);
+  return found;
+}
+
 /** Every quantity of the sentence, in order. */
 export function quantitiesIn(text: CheckedText): Quantity[] {
   const tokens = text.tokens;
@@ -123,6 +136,12 @@ export function quantitiesIn(text: CheckedText): Quantity[] {
       continue;
     }
 
+    // "6-style", "64-bit": the number counts the word it is joined to.
+    const joined = /^(\d+(?:\.\d+)?)-\p{L}+$/u.exec(word);
+    if (joined) {
+      push('number', Number(joined[1]), i, i);
+      continue;
+    }
     let value = digitValue(word);
     let last = i;
     if (value === null) {

@@ -17,7 +17,7 @@ import defaultMaxentJson from '../../../../media/models/maxent-model.json';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { CONTINUOUS_NAMES, MAXENT_FEATURES, maxentFeatures, type MaxentFeatureMatrix } from './maxent-features';
 import { describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
-import { MODEL_FORMAT, MODEL_LIMITS, MODEL_VERSION } from './model';
+import { MODEL_FORMAT, MODEL_LIMITS, MODEL_VERSION, templateTextOf } from './model';
 
 export const MAXENT_KIND = 'maximum-entropy';
 
@@ -29,10 +29,12 @@ export interface MaxentModel {
   readonly bias: number;
   readonly weights: Readonly<Record<string, readonly number[]>>;
   readonly trainedOn?: Readonly<Record<string, unknown>>;
+  /** Learned template text (select/template-text.ts), which any model kind may carry. */
+  readonly templateText?: readonly string[];
 }
 
 const ARITY: ReadonlyMap<string, number> = new Map(MAXENT_FEATURES.map((f) => [f.name, f.arity]));
-const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'regularization', 'bias', 'weights', 'trainedOn']);
+const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'regularization', 'bias', 'weights', 'trainedOn', 'templateText']);
 
 function weight(value: unknown, where: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value) || Math.abs(value) > MODEL_LIMITS.maxWeight) {
@@ -68,7 +70,17 @@ export function validateMaxentModel(json: unknown): MaxentModel {
   if (Object.keys(weights).length === 0) throw new ModelError('the model has no features');
   const trainedOn = own(json, 'trainedOn');
   if (trainedOn !== undefined && !isRecord(trainedOn)) throw new ModelError('"trainedOn" must be an object (free-form provenance)');
-  return { format: MODEL_FORMAT, version: MODEL_VERSION, kind: MAXENT_KIND, regularization, bias, weights, ...(trainedOn !== undefined ? { trainedOn } : {}) };
+  const templateText = templateTextOf(own(json, 'templateText'));
+  return {
+    format: MODEL_FORMAT,
+    version: MODEL_VERSION,
+    kind: MAXENT_KIND,
+    regularization,
+    bias,
+    weights,
+    ...(trainedOn !== undefined ? { trainedOn } : {}),
+    ...(templateText !== undefined ? { templateText } : {}),
+  };
 }
 
 let cachedDefault: MaxentModel | undefined;

@@ -14,6 +14,7 @@
  * changed without retraining.
  */
 import defaultModelJson from '../../../../media/models/default-model.json';
+import { checkLearnedTemplateText } from '../../select/template-text';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { FEATURES, sentenceFeatures, type FeatureMatrix } from './features';
 import { describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
@@ -32,6 +33,8 @@ export interface BayesModel {
   readonly classes: { readonly positive: number; readonly negative: number };
   readonly features: Readonly<Record<string, ClassCounts>>;
   readonly trainedOn?: Readonly<Record<string, unknown>>;
+  /** Sentences `tersely train` found recurring across the training documents (select/template-text.ts); never picked. */
+  readonly templateText?: readonly string[];
 }
 
 /**
@@ -56,7 +59,7 @@ export const MODEL_LIMITS = {
 
 /** Arity of each feature this version knows; a Map, so "__proto__" or "constructor" is just an unknown name. */
 const ARITY: ReadonlyMap<string, number> = new Map(FEATURES.map((f) => [f.name, f.arity]));
-const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'smoothing', 'classes', 'features', 'trainedOn']);
+const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'smoothing', 'classes', 'features', 'trainedOn', 'templateText']);
 const CLASS_KEYS = new Set(['positive', 'negative']);
 
 function isCount(value: unknown, min: number): value is number {
@@ -122,6 +125,7 @@ export function validateModel(json: unknown): BayesModel {
   if (Object.keys(features).length === 0) throw new ModelError('the model has no features');
   const trainedOn = own(json, 'trainedOn');
   if (trainedOn !== undefined && !isRecord(trainedOn)) throw new ModelError('"trainedOn" must be an object (free-form provenance)');
+  const templateText = templateTextOf(own(json, 'templateText'));
   return {
     format: MODEL_FORMAT,
     version: MODEL_VERSION,
@@ -130,7 +134,18 @@ export function validateModel(json: unknown): BayesModel {
     classes: totals,
     features,
     ...(trainedOn !== undefined ? { trainedOn } : {}),
+    ...(templateText !== undefined ? { templateText } : {}),
   };
+}
+
+/** The optional learned template text, checked (an optional field any model kind may carry). */
+export function templateTextOf(value: unknown): readonly string[] | undefined {
+  if (value === undefined) return undefined;
+  try {
+    return checkLearnedTemplateText(value);
+  } catch (error) {
+    throw new ModelError((error as Error).message);
+  }
 }
 
 let cachedDefault: BayesModel | undefined;

@@ -1,0 +1,133 @@
+/**
+ * What kind of line a sentence is, before any ranker looks at it:
+ *  - barred: never a summary line — placeholder answers ("N/A", "TBD", "None."), pull-request
+ *    boilerplate (issue references, sign-off trailers, "cc @…", check-list items), bylines and
+ *    metadata lines ("Start Date: …");
+ *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
+ *    fewer, a lead-in ending in a colon, link-only text, a bare reference ("RFC 1234.", "[3]").
+ * Plain rules on the sentence's text and source; nothing here is learned or tuned.
+ */
+import type { BarredKind, ParsedDocument } from '../types';
+
+export type { BarredKind };
+export type FragmentKind = 'short' | 'leadIn' | 'linkOnly' | 'bareReference';
+
+export const SENTENCE_KIND_DEFAULTS = {
+  /** At most this many words is a fragment (issue 11: "≤ 6 words"). */
+  fragmentWords: 6,
+  /** Bylines and metadata lines are short; a long "Prepared by …" sentence is prose. */
+  bylineWords: 14,
+} as const;
+
+/** Whole answers that say nothing (compared after normalizeSentence). */
+const PLACEHOLDERS = new Set([
+  'n/a', 'na', 'n.a', 'none', 'none yet', 'none so far', 'none at this time', 'none known', 'nothing', 'no', 'yes', 'nope',
+  'tbd', 'tba', 'tbc', 'todo', 'to do', 'to be done', 'to be determined', 'to be decided', 'to be announced', 'not applicable',
+  'not yet', 'unknown', 'pending', 'etc', 'others', 'other', 'misc', 'wip', 'fixme', 'xxx', '-', '--', '—', '?', '...', '…',
+  'same as above', 'see above', 'see below', 'nothing yet', 'none identified', 'not sure', 'unclear', 'maybe', 'empty',
+]);
+
+/** "TODO for …", "TBD: …", "FIXME …": a note left for later, not content. */
+const LATER_NOTE = /^(?:todo|tbd|fixme|xxx)\b/i;
+
+/**
+ * Issue-closing and issue-linking lines of pull requests. The closing keywords are GitHub's
+ * (close(s/d), fix(es/ed), resolve(s/d); from memory), plus common linking phrases.
+ */
+const ISSUE_REF = String.raw`(?:[\w.-]+\/[\w.-]+)?#\d+|gh-\d+|issue\s+#?\d+|pr\s+#?\d+|<?https?:\/\/\S+>?`;
+const ISSUE_LINE = new RegExp(
+  String.raw`^(?:(?:close[sd]?|fix(?:e[sd])?|resolve[sd]?|related\s+to|relates\s+to|refs?|references|see(?:\s+also)?|part\s+of|depends\s+on|follow[- ]?up\s+(?:to|of|on)|addresses|supersedes|replaces|blocked\s+by|implements)\s*:?\s*)?` +
+    String.raw`(?:${ISSUE_REF})(?:\s*(?:,|and|&|\/)?\s*(?:${ISSUE_REF}))*\s*[.!]?$`,
+  'i',
+);
+/** Commit trailers (git's Signed-off-by and its relatives; from memory). */
+const TRAILER = /^(?:signed-off-by|co-authored-by|reviewed-by|acked-by|tested-by|reported-by|suggested-by|helped-by|cc)\s*:/i;
+const MENTION_LINE = /^\/?cc:?\s+@|^(?:@[\w-]+[\s,]*)+(?:please\s+(?:review|take\s+a\s+look)\b.*)?[.!]?$/i;
+const CHECKLIST = /^\s*(?:[-*+]\s*)?\[[ xX]\]\s/;
+const BYLINE = /^(?:prepared|written|authored|drafted|compiled|edited|submitted|proposed|created|maintained|posted|reviewed|approved)\s+by\b/i;
+/** Header fields of design documents and forms, "Key: value" on one short line. */
+const METADATA = /^(?:authors?|owners?|reviewers?|approvers?|assignees?|primary\s+assignee|other\s+contributors|contributors?|date|start\s+date|created|updated|last\s+updated|version|status|state|feature\s+name|rfc\s+pr|rust\s+issue|tracking\s+issue|blueprint|launchpad|shepherds?|champions?|team|teams|contact|email|discussion|pr|issue|target\s+release|milestone|labels?|category|type|priority)\s*:\s*\S/i;
+
+const BARE_REFERENCE = new RegExp(
+  String.raw`^(?:see\s+(?:also\s+)?)?(?:\[\d+\]|\(\d+\)|rfc\s*#?\d+|(?:${ISSUE_REF})|(?:section|chapter|figure|table|appendix)\s+[\d.]+[a-z]?)(?:\s*(?:,|and)\s*(?:\[\d+\]|rfc\s*#?\d+|(?:${ISSUE_REF})))*\s*[.;]?$`,
+  'i',
+);
+
+/** Lower case, markup-free, whitespace collapsed, surrounding punctuation dropped: the key two copies share. */
+export function normalizeSentence(text: string): string {
+  return text
+    .toLowerCase()
+    .replace(/[`*_~]/g, '')
+    .replace(/\s+/g, ' ')
+    .replace(/^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u, '')
+    .replace(/[\s.,;:!?]+$/u, '')
+    .trim();
+}
+
+/** Why a sentence may never be picked, or null. */
+export function barredKind(text: string, words: number, settings = SENTENCE_KIND_DEFAULTS): BarredKind | null {
+  const trimmed = text.trim();
+  const key = normalizeSentence(trimmed);
+  if (key === '' || PLACEHOLDERS.has(key) || LATER_NOTE.test(trimmed)) return 'placeholder';
+  if (ISSUE_LINE.test(trimmed) || TRAILER.test(trimmed) || MENTION_LINE.test(trimmed) || CHECKLIST.test(trimmed)) return 'boilerplate';
+  if (words <= settings.bylineWords && BYLINE.test(trimmed)) return 'byline';
+  if (words <= settings.bylineWords && METADATA.test(trimmed)) return 'metadata';
+  return null;
+}
+
+/** Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known. */
+export function fragmentKind(text: string, words: number, source = text, settings = SENTENCE_KIND_DEFAULTS): FragmentKind | null {
+  const trimmed = text.trim();
+  if (/:\s*$/.test(trimmed)) return 'leadIn';
+  if (BARE_REFERENCE.test(trimmed)) return 'bareReference';
+  if (isLinkOnly(source)) return 'linkOnly';
+  if (words <= settings.fragmentWords) return 'short';
+  return null;
+}
+
+/** Source that is nothing but links (Markdown `[text](url)`, `<url>`, bare URLs, rst `` `text <url>`_ ``). */
+function isLinkOnly(source: string): boolean {
+  const rest = source
+    .replace(/!?\[[^\]]*\]\([^)]*\)/g, ' ')
+    .replace(/\[[^\]]*\]\[[^\]]*\]/g, ' ')
+    .replace(/`[^`<]*<[^>]+>`__?/g, ' ')
+    .replace(/<https?:\/\/[^>]+>/g, ' ')
+    .replace(/https?:\/\/\S+/g, ' ')
+    .replace(/^\s*(?:[-*+]|\d+[.)])\s+/, ' ');
+  return rest !== source && !/[\p{L}\p{N}]/u.test(rest);
+}
+
+export interface SentenceKinds {
+  /** Per sentence: why it is barred, or null. */
+  readonly barred: readonly (BarredKind | null)[];
+  /** Per sentence: 1 when a fragment. */
+  readonly fragment: Uint8Array;
+  /** Per sentence: equal numbers for equal normalized text. */
+  readonly textKey: Int32Array;
+}
+
+/**
+ * Classifies every sentence of a document. `templateKeys` holds normalized sentences of the
+ * team's templates (template-text.ts): a sentence found there is barred as template text.
+ */
+export function sentenceKinds(doc: ParsedDocument, wordCounts: readonly number[], templateKeys: ReadonlySet<string> = new Set()): SentenceKinds {
+  const n = doc.sentences.length;
+  const barred: (BarredKind | null)[] = new Array(n).fill(null);
+  const fragment = new Uint8Array(n);
+  const textKey = new Int32Array(n);
+  const keys = new Map<string, number>();
+  doc.sentences.forEach((sentence, i) => {
+    const key = normalizeSentence(sentence.text);
+    let id = keys.get(key);
+    if (id === undefined) {
+      id = keys.size;
+      keys.set(key, id);
+    }
+    textKey[i] = id;
+    const words = wordCounts[i] ?? 0;
+    barred[i] = templateKeys.has(key) ? 'template' : barredKind(sentence.text, words);
+    const source = doc.text.slice(sentence.span.start - doc.baseOffset, sentence.span.end - doc.baseOffset);
+    if (fragmentKind(sentence.text, words, source) !== null) fragment[i] = 1;
+  });
+  return { barred, fragment, textKey };
+}

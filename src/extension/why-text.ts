@@ -1,0 +1,76 @@
+/**
+ * "Why this sentence", in words from the features behind the pick ("opening sentence of
+ * Motivation; shares the key terms lifetime, borrow with the title; among the most central
+ * sentences"), with the numbers kept apart for a toggle. Pure.
+ */
+import { wordTokens } from '../core/index';
+import type { PickedSentence, Summary } from '../core/index';
+import { ordinal, type Wording } from './wording';
+
+/** Feature values (scaled 0-1 by the engine) at or above this read as "high" (common practice, no source). */
+const HIGH = 0.75;
+const MAX_TERMS = 3;
+/** Short words and these common ones are not "key terms" worth naming (common practice, no source). */
+const MIN_TERM_LENGTH = 4;
+const COMMON = new Set(['this', 'that', 'with', 'from', 'have', 'will', 'when', 'what', 'which', 'their', 'there', 'they', 'them', 'then', 'than', 'into', 'about', 'also', 'been', 'were', 'more', 'most', 'some', 'such', 'only', 'over', 'each', 'other', 'should', 'would', 'could']);
+
+/** Feature names the engine reports, worded as what a high value means. */
+export const FEATURE_WORDS: Readonly<Record<string, string>> = {
+  lexrank: 'among the most central sentences (many others say something similar)',
+  textrank: 'shares words with many other sentences',
+  centroid: 'close to the document’s main topic',
+  bayes: 'looks like the sentences people put in summaries (trained model)',
+  luhn: 'dense with the document’s key terms',
+  position: 'sits early in its section',
+  edmundson: 'carries signal phrases, title or heading words',
+};
+
+function terms(text: string): Set<string> {
+  return new Set(wordTokens(text).filter((w) => w.length >= MIN_TERM_LENGTH && !COMMON.has(w)));
+}
+
+export function whyInWords(pick: PickedSentence, summary: Summary, wording: Wording): string {
+  if (pick.rank === 0) return wording.t('Added by a repair, so the sentence before it reads in context.');
+  const parts: string[] = [];
+  const sentence = summary.document.sentences[pick.sentence];
+  const section = pick.sectionPath.at(-1);
+  if (sentence && section) {
+    parts.push(
+      sentence.positionInSection === 0
+        ? wording.t('opening sentence of “{0}”', section)
+        : wording.t('{0} of {1} sentences in “{2}”', ordinal(wording, sentence.positionInSection + 1), wording.count(sentence.sectionLength), section),
+    );
+  } else if (sentence && sentence.positionInParagraph === 0) {
+    parts.push(wording.t('opening sentence of its paragraph'));
+  }
+  const title = summary.document.title;
+  if (title) {
+    const own = terms(pick.text);
+    const shared = [...terms(title)].filter((w) => own.has(w)).slice(0, MAX_TERMS);
+    if (shared.length > 0) parts.push(wording.t('shares the key terms {0} with the title', shared.map((w) => `“${w}”`).join(', ')));
+  }
+  const strong = Object.entries(pick.features)
+    .filter(([name, value]) => Number.isFinite(value) && value >= HIGH && FEATURE_WORDS[name])
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, 2)
+    .map(([name]) => wording.t(FEATURE_WORDS[name]!));
+  parts.push(...strong);
+  parts.push(wording.t('ranked {0} of {1} sentences', ordinal(wording, pick.rank), wording.count(summary.stats.sentencesIn)));
+  const text = parts.join('; ');
+  return text.charAt(0).toUpperCase() + text.slice(1) + '.';
+}
+
+function formatNumber(value: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  return Math.abs(value) >= 100 ? value.toFixed(0) : value.toFixed(3);
+}
+
+/** The numbers behind the words: rank, score, and each feature (the method's published name kept here). */
+export function whyNumbers(pick: PickedSentence, summary: Summary, wording: Wording): string[] {
+  if (pick.rank === 0) return [];
+  const lines = [wording.t('rank {0} of {1}, score {2} ({3})', wording.count(pick.rank), wording.count(summary.stats.sentencesIn), formatNumber(pick.score), summary.method)];
+  for (const [name, value] of Object.entries(pick.features).filter(([, v]) => Number.isFinite(v)).sort((a, b) => Math.abs(b[1]) - Math.abs(a[1]))) {
+    lines.push(`${name}: ${formatNumber(value)}`);
+  }
+  return lines;
+}
