@@ -7,6 +7,7 @@
 import { readFile, writeFile } from 'node:fs/promises';
 import {
   exampleFromDocument,
+  learnTemplateText,
   FORMATS,
   formatForFileName,
   inputProblem,
@@ -174,12 +175,16 @@ export async function runTrain(args: string[]): Promise<number> {
     if (error instanceof RangeError) throw new InputError(error.message);
     throw error;
   }
+  // Sentences recurring across independent documents are template text: the model carries them so they are never picked.
+  const templateText = learnTemplateText(examples.map((example) => example.analyzed.doc));
+  if (templateText.length > 0) model = { ...model, templateText };
   await writeFile(out, modelJson(model));
   const skippedText = Object.entries(skipped).map(([reason, n]) => `${n} × ${reason}`).join(', ');
   const counts = model.kind === 'naive-bayes' ? model.classes : (model.trainedOn?.sentences as { positive: number; negative: number });
   say(`trained a ${kind} model on ${examples.length} documents (${counts.positive} summary-like sentences, ${counts.negative} others)`);
   say(skippedText ? `; skipped ${skippedText}\n` : '\n');
   say(strongestValues(model).join('\n') + '\n');
+  say(`${templateText.length} template ${templateText.length === 1 ? 'sentence' : 'sentences'} found recurring across the documents (never picked)\n`);
   say(`model written to ${out}\n`);
   return 0;
 }

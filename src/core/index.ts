@@ -66,6 +66,13 @@ export { LABEL_RULES } from './rank/trained/labels';
 export type { LabelRule } from './rank/trained/labels';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
+// Sentence kinds, template text and hysteresis (what is never picked, and what is kept).
+export { barredKind, fragmentKind, normalizeSentence, SENTENCE_KIND_DEFAULTS } from './select/sentence-kinds';
+export type { FragmentKind } from './select/sentence-kinds';
+export { learnTemplateText, TEMPLATE_LEARNING_DEFAULTS, TEMPLATE_LIMITS } from './select/template-text';
+export type { TemplateInput } from './select/template-text';
+export { HYSTERESIS_DEFAULTS } from './select/hysteresis';
+export { SELECTION_DEFAULTS } from './select/selection-input';
 // Key phrases (TextRank keyword extraction).
 export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
 export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';

@@ -82,7 +82,7 @@ describe('extension manifest (package.json contributes)', () => {
       assert.ok(ignore.includes(`!${bundle}`), `${bundle} goes into the VSIX`);
     }
     assert.equal(manifest.capabilities.untrustedWorkspaces.supported, 'limited');
-    assert.deepEqual(manifest.capabilities.untrustedWorkspaces.restrictedConfigurations, ['tersely.maxDocumentSize', 'tersely.modelFile']);
+    assert.deepEqual(manifest.capabilities.untrustedWorkspaces.restrictedConfigurations, ['tersely.maxDocumentSize', 'tersely.modelFile', 'tersely.templateFiles']);
     assert.match(manifest.engines.vscode, /^\^1\.\d+\.\d+$/);
     assert.ok(existsSync(new URL(manifest.icon, root)), 'the marketplace icon exists');
   });

@@ -29,7 +29,7 @@ export interface MaxentModel {
   readonly bias: number;
   readonly weights: Readonly<Record<string, readonly number[]>>;
   readonly trainedOn?: Readonly<Record<string, unknown>>;
-  /** Learned template text (select/template-text.ts), which any model kind may carry. */
+  /** Sentences `tersely train` found recurring across the training documents (select/template-text.ts); never picked. */
   readonly templateText?: readonly string[];
 }
 
