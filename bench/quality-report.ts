@@ -2,7 +2,7 @@
  * The quality benchmark's report: the table of methods and anchors, the targets of the collection,
  * the stand-alone check table and the hand-written notes (bench/quality-notes.ts).
  */
-import { defaultModel, type RankerName } from '../src/core/index';
+import { defaultMaxentModel, defaultModel, type RankerName } from '../src/core/index';
 import type { Collection } from './collections';
 import type { CorpusLoad, Half } from './corpus';
 import { NOTES } from './quality-notes';
@@ -111,6 +111,7 @@ export function report(context: ReportContext, totals: Totals): string {
     '- ROUGE: Tersely\'s own implementation (`src/core/evaluate/rouge.ts`, checked against Lin 2004\'s examples and the `js-rouge` package), Porter stemming, stop words kept, one reference; ROUGE-L is summary-level union LCS. Figures are means over documents.',
     '- Anchors (computed by the bench, not by the engine): _lead_ = the first body sentences that fit the budget; _random_ = sentences in a seeded random order that fit; _oracle_ = greedy pick maximising ROUGE-1 F1 + ROUGE-2 F1 against the reference (a ceiling for extractive methods). All see the same candidate sentences as the methods (prose sentences outside the default excluded sections).',
     model('bayes', defaultModel().trainedOn, 'media/models/default-model.json'),
+    model('maxent', defaultMaxentModel().trainedOn, 'media/models/maxent-model.json'),
     `- ms / doc: ranking + selection per document (parsing and analysis, shared by all methods, took ${fixed(totals.analyzeMilliseconds / Math.max(1, context.documents), 2)} ms / doc). Whole run: ${context.seconds.toFixed(1)} s.`,
     '',
     table(rows, lead, defaultMethod),

@@ -34,7 +34,7 @@ describe('extension settings: read through the option schema', () => {
     assert.equal(settings.summary.balanceDepth, SUMMARY_OPTIONS.balanceDepth.default);
     assert.equal(settings.host.liveDelay, HOST_OPTIONS.liveDelay.default);
     assert.equal(settings.summary.maxChars, SUMMARY_OPTIONS.maxChars.default);
-    assert.equal(settings.summary.method, 'blend');
+    assert.equal(settings.summary.method, 'maxent');
     assert.equal(settings.summary.language, 'auto');
     assert.deepEqual(
       problems.map((p) => p.setting).sort(),

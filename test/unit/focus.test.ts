@@ -127,8 +127,9 @@ describe('focused summaries (MMR with a query, Carbonell & Goldstein 1998)', () 
   });
 
   it('ranks towards the focus, not only filters: the same candidates order differently for two focuses', () => {
-    const a = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry tickets', balance: false });
-    const b = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry riders', balance: false });
+    // The expected picks were worked out for the blend ranker (the default when this test was written); pinned so a change of default does not move them.
+    const a = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry tickets', balance: false, method: 'blend' });
+    const b = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry riders', balance: false, method: 'blend' });
     assert.equal(a.sentences[0]!.text, 'Tickets for the night ferry are sold on board.');
     assert.equal(b.sentences[0]!.text, 'The ferry carries two hundred riders.');
   });

@@ -10,7 +10,7 @@ describe('options: the schema and its resolution', () => {
   it('fills in the defaults from the schema', () => {
     assert.deepEqual(resolveOptions({}), DEFAULT_OPTIONS);
     assert.deepEqual(DEFAULT_OPTIONS.budget, { unit: 'auto', value: 0 });
-    assert.equal(DEFAULT_OPTIONS.method, 'blend');
+    assert.equal(DEFAULT_OPTIONS.method, 'maxent');
     assert.deepEqual(DEFAULT_OPTIONS.excludeHeadings, DEFAULT_EXCLUDED_HEADINGS);
     for (const [key, definition] of Object.entries(SUMMARY_OPTIONS)) {
       assert.deepEqual((DEFAULT_OPTIONS as unknown as Record<string, unknown>)[key], definition.default, key);
@@ -36,7 +36,7 @@ describe('options: the schema and its resolution', () => {
       ['budget', 'minSentences', 'method', 'balance', 'balanceDepth', 'language', 'repair', 'maxChars', 'mmrLambda'],
     );
     assert.match(problems.find((p) => p.key === 'budget')!.reason, /700%.*outside 1%\.\.100%/);
-    assert.match(problems.find((p) => p.key === 'method')!.reason, /expected one of blend, position/);
+    assert.match(problems.find((p) => p.key === 'method')!.reason, /expected one of maxent, blend, position/);
     assert.throws(() => resolveOptions({ method: 'nonsense' }), (error: unknown) => error instanceof OptionsError && /method: expected one of/.test(error.message));
   });
 

@@ -51,7 +51,7 @@ describe('rank: the method registry and the blend', () => {
   });
 
   it('registers every method once, the default first, each described in words with a citation', () => {
-    assert.deepEqual(METHOD_NAMES, ['blend', 'position', 'luhn', 'edmundson', 'lexrank', 'textrank', 'centroid', 'maxent', 'bayes']);
+    assert.deepEqual(METHOD_NAMES, ['maxent', 'blend', 'position', 'luhn', 'edmundson', 'lexrank', 'textrank', 'centroid', 'bayes']);
     assert.deepEqual(METHODS.map((m) => m.name), [...METHOD_NAMES]);
     for (const info of METHOD_INFO) {
       assert.ok(info.label.length > 0 && info.detail.length > 0 && info.citation.length > 0, info.name);

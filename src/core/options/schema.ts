@@ -88,7 +88,7 @@ export const SUMMARY_OPTIONS = {
   }),
   method: define<RankerName>({
     kind: methodKind,
-    default: 'blend',
+    default: 'maxent',
     description: 'How sentences are scored.',
     setting: { key: 'method', order: 3 },
     cli: { flag: 'method', placeholder: 'NAME', commands: ['summarize'] },

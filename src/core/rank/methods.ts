@@ -16,9 +16,14 @@ export interface MethodInfo {
 }
 
 const INFO: Readonly<Record<RankerName, Omit<MethodInfo, 'name'>>> = {
+  maxent: {
+    label: 'Trained on your documents (default)',
+    detail: 'A maximum-entropy (logistic regression) sentence model over position, headings, cue phrases and the other methods’ scores, trained by `tersely train --kind maximum-entropy` (the shipped one, or yours).',
+    citation: 'Osborne 2002',
+  },
   blend: {
-    label: 'Balanced (default)',
-    detail: 'The trained sentence model, with LexRank centrality and closeness to the centroid added in.',
+    label: 'Balanced blend',
+    detail: 'The naive Bayes sentence model, with LexRank centrality and closeness to the centroid added in.',
     citation: 'weights chosen on the benchmark’s train half (bench/RESULTS.md)',
   },
   position: {
@@ -50,11 +55,6 @@ const INFO: Readonly<Record<RankerName, Omit<MethodInfo, 'name'>>> = {
     label: 'Closest to the main topic',
     detail: 'Prefers sentences close to the document’s average term vector (centroid method).',
     citation: 'Radev et al. 2004',
-  },
-  maxent: {
-    label: 'Trained on your documents',
-    detail: 'A maximum-entropy (logistic regression) sentence model over position, headings, cue phrases and the other methods’ scores, trained by `tersely train` (the shipped one, or yours).',
-    citation: 'Osborne 2002',
   },
   bayes: {
     label: 'Trained on your documents, feature by feature',
