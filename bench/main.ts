@@ -16,6 +16,7 @@ async function main(): Promise<number> {
   if (mode === 'check') return (await import('./check')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
   if (mode === 'focus') return (await import('./focus')).run(process.argv.slice(3));
+  if (mode === 'digest') return (await import('./digest')).run(process.argv.slice(3));
   console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|focus|digest [options]');
   return 2;
 }
