@@ -6,7 +6,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 
 export const RESULTS_FILE = 'bench/RESULTS.md';
 
-export function writeResultsBlock(path: string, name: 'quality' | 'speed' | 'check' | 'focus' | 'digest', content: string): void {
+export function writeResultsBlock(path: string, name: 'quality' | 'speed' | 'check' | 'focus' | 'digest' | 'digest-speed', content: string): void {
   const start = `<!-- ${name}:start -->`;
   const end = `<!-- ${name}:end -->`;
   const block = `${start}\n${content.trim()}\n${end}`;
