@@ -7,6 +7,8 @@
  *   node dist/bench.cjs check [options]     the abstract check on perturbed author abstracts (bench/check.ts)
  *   node dist/bench.cjs focus [options]     focused vs unfocused summaries (bench/focus.ts)
  *   node dist/bench.cjs digest [options]    multi-document digests: quality and speed (bench/digest.ts)
+ *   node dist/bench.cjs training-list       the train halves' documents for `tersely train --files` (bench/training-list.ts)
+ *   node dist/bench.cjs audit [--limit N]   what the default summaries pick, counted by rule (bench/audit.ts)
  */
 async function main(): Promise<number> {
   const mode = process.argv[2];
@@ -14,10 +16,12 @@ async function main(): Promise<number> {
   if (mode === 'tune') return (await import('./tune')).run(process.argv.slice(3));
   if (mode === 'tune-repair') return (await import('./tune-repair')).run(process.argv.slice(3));
   if (mode === 'check') return (await import('./check')).run(process.argv.slice(3));
+  if (mode === 'training-list') return (await import('./training-list')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
   if (mode === 'focus') return (await import('./focus')).run(process.argv.slice(3));
   if (mode === 'digest') return (await import('./digest')).run(process.argv.slice(3));
-  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|focus|digest [options]');
+  if (mode === 'audit') return (await import('./audit')).run(process.argv.slice(3));
+  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|training-list|focus|digest|audit [options]');
   return 2;
 }
 

@@ -35,6 +35,10 @@ export function renderText(name: string, summary: Summary, style: Style): string
   }
   if (summary.keyPhrases.length > 0) out.push(`${style.dim('key phrases:')} ${summary.keyPhrases.map((k) => safe(k.text)).join(' · ')}`);
   for (const notice of summary.notices) out.push(style.warn(`note: ${safe(notice)}`));
+  const leftOut = summary.leftOut ?? [];
+  if (leftOut.length > 0) {
+    out.push(style.dim(`${leftOut.length} ${leftOut.length === 1 ? 'section' : 'sections'} left out as not summary-worthy: ${leftOut.map((l) => `${safe(l.heading || '(opening)')} (${safe(l.message.replace(/^left out: /, ''))})`).join('; ')}`));
+  }
 
   const flagged = new Map(summary.warnings.map((w) => [w.sentence, w]));
   let currentPath: string | null = null;
@@ -110,6 +114,8 @@ export function summaryToJson(name: string, summary: Summary, input: { readonly 
       }),
       repairs: w.repairs.map((r) => r.kind),
     })),
+    leftOut: (summary.leftOut ?? []).map((l) => ({ heading: l.heading, reason: l.reason, message: l.message })),
+    barred: (summary.barred ?? []).map((b) => ({ sentence: summary.document.sentences[b.sentence]?.text ?? '', kind: b.kind })),
     notices: summary.notices,
   };
 }

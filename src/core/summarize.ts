@@ -46,8 +46,13 @@ export interface PreparedDocument {
 
 export type Preparation = { readonly ok: true; readonly prepared: PreparedDocument } | { readonly ok: false; readonly refused: Summary };
 
-/** Checks the request and the input, then reads and analyses the text. Throws OptionsError on invalid options. */
-export function prepareDocument(text: string, request: SummarizeRequest = {}): Preparation {
+/** A request whose options and input passed the checks, or the summary that refuses the input. */
+export type CheckedRequest =
+  | { readonly ok: true; readonly options: SummaryOptions; readonly format: DocumentFormat; readonly baseOffset: number }
+  | { readonly ok: false; readonly refused: Summary };
+
+/** Checks the request's options and the input. Throws OptionsError on invalid options. */
+export function checkRequest(text: string, request: SummarizeRequest = {}): CheckedRequest {
   const { options, problems } = checkOptions(request);
   const format = request.format ?? 'markdown';
   const allProblems = [...problems];
@@ -62,10 +67,26 @@ export function prepareDocument(text: string, request: SummarizeRequest = {}): P
 
   const problem = inputProblem(text, options.maxChars);
   if (problem) return { ok: false, refused: refusedSummary(text, format, baseOffset, options, problem) };
+  return { ok: true, options, format, baseOffset };
+}
+
+/** Checks the request and the input, then reads and analyses the text. Throws OptionsError on invalid options. */
+export function prepareDocument(text: string, request: SummarizeRequest = {}): Preparation {
+  const checked = checkRequest(text, request);
+  if (!checked.ok) return checked;
+  const { options, format, baseOffset } = checked;
   request.onStage?.('reading');
   const { doc, notices } = withWellFormedTexts(parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes }));
   const analyzed = analyze(doc, resolveLanguage(doc, options.language));
   return { ok: true, prepared: { analyzed, options, ...(notices.length > 0 ? { notices } : {}) } };
+}
+
+/** Ranks, selects and checks a prepared document: the rest of summarize(). */
+export function summarizePrepared(prepared: PreparedDocument, request: SummarizeRequest = {}): Summary {
+  request.onStage?.('ranking');
+  const ranked = rankPrepared(prepared);
+  request.onStage?.('checking');
+  return finishSummary(prepared, ranked);
 }
 
 /** The options a ranker sees. */
@@ -83,12 +104,7 @@ export function rankPrepared(prepared: PreparedDocument, method: RankerName = pr
 
 export function summarize(text: string, request: SummarizeRequest = {}): Summary {
   const preparation = prepareDocument(text, request);
-  if (!preparation.ok) return preparation.refused;
-  const { prepared } = preparation;
-  request.onStage?.('ranking');
-  const ranked = rankPrepared(prepared);
-  request.onStage?.('checking');
-  return finishSummary(prepared, ranked);
+  return preparation.ok ? summarizePrepared(preparation.prepared, request) : preparation.refused;
 }
 
 /** The sentences a summary may pick (prose with words, outside excluded sections, not barred), in document order. */

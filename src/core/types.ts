@@ -131,6 +131,7 @@ export type RankerName =
   | 'textrank'
   | 'centroid'
   | 'bayes'
+  | 'maxent'
   | 'blend';
 
 /** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
@@ -148,11 +149,15 @@ export interface CueWords {
   readonly stigma: readonly string[];
 }
 
-export type BudgetUnit = 'sentences' | 'words' | 'ratio';
+/**
+ * 'minutes' is a reading time (WORDS_PER_MINUTE, reading.ts); 'auto' is the default length that
+ * grows slowly with the document (reading.ts, autoWords). Both are soft limits like 'ratio'.
+ */
+export type BudgetUnit = 'sentences' | 'words' | 'ratio' | 'minutes' | 'auto';
 
 export interface Budget {
   readonly unit: BudgetUnit;
-  /** A count for sentences/words; a fraction in (0, 1] of the document's words for ratio. */
+  /** A count for sentences/words; a fraction in (0, 1] of the document's words for ratio; minutes; 0 for auto. */
   readonly value: number;
 }
 

@@ -108,6 +108,6 @@ describe('command line', function () {
     for (const flag of ['--length', '--method', '--no-balance', '--exclude', '--prefer', '--avoid', '--format', '--input-format', '--lang', '--max-size', '--abstract-heading', '--abstract', '--reference-heading', '--out', '--model']) {
       assert.ok(run.stdout.includes(flag), flag);
     }
-    assert.match(run.stdout, /--length LENGTH .*\(default: 15%\)/s);
+    assert.match(run.stdout, /--length LENGTH .*\(default: auto\)/s);
   });
 });

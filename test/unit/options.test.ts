@@ -9,7 +9,7 @@ import { DEFAULT_EXCLUDED_HEADINGS } from '../../src/core/text/headings';
 describe('options: the schema and its resolution', () => {
   it('fills in the defaults from the schema', () => {
     assert.deepEqual(resolveOptions({}), DEFAULT_OPTIONS);
-    assert.deepEqual(DEFAULT_OPTIONS.budget, { unit: 'ratio', value: 0.15 });
+    assert.deepEqual(DEFAULT_OPTIONS.budget, { unit: 'auto', value: 0 });
     assert.equal(DEFAULT_OPTIONS.method, 'blend');
     assert.deepEqual(DEFAULT_OPTIONS.excludeHeadings, DEFAULT_EXCLUDED_HEADINGS);
     for (const [key, definition] of Object.entries(SUMMARY_OPTIONS)) {
@@ -106,7 +106,7 @@ describe('options: the length grammar', () => {
       const parsed = parseLength(text);
       assert.equal(parsed.ok, false, text);
     }
-    assert.match((parseLength('lots') as { reason: string }).reason, /15% \(of the words\), 120w \(words\) or 6s \(sentences\)/);
+    assert.match((parseLength('lots') as { reason: string }).reason, /15% \(of the words\), 120w \(words\), 6s \(sentences\), 2min \(reading time\) or one of tldr, minute, detailed, auto/);
     assert.equal(LENGTH_BOUNDS.sentences.max, 1000);
   });
 

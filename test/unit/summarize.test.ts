@@ -1,4 +1,5 @@
 import assert from 'node:assert/strict';
+import { AUTO_LENGTH, autoWords } from '../../src/core/reading';
 import { readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { summarize } from '../../src/core/summarize';
@@ -36,10 +37,12 @@ describe('summarize: the demo documents', () => {
       assertTraceable(text, summary);
     });
 
-    it(`${name}: stays near the 15% default budget`, () => {
+    it(`${name}: stays near the default length (a reading time that grows with the document, reading.ts)`, () => {
       const summary = summarize(text, { format });
-      assert.ok(summary.stats.compression <= 0.15 + 0.001 || summary.stats.sentencesOut <= 3, `compression ${summary.stats.compression}`);
-      assert.ok(summary.stats.compression >= 0.08, `compression ${summary.stats.compression}`);
+      const limit = autoWords(summary.stats.wordsIn);
+      assert.ok(summary.stats.wordsOut <= limit || summary.stats.sentencesOut <= 3, `${summary.stats.wordsOut} words for ${limit}`);
+      assert.ok(summary.stats.wordsOut >= 0.5 * limit, `${summary.stats.wordsOut} words for ${limit}`);
+      assert.ok(summary.stats.minutesToRead <= AUTO_LENGTH.maxMinutes);
     });
   }
 

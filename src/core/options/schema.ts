@@ -70,8 +70,11 @@ const methodKind = choiceKind<RankerName>(METHOD_INFO.map((m) => ({ value: m.nam
 export const SUMMARY_OPTIONS = {
   budget: define<Budget>({
     kind: lengthKind,
-    default: { unit: 'ratio', value: 0.15 },
-    description: 'How long the summary is: a share of the words (15%), a number of words (120w, a hard limit: when no sentence fits, the summary is empty and says why) or of sentences (6s).',
+    default: { unit: 'auto', value: 0 },
+    description:
+      'How long the summary is: auto (the default: a reading time that grows slowly with the document, from under a minute to two minutes at 230 words a minute), ' +
+      'tldr (3 sentences), minute (about a one-minute read), detailed (25% of the words), a share of the words (15%), a reading time (2min), ' +
+      'a number of words (120w, a hard limit: when no sentence fits, the summary is empty and says why) or of sentences (6s).',
     setting: { key: 'length', order: 1 },
     cli: { flag: 'length', placeholder: 'LENGTH', commands: ['summarize', 'digest'] },
     panel: true,
@@ -187,6 +190,23 @@ export const SUMMARY_OPTIONS = {
   }),
 } as const;
 
+/**
+ * Where hosting services conventionally keep pull-request and issue templates (from memory: the
+ * GitHub and GitLab documentation on templates); a folder ends in "/".
+ */
+export const CONVENTIONAL_TEMPLATE_LOCATIONS: readonly string[] = [
+  '.github/pull_request_template.md',
+  '.github/PULL_REQUEST_TEMPLATE.md',
+  'pull_request_template.md',
+  'PULL_REQUEST_TEMPLATE.md',
+  'docs/pull_request_template.md',
+  'docs/PULL_REQUEST_TEMPLATE.md',
+  '.github/PULL_REQUEST_TEMPLATE/',
+  '.github/ISSUE_TEMPLATE/',
+  '.gitlab/merge_request_templates/',
+  '.gitlab/issue_templates/',
+];
+
 /** Options of the editor or the command line only (not part of a summary request). */
 export const HOST_OPTIONS = {
   liveDelay: define({
@@ -207,6 +227,14 @@ export const HOST_OPTIONS = {
     default: false,
     description: 'Also list the summary’s notes (sentences that may not stand alone) and abstract-check findings in the Problems view. They always show in the panel and as a faint mark in the editor.',
     setting: { key: 'problemsView', order: 17 },
+  }),
+  templateFiles: define<readonly string[]>({
+    kind: wordListKind(50, 1024),
+    default: CONVENTIONAL_TEMPLATE_LOCATIONS,
+    description:
+      'The team’s document templates: sentences that occur in one are never picked. Files, or folders (ending in /) whose Markdown, reStructuredText and text files are all templates; relative paths start at the workspace folder (the current folder on the command line). Locations that do not exist are passed over.',
+    setting: { key: 'templateFiles', order: 18, restricted: true, scope: 'machine-overridable' },
+    cli: { flag: 'template', placeholder: 'FILE', repeatable: true, commands: ['summarize'], help: 'A document template (file, or folder ending in /) whose sentences are never picked; repeat for several. Without it, the conventional pull-request and issue template locations are read when present.' },
   }),
 } as const;
 

@@ -3,7 +3,8 @@
  * balanced MMR:
  *  - fragments (see filler.ts) are never fillers: they never take a section's seat, and outside
  *    the quotas they are picked only when their relevance clears `fragmentFloor`;
- *  - a section gets a seat only when its best non-fragment sentence clears `qualityFloor`;
+ *  - a section gets a seat only when its best non-fragment sentence clears `qualityFloor`; a
+ *    section left out that way gives no sentence at all;
  *  - at most `maxRun` consecutive sentences of one paragraph;
  *  - no text twice (`textKey`: sentences with the same key say the same thing).
  * Every block only ever turns on as picks are added, which the lazy selector relies on.
@@ -20,6 +21,8 @@ export interface PickRuleInput {
   readonly fragment?: Uint8Array;
   /** Least relevance of a section's best sentence for the section to get a seat. */
   readonly qualityFloor?: number;
+  /** …or the most distinct sentences ranked above it (issue 11: seats given past the 30th were filler). */
+  readonly qualityRank?: number;
   /** Least relevance of a fragment picked outside the quotas. */
   readonly fragmentFloor?: number;
   /** Paragraph of each sentence, for the run limit. */
@@ -49,8 +52,16 @@ export class PickRules {
     return this.input.fragment?.[i] !== 1;
   }
 
+  private leftOut: ReadonlySet<number> = new Set();
+
+  /** Units left out of the balance: their sentences are not picked at all (never forced in as filler). */
+  leaveOut(units: Iterable<number>): void {
+    this.leftOut = new Set(units);
+  }
+
   /** May be picked outside the quotas. */
   free(i: number): boolean {
+    if (this.leftOut.has(this.input.unitOf[i]!)) return false;
     return this.filler(i) || this.input.relevance[i]! >= (this.input.fragmentFloor ?? 0);
   }
 
@@ -69,20 +80,45 @@ export class PickRules {
     return before + after + 1 > maxRun;
   }
 
-  /** Units whose best sentence may not hold a seat, and why. */
+  /**
+   * Units whose best sentence may not hold a seat, and why. The best sentence qualifies when its
+   * relevance clears `qualityFloor` or it ranks among the document's `qualityRank` best distinct
+   * non-fragment sentences (relevance is scaled per document, so one dominant sentence must not
+   * push every other section under the floor).
+   */
   unitsLeftOut(candidates: readonly number[]): Map<number, LeftOutReason> {
     const best = new Map<number, number>();
+    const ranked: number[] = [];
     for (const i of candidates) {
       const unit = this.input.unitOf[i]!;
       if (!best.has(unit)) best.set(unit, -1);
-      if (this.filler(i)) best.set(unit, Math.max(best.get(unit)!, this.input.relevance[i]!));
+      if (this.filler(i)) {
+        ranked.push(i);
+        if (best.get(unit)! < 0 || this.input.relevance[i]! > this.input.relevance[best.get(unit)!]!) best.set(unit, i);
+      }
     }
     const floor = this.input.qualityFloor ?? -Infinity;
+    const rankOf = this.distinctRanks(ranked);
     const out = new Map<number, LeftOutReason>();
-    for (const [unit, value] of best) {
-      if (value < 0) out.set(unit, 'onlyFragments');
-      else if (value < floor) out.set(unit, 'belowQualityFloor');
+    for (const [unit, sentence] of best) {
+      if (sentence < 0) out.set(unit, 'onlyFragments');
+      else if (this.input.relevance[sentence]! < floor && rankOf.get(sentence)! > (this.input.qualityRank ?? Infinity)) out.set(unit, 'belowQualityFloor');
     }
-    return out;
+    // A document whose every section falls short still gets a summary of what it has.
+    return out.size === best.size ? new Map() : out;
+  }
+
+  /** 1-based rank by relevance (ties to document order), copies of a text sharing their first copy's rank. */
+  private distinctRanks(sentences: readonly number[]): Map<number, number> {
+    const { relevance, textKey } = this.input;
+    const order = [...sentences].sort((a, b) => relevance[b]! - relevance[a]! || a - b);
+    const rankOfKey = new Map<number, number>();
+    const ranks = new Map<number, number>();
+    for (const i of order) {
+      const key = textKey?.[i] ?? -1 - i;
+      if (!rankOfKey.has(key)) rankOfKey.set(key, rankOfKey.size + 1);
+      ranks.set(i, rankOfKey.get(key)!);
+    }
+    return ranks;
   }
 }

@@ -12,6 +12,7 @@ import { apportionHamilton } from './apportion';
 import { LazyPool } from './lazy-pool';
 import { PickRules, type LeftOutReason, type PickRuleInput } from './pick-rules';
 import { RedundancyTracker } from './redundancy';
+import { autoWords, WORDS_PER_MINUTE } from '../reading';
 import type { Budget } from '../types';
 import type { SparseVector } from '../vectors';
 
@@ -79,11 +80,10 @@ function limitsFor(input: SelectionInput, candidateCount: number, candidateWords
     // An explicit word count is a hard limit; a summary still gets one sentence if any fits nowhere.
     return { maxSentences: candidateCount, wordLimit: budget.value, floorSentences: 0 };
   }
-  return {
-    maxSentences: candidateCount,
-    wordLimit: Math.round(budget.value * candidateWords),
-    floorSentences: Math.min(candidateCount, input.minSentences),
-  };
+  // Soft limits: a share of the words, a reading time, or the default that grows with the document.
+  const wordLimit =
+    budget.unit === 'minutes' ? Math.round(budget.value * WORDS_PER_MINUTE) : budget.unit === 'auto' ? autoWords(candidateWords) : Math.round(budget.value * candidateWords);
+  return { maxSentences: candidateCount, wordLimit, floorSentences: Math.min(candidateCount, input.minSentences) };
 }
 
 export function selectSentences(input: SelectionInput): Selection {
@@ -122,6 +122,7 @@ export function selectSentences(input: SelectionInput): Selection {
     rules.addPick(i);
   };
   const { quotas, leftOut } = input.balance ? planQuotas(input, candidates, limits, rules) : { quotas: new Map<number, number>(), leftOut: new Map<number, LeftOutReason>() };
+  rules.leaveOut(leftOut.keys());
   // With balance on but too few sentences for every section, each further pick from a section that
   // already has one counts for less, so the summary spreads over the sections with the best sentences.
   const repeatPenalty = input.balance && quotas.size === 0 ? SECTION_REPEAT_PENALTY : 0;

@@ -5,6 +5,7 @@
  * importance for the seats, and the rules (fragments, quality floor, run limit, no repeats).
  */
 import type { SummaryOptions } from '../options/resolve';
+import { defaultModel } from '../rank/trained/model';
 import type { AnalyzedDocument, RankResult } from '../types';
 import { sentenceVectorsOf, termIndexOf } from '../vectors';
 import { sentenceFitness, summaryRelevance } from './fitness';
@@ -20,6 +21,8 @@ export const SELECTION_DEFAULTS = {
    * Chosen on the benchmark's train half (bench/RESULTS.md, "Balance without filler").
    */
   qualityFloor: 0.2,
+  /** …or a rank among the document's distinct sentences at least this good (issue 11 counted picks past the 30th as filler). */
+  qualityRank: 30,
   /** Least relevance of a fragment picked outside the quotas (on its own merit). */
   fragmentFloor: 0.5,
   /** Most consecutive sentences of one paragraph (issue 11). */
@@ -37,7 +40,7 @@ export interface PreparedSelection {
 /** The sentence classes of a document under the options' templates and the model's template text. */
 export function kindsOf(analyzed: AnalyzedDocument, options: SummaryOptions): SentenceKinds {
   const wordCounts = analyzed.words.map((w) => w.length);
-  const keys = templateKeys(options.templates ?? [], options.model?.templateText ?? []);
+  const keys = templateKeys(options.templates ?? [], (options.model ?? defaultModel()).templateText ?? []);
   return sentenceKinds(analyzed.doc, wordCounts, keys);
 }
 
@@ -92,6 +95,7 @@ export function prepareSelection(analyzed: AnalyzedDocument, ranked: RankResult,
     mmrLambda: options.mmrLambda,
     fragment: kinds.fragment,
     qualityFloor: settings.qualityFloor,
+    qualityRank: settings.qualityRank,
     fragmentFloor: settings.fragmentFloor,
     paragraphOf,
     maxRun: takesAll ? Infinity : settings.maxRun,

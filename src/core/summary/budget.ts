@@ -45,9 +45,10 @@ export function honourBudget(input: BudgetInput): BudgetOutcome {
   if (words <= input.wordLimit || picked.length === 0) return { picked, notices: [] };
   const floor = Math.min(input.minSentences, candidates.length);
   const why = picked.length <= floor ? `it keeps at least ${plural(floor, 'sentence')} (the minimum-sentences option)` : 'no sentence is that short';
-  const share = Math.round(budget.value * 1000) / 10;
+  const allowance =
+    budget.unit === 'minutes' ? `a ${budget.value}-minute read` : budget.unit === 'auto' ? 'the default length' : `${Math.round(budget.value * 1000) / 10}% of the document`;
   return {
     picked,
-    notices: [`The summary has ${plural(words, 'word')}, more than the ${input.wordLimit.toLocaleString('en-US')} that ${share}% of the document allows, because ${why}.`],
+    notices: [`The summary has ${plural(words, 'word')}, more than the ${input.wordLimit.toLocaleString('en-US')} that ${allowance} allows, because ${why}.`],
   };
 }

@@ -19,12 +19,9 @@ import type {
   Summary,
 } from '../types';
 
-/** Silent reading speed for "reads in about N min" (common practice, no source). */
-export const WORDS_PER_MINUTE = 230;
+import { minutesToRead } from '../reading';
 
-export function minutesToRead(words: number): number {
-  return words / WORDS_PER_MINUTE;
-}
+export { WORDS_PER_MINUTE, minutesToRead } from '../reading';
 
 export interface ReportInput {
   readonly analyzed: AnalyzedDocument;

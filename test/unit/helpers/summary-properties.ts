@@ -5,6 +5,7 @@
  * rules as text so a failing case (and its shrunk form) explains itself.
  */
 import { resolveOptions } from '../../../src/core/options';
+import { autoWords, WORDS_PER_MINUTE } from '../../../src/core/reading';
 import type { SummarizeRequest } from '../../../src/core/summarize';
 import { wordTokens } from '../../../src/core/text/tokens';
 import type { Span, Summary } from '../../../src/core/types';
@@ -81,7 +82,10 @@ export function budgetFailures(summary: Summary, request: SummarizeRequest, unre
       }
     }
   } else {
-    const limit = Math.round(budget.value * summary.stats.wordsIn);
+    // A share of the words, a reading time at 230 words a minute, or the default length (reading.ts;
+    // counted here over all the document's words, which is at least the engine's candidate words).
+    const limit =
+      budget.unit === 'minutes' ? Math.round(budget.value * WORDS_PER_MINUTE) : budget.unit === 'auto' ? autoWords(summary.stats.wordsIn) : Math.round(budget.value * summary.stats.wordsIn);
     const repairCeiling = () => (options.repair === 'auto' && unrepaired ? Math.max(limit, unrepaired().stats.wordsOut) : limit);
     if (words > limit && picks.length > Math.max(1, options.minSentences) && words > repairCeiling()) {
       failures.push(`${words} words in ${picks.length} sentences for a ratio limit of ${limit} words (floor ${options.minSentences} sentences)`);
