@@ -19,6 +19,7 @@ async function main(): Promise<number> {
   if (mode === 'training-list') return (await import('./training-list')).run(process.argv.slice(3));
   if (mode === 'speed') return (await import('./speed')).run(process.argv.slice(3));
   if (mode === 'focus') return (await import('./focus')).run(process.argv.slice(3));
+  if (mode === 'digest') return (await import('./digest')).run(process.argv.slice(3));
   if (mode === 'audit') return (await import('./audit')).run(process.argv.slice(3));
   console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|training-list|focus|digest|audit [options]');
   return 2;

@@ -6,7 +6,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 
 export const RESULTS_FILE = 'bench/RESULTS.md';
 
-export function writeResultsBlock(path: string, name: 'quality' | 'quality-nova' | 'speed' | 'check' | 'focus' | 'digest' | 'audit' | 'churn' | 'select-speed', content: string): void {
+export function writeResultsBlock(path: string, name: 'quality' | 'quality-nova' | 'speed' | 'check' | 'focus' | 'digest' | 'digest-speed' | 'audit' | 'churn' | 'select-speed', content: string): void {
   const start = `<!-- ${name}:start -->`;
   const end = `<!-- ${name}:end -->`;
   const block = `${start}\n${content.trim()}\n${end}`;

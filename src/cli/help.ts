@@ -27,6 +27,7 @@ export function helpText(): string {
     '  tersely summarize FILE... [options]   summarize files ("-" reads standard input)',
     '  tersely check FILE [options]          check a hand-written abstract against its document',
     '  tersely train DIR [options]           learn sentence weights from documents with their own summaries',
+    '  tersely digest FILE|DIR... [options]  one digest of several documents, grouped by document',
     '  tersely --version                     print the version',
     '',
     'summarize options',
@@ -45,6 +46,17 @@ export function helpText(): string {
     helpLine('--input-format FORMAT', `read the document as ${inputFormats}`),
     helpLine('--format FORMAT', 'output: text (default) or json'),
     helpLine('--strict', 'exit 1 when a section is not covered or an abstract sentence is unsupported or contradicted (2 on usage errors)'),
+    '',
+    'digest options',
+    ...optionHelp('digest'),
+    helpLine('--input-format FORMAT', `read every input as ${inputFormats} (default: by file extension)`),
+    helpLine('--format FORMAT', 'output: text (default), markdown, or json (one object, a file per sentence)'),
+    helpLine('--quiet', 'no progress lines on standard error'),
+    ...paragraph(
+      'Folders are read recursively for Markdown, reStructuredText and text files (hidden entries and node_modules skipped). ' +
+        'Without --length the digest has 2 sentences per document, at most 40; a percentage is of all the documents\u2019 words. ' +
+        'A sentence that other documents repeat appears once, with "also in: FILE line N".',
+    ),
     '',
     'train options',
     helpLine('--reference-heading TEXT', 'heading of the section holding each document’s own summary (required)'),

@@ -14,6 +14,7 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
   summarize: async () => runSummarize,
   check: async () => (await import('./check-command')).runCheck,
   train: async () => (await import('./train')).runTrain,
+  digest: async () => (await import('./digest-command')).runDigest,
 };
 
 export async function main(argv: string[]): Promise<number> {

@@ -77,6 +77,11 @@ export { SELECTION_DEFAULTS } from './select/selection-input';
 export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-keywords';
 export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
 
+// Digests of several documents.
+export { startDigest, digestDocuments, DIGEST_DEFAULTS } from './digest/digest';
+export type { Digest, DigestBuilder, DigestDocument, DigestOccurrence, DigestRequest, DigestSentence, DocumentProgress } from './digest/digest';
+export { CROSS_DOCUMENT_DEFAULTS, DIGEST_WEIGHTS } from './digest/cross-document';
+
 // After a summary: repairs, section paths, Markdown, the abstract check.
 export { applyRepair } from './summary/apply-repair';
 export type { RepairOutcome } from './summary/apply-repair';

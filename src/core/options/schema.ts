@@ -39,7 +39,7 @@ export interface CliSurface {
   readonly help?: string;
 }
 
-export type CliCommand = 'summarize' | 'check' | 'train';
+export type CliCommand = 'summarize' | 'check' | 'train' | 'digest';
 
 export interface OptionDefinition<T> {
   readonly kind: ValueKind<T>;
@@ -76,7 +76,7 @@ export const SUMMARY_OPTIONS = {
       'tldr (3 sentences), minute (about a one-minute read), detailed (25% of the words), a share of the words (15%), a reading time (2min), ' +
       'a number of words (120w, a hard limit: when no sentence fits, the summary is empty and says why) or of sentences (6s).',
     setting: { key: 'length', order: 1 },
-    cli: { flag: 'length', placeholder: 'LENGTH', commands: ['summarize'] },
+    cli: { flag: 'length', placeholder: 'LENGTH', commands: ['summarize', 'digest'] },
     panel: true,
   }),
   minSentences: define({
@@ -91,7 +91,7 @@ export const SUMMARY_OPTIONS = {
     default: 'maxent',
     description: 'How sentences are scored.',
     setting: { key: 'method', order: 3 },
-    cli: { flag: 'method', placeholder: 'NAME', commands: ['summarize'] },
+    cli: { flag: 'method', placeholder: 'NAME', commands: ['summarize', 'digest'] },
     panel: true,
   }),
   balance: define({
@@ -114,14 +114,14 @@ export const SUMMARY_OPTIONS = {
     default: 1,
     description: 'Sentences every section with content gets when the length allows.',
     setting: { key: 'balance.minSentencesPerSection', order: 6 },
-    cli: { flag: 'min-per-section', placeholder: 'N', commands: ['summarize'] },
+    cli: { flag: 'min-per-section', placeholder: 'N', commands: ['summarize', 'digest'] },
   }),
   excludeHeadings: define<readonly string[]>({
     kind: wordListKind(200, 100),
     default: DEFAULT_EXCLUDED_HEADINGS,
     description: 'Sections with one of these headings (whole heading, any case, numbering ignored) are left out. Plain words, not patterns.',
     setting: { key: 'excludeHeadings', order: 7 },
-    cli: { flag: 'exclude', placeholder: 'HEADING', repeatable: true, commands: ['summarize', 'check'] },
+    cli: { flag: 'exclude', placeholder: 'HEADING', repeatable: true, commands: ['summarize', 'check', 'digest'] },
   }),
   preferPhrases: define<readonly string[]>({
     kind: wordListKind(200, 100),
@@ -142,7 +142,7 @@ export const SUMMARY_OPTIONS = {
     default: 'auto',
     description: 'Language for stop words and stemming: auto to detect it, or a language code.',
     setting: { key: 'language', order: 10 },
-    cli: { flag: 'lang', placeholder: 'CODE', commands: ['summarize', 'check', 'train'] },
+    cli: { flag: 'lang', placeholder: 'CODE', commands: ['summarize', 'check', 'train', 'digest'] },
   }),
   repair: define<'suggest' | 'auto'>({
     kind: choiceKind([
@@ -159,21 +159,21 @@ export const SUMMARY_OPTIONS = {
     default: false,
     description: 'Read table cells as prose.',
     setting: { key: 'includeTables', order: 12 },
-    cli: { flag: 'include-tables', commands: ['summarize', 'check'] },
+    cli: { flag: 'include-tables', commands: ['summarize', 'check', 'digest'] },
   }),
   includeFootnotes: define({
     kind: booleanKind,
     default: false,
     description: 'Read footnote and citation bodies as prose (reStructuredText).',
     setting: { key: 'includeFootnotes', order: 13 },
-    cli: { flag: 'include-footnotes', commands: ['summarize', 'check'] },
+    cli: { flag: 'include-footnotes', commands: ['summarize', 'check', 'digest'] },
   }),
   maxChars: define({
     kind: integerKind(1_000, 20_000_000),
     default: 3_000_000,
     description: 'Largest document (or selection) to read, in characters; larger ones get a message instead.',
     setting: { key: 'maxDocumentSize', order: 14, restricted: true, scope: 'machine-overridable' },
-    cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check', 'train'] },
+    cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check', 'train', 'digest'] },
   }),
   focus: define({
     kind: textKind(500),

@@ -1,0 +1,95 @@
+/**
+ * `tersely digest FILE|DIR...`: one digest of several documents. Files are read one at a time and
+ * handed to the engine's digest builder, which keeps only each document's best sentences, so
+ * memory stays bounded; a progress line per document goes to standard error (unless --quiet).
+ */
+import { readdir, stat } from 'node:fs/promises';
+import { join } from 'node:path';
+import { formatForFileName, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
+import { choiceFlag, UsageError } from './args';
+import { parseFlags } from './option-flags';
+import { InputError, readInput } from './read-input';
+import { digestToJson, digestToMarkdown, renderDigestText } from './render-digest';
+import { styleFor } from './style';
+import { forcedFormat } from './summarize-command';
+import { neutralizeControls, terminalSafeJson, warn } from './terminal-text';
+
+const OUTPUTS = ['text', 'markdown', 'json'] as const;
+/** More files than this in one digest is almost certainly a wrong folder (ours). */
+export const MAX_DIGEST_FILES = 20_000;
+
+/**
+ * The files named: a file as given, a folder walked in name order for the files a format claims
+ * (Markdown, reStructuredText, text), skipping hidden entries and node_modules.
+ */
+export async function expandPaths(paths: readonly string[]): Promise<string[]> {
+  const files: string[] = [];
+  const walk = async (folder: string): Promise<void> => {
+    const entries = (await readdir(folder, { withFileTypes: true })).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    for (const entry of entries) {
+      if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
+      const path = join(folder, entry.name);
+      if (entry.isDirectory()) await walk(path);
+      else if (entry.isFile() && formatForFileName(entry.name)) files.push(path);
+      if (files.length > MAX_DIGEST_FILES) throw new UsageError(`more than ${MAX_DIGEST_FILES.toLocaleString('en-US')} files to digest; name fewer folders`);
+    }
+  };
+  for (const path of paths) {
+    let isFolder = false;
+    try {
+      isFolder = (await stat(path)).isDirectory();
+    } catch {
+      // Not there: readInput says so for this path, in the same words as for summarize.
+    }
+    if (isFolder) await walk(path);
+    else files.push(path);
+  }
+  return files;
+}
+
+export async function runDigest(args: string[]): Promise<number> {
+  const { options, extra, positionals, notes } = parseFlags('digest', args, {
+    format: { type: 'string' },
+    'input-format': { type: 'string' },
+    'plain-text': { type: 'boolean' },
+    quiet: { type: 'boolean' },
+  });
+  if (positionals.length === 0) throw new UsageError('digest needs at least one FILE or folder');
+  if (positionals.includes('-')) throw new UsageError('digest reads files and folders, not standard input');
+  const output = choiceFlag('format', extra.format as string | undefined, OUTPUTS) ?? 'text';
+  const inputFormat = forcedFormat(extra, notes);
+  for (const note of notes) warn(`tersely: ${note}`);
+  const quiet = extra.quiet === true;
+  const maxChars = (options.maxChars as number | undefined) ?? SUMMARY_OPTIONS.maxChars.default;
+
+  const files = await expandPaths(positionals);
+  if (files.length === 0) throw new UsageError('no Markdown, reStructuredText or text files found in the folders given');
+  const builder = startDigest(options as DigestRequest);
+  let failures = 0;
+  for (const [k, path] of files.entries()) {
+    const counter = `[${k + 1}/${files.length}]`;
+    try {
+      const input = await readInput(path, 'markdown', maxChars);
+      const progress = builder.add(input.name, input.text, inputFormat ?? input.format);
+      if (progress.refused) {
+        failures++;
+        warn(`tersely: ${counter} ${path}: ${progress.refused}`);
+      } else if (!quiet) warn(`tersely: ${counter} ${path}: ${progress.kept} sentence${progress.kept === 1 ? '' : 's'} kept`);
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      failures++;
+      warn(`tersely: ${counter} ${path}: ${error.message}`);
+    }
+  }
+  const digest: Digest = builder.finish();
+  if (output === 'json') process.stdout.write(terminalSafeJson(digestToJson(digest)) + '\n');
+  else if (output === 'markdown') process.stdout.write(neutralizeControls(digestToMarkdown(digest)));
+  else process.stdout.write(renderDigestText(digest, styleFor(process.stdout)));
+  // The text view shows the notices itself; the others are for files and programs, so say them on stderr.
+  if (output !== 'text') for (const notice of digest.notices) warn(`tersely: note: ${notice}`);
+  if (digest.sentences.length === 0) {
+    warn('tersely: no digest: no sentence could be picked from the documents given.');
+    return 1;
+  }
+  return failures > 0 ? 1 : 0;
+}
