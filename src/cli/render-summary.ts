@@ -55,7 +55,8 @@ export function renderText(name: string, summary: Summary, style: Style): string
   if (summary.warnings.length > 0) {
     out.push('', style.warn(`May not stand alone (${summary.warnings.length}):`));
     for (const warning of summary.warnings) {
-      const context = warning.context.map((i) => `line ${lineOf(summary.document.sentences[i]!.span.start)}`).join(', ');
+      // Two context sentences can share a line: name each line once.
+      const context = [...new Set(warning.context.map((i) => lineOf(summary.document.sentences[i]!.span.start)))].map((line) => `line ${line}`).join(', ');
       out.push(`  ! line ${lineOf(warning.span.start)}: ${safe(warning.message)}${context ? ` — context at ${context}` : ''}`);
     }
   }
