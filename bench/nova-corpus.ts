@@ -18,7 +18,9 @@
  */
 import { readdir, readFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
-import { parseDocument, wordTokens, type ParsedDocument } from '../src/core/index';
+import { parseDocument, splitIntroduction, wordTokens, type ParsedDocument } from '../src/core/index';
+
+export { splitIntroduction } from '../src/core/index';
 import { CorpusMissing, MIN_BODY_SENTENCES, MIN_REFERENCE_WORDS, type CorpusDocument, type CorpusLoad, type Half } from './corpus';
 
 export const NOVA_CORPUS = '../shared/corpus/nova-specs/docs';
@@ -38,41 +40,6 @@ export function nameHash(name: string): number {
 
 export function novaHalfOf(file: string): Half {
   return nameHash(file) % 2 === 0 ? 'train' : 'test';
-}
-
-export interface IntroductionSplit {
-  /** The introduction, without lines that hold only a URL (the blueprint line). */
-  readonly referenceText: string;
-  /** The title block, then everything from the first section heading on. */
-  readonly bodyText: string;
-}
-
-/** A line that is only a URL, such as `https://blueprints.launchpad.net/nova/+spec/name`. */
-const URL_LINE = /^[ \t]*<?[a-zA-Z][a-zA-Z0-9+.-]*:\/\/\S+>?[ \t]*$/gm;
-
-/**
- * Splits a spec at its introduction; null when there is no section heading after it. The title
- * block is the document title (and subtitle) when the first heading is a title holding the other
- * sections; otherwise there is none and the introduction starts at the top.
- */
-export function splitIntroduction(text: string, parsed: ParsedDocument = readRst(text)): IntroductionSplit | null {
-  const headings = parsed.sections.filter((s) => s.headingSpan !== null);
-  const [first, second] = headings;
-  if (first === undefined) return null;
-  const local = (offset: number) => offset - parsed.baseOffset;
-  const titled = first.depth === 1 && second !== undefined && second.parent === first.index;
-  const firstSection = titled ? second! : first;
-  let introStart = 0;
-  if (titled) {
-    introStart = local(first.headingSpan!.end);
-    const subtitle = parsed.skipped.find((s) => s.reason === 'subtitle' && local(s.span.start) >= introStart);
-    if (subtitle !== undefined && local(subtitle.span.end) <= local(firstSection.headingSpan!.start)) introStart = local(subtitle.span.end);
-  }
-  const sectionStart = local(firstSection.headingSpan!.start);
-  return {
-    referenceText: text.slice(introStart, sectionStart).replace(URL_LINE, ''),
-    bodyText: text.slice(0, introStart) + '\n\n' + text.slice(sectionStart),
-  };
 }
 
 /** Applies the README's procedure to one file; returns the document or the reason it is skipped. */

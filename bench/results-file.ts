@@ -6,7 +6,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 
 export const RESULTS_FILE = 'bench/RESULTS.md';
 
-export function writeResultsBlock(path: string, name: 'quality' | 'speed' | 'check' | 'audit' | 'churn' | 'select-speed', content: string): void {
+export function writeResultsBlock(path: string, name: 'quality' | 'quality-nova' | 'speed' | 'check' | 'focus' | 'digest' | 'audit' | 'churn' | 'select-speed', content: string): void {
   const start = `<!-- ${name}:start -->`;
   const end = `<!-- ${name}:end -->`;
   const block = `${start}\n${content.trim()}\n${end}`;
@@ -16,6 +16,11 @@ export function writeResultsBlock(path: string, name: 'quality' | 'speed' | 'che
   let next: string;
   if (from >= 0 && to > from) next = current.slice(0, from) + block + current.slice(to + end.length);
   else if (name === 'quality') next = block + '\n\n' + current.trim();
+  else if (name === 'quality-nova' && current.includes('<!-- quality:end -->')) {
+    // Right after the Markdown corpus's block, so the two quality tables stay together.
+    const at = current.indexOf('<!-- quality:end -->') + '<!-- quality:end -->'.length;
+    next = current.slice(0, at) + '\n\n' + block + current.slice(at);
+  }
   else next = current.trim() + '\n\n' + block;
   writeFileSync(path, next.trim() + '\n');
 }

@@ -9,8 +9,12 @@
  * several runs after warm-up runs (the 2 MB and 10 MB rows: one cold run); the stage columns
  * time the same pipeline as summarize() (parse → analyze → rank → select+check) piece by piece,
  * so the bottleneck is visible.
- * --quick: fewer runs and no 2 MB / 10 MB rows; --full: also a 10 MB Markdown document with the
- * size cap raised (minutes, and a lot of memory).
+ * --quick: fewer runs and no 2 MB / 10 MB rows; --full: also 10 MB of plain text with the cap raised.
+ *
+ * Beside the engine, the same child process times a bare markdown-it parse of the same text
+ * (default options, `md.parse`), so the engine's time can be read as a multiple of the parser's
+ * on a machine whose speed varies; and a live row: a summary session (createSummarySession) on a
+ * 200 KB document, re-summarized after one paragraph is edited, edit after edit.
  */
 import os from 'node:os';
 import { RESULTS_FILE, writeResultsBlock } from './results-file';
@@ -18,15 +22,30 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join, resolve } from 'node:path';
-import { parseDocument, resolveOptions, summarize, type SummaryStage } from '../src/core/index';
+import markdownIt from 'markdown-it';
+import { createSummarySession, parseDocument, resolveOptions, summarize, type SummaryStage } from '../src/core/index';
 import type { DocumentFormat, Summary } from '../src/core/index';
 import { corpusDirectory } from './corpus';
 
 const KB = 1024;
 const MB = 1024 * KB;
 
-/** Targets from the project's issues (engine and robustness); printed beside the figures. */
-const TARGETS = { smallMs: 30, smallChars: 20 * KB, megabyteMs: 1500, megabyteRssMb: 300 };
+/** Targets from the project's issues (issue 12: engine speed); printed beside the figures. */
+const TARGETS = {
+  smallMs: 10,
+  megabyteMs: 400,
+  tenMegabyteMs: 5000,
+  /** Time per KB from 20 KB to 10 MB may grow by this factor at most. */
+  growth: 1.3,
+  shortLinesMs: 3000,
+  megabyteRssMb: 150,
+  /** Engine 1 MB time ÷ bare markdown-it parse of the same text, same process. */
+  parserRatio: 5,
+  liveMs: 15,
+};
+
+/** Sentences in the "short sentences" row ("Line N is ok."). */
+const SHORT_LINES = 100_000;
 
 interface Job {
   readonly label: string;
@@ -38,6 +57,12 @@ interface Job {
   readonly maxChars?: number;
   /** Time the stages separately as well (skipped for the slowest rows). */
   readonly stages: boolean;
+  /** 'short-lines': SHORT_LINES lines "Line N is ok." instead of corpus text. */
+  readonly input?: 'corpus' | 'short-lines';
+  /** Also time a bare markdown-it parse of the same text. */
+  readonly bare?: boolean;
+  /** Also time this many live re-summaries after one-paragraph edits (a summary session). */
+  readonly edits?: number;
 }
 
 interface JobResult {
@@ -56,6 +81,10 @@ interface JobResult {
   /** maxRSS of a fresh process that summarizes once: the memory one summary needs. */
   readonly singleRunPeakRssMb?: number;
   readonly peakHeapMb: number;
+  /** Median of bare markdown-it parses of the same text (same process, after the engine runs). */
+  readonly bareParseMs?: number;
+  /** Live row: median re-summary after a one-paragraph edit, pieces read per edit, edits timed. */
+  readonly live?: { readonly medianMs: number; readonly piecesRead: number; readonly pieces: number; readonly edits: number };
 }
 
 const median = (values: readonly number[]): number => {
@@ -101,8 +130,37 @@ function corpusText(dir: string, chars: number): string {
 
 // ------------------------------------------------------------------ one size, in a child process
 
+function shortLines(count: number): string {
+  return Array.from({ length: count }, (_, i) => `Line ${i + 1} is ok.`).join('\n') + '\n';
+}
+
+/**
+ * Re-summaries in one session after one-paragraph edits: each edit inserts a word into a
+ * paragraph further along the document (and the next edit starts from the edited text).
+ */
+function liveEdits(text: string, request: { format: DocumentFormat }, edits: number): NonNullable<JobResult['live']> {
+  const session = createSummarySession();
+  session.summarize(text, request);
+  const times: number[] = [];
+  let pieces = 0;
+  let piecesRead = 0;
+  let current = text;
+  for (let e = 0; e < edits; e++) {
+    // A sentence end in the e-th slice of the document: the edit lands inside a paragraph.
+    const at = current.indexOf('. ', Math.floor(((e + 0.5) / edits) * current.length));
+    if (at < 0) continue;
+    current = current.slice(0, at) + ' today' + current.slice(at);
+    const started = performance.now();
+    session.summarize(current, request);
+    times.push(performance.now() - started);
+    pieces = session.lastUpdate?.pieces ?? 0;
+    piecesRead += session.lastUpdate?.piecesRead ?? 0;
+  }
+  return { medianMs: median(times), piecesRead: piecesRead / Math.max(1, times.length), pieces, edits: times.length };
+}
+
 function runJob(job: Job, corpus: string): JobResult {
-  const text = corpusText(corpus, job.chars);
+  const text = job.input === 'short-lines' ? shortLines(SHORT_LINES) : corpusText(corpus, job.chars);
   const request = { format: job.format, ...(job.maxChars ? { maxChars: job.maxChars } : {}) };
   gc();
   const baselineRss = process.memoryUsage().rss;
@@ -148,10 +206,25 @@ function runJob(job: Job, corpus: string): JobResult {
     stages = { parse: median(times.parse), analyze: median(times.analyze), rank: median(times.rank), select: median(times.select) };
   }
 
+  let bareParseMs: number | undefined;
+  if (job.bare) {
+    const md = markdownIt();
+    const times: number[] = [];
+    for (let i = 0; i < Math.max(3, job.runs); i++) {
+      const started = performance.now();
+      md.parse(text, {});
+      times.push(performance.now() - started);
+    }
+    bareParseMs = median(times);
+  }
+  const live = job.edits ? liveEdits(text, request, job.edits) : undefined;
+
   return {
     label: job.label,
     format: job.format,
     chars: text.length,
+    ...(bareParseMs !== undefined ? { bareParseMs } : {}),
+    ...(live ? { live } : {}),
     sentences: last.document.sentences.length,
     picked: last.sentences.length,
     ...(last.refused !== undefined ? { refused: last.refused } : {}),
@@ -258,16 +331,17 @@ function standIn(name: string): unknown {
 function jobsFor(quick: boolean, full: boolean): Job[] {
   const jobs: Job[] = [
     { label: '20 KB', format: 'markdown', chars: 20 * KB, warmups: quick ? 3 : 10, runs: quick ? 9 : 31, stages: true },
-    { label: '200 KB', format: 'markdown', chars: 200 * KB, warmups: quick ? 1 : 2, runs: quick ? 3 : 7, stages: true },
-    { label: '1 MB', format: 'markdown', chars: MB, warmups: 1, runs: quick ? 1 : 3, stages: true },
+    { label: '200 KB', format: 'markdown', chars: 200 * KB, warmups: quick ? 1 : 2, runs: quick ? 3 : 7, stages: true, edits: quick ? 9 : 25 },
+    { label: '1 MB', format: 'markdown', chars: MB, warmups: 1, runs: quick ? 3 : 5, stages: true, bare: true },
     { label: '1 MB', format: 'plaintext', chars: MB, warmups: 1, runs: quick ? 1 : 3, stages: true },
+    { label: `${SHORT_LINES / 1000}k short lines`, format: 'plaintext', chars: 0, warmups: 0, runs: 1, stages: true, input: 'short-lines' },
   ];
   if (!quick) {
     // One cold run each from here: the point is that they finish, and how time grows.
     jobs.push({ label: '2 MB', format: 'markdown', chars: 2 * MB, warmups: 0, runs: 1, stages: true });
-    jobs.push({ label: '10 MB (cap raised)', format: 'plaintext', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
+    jobs.push({ label: '10 MB (cap raised)', format: 'markdown', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
   }
-  if (full) jobs.push({ label: '10 MB (cap raised)', format: 'markdown', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
+  if (full) jobs.push({ label: '10 MB (cap raised)', format: 'plaintext', chars: 10 * MB, warmups: 0, runs: 1, maxChars: 12 * MB, stages: false });
   return jobs;
 }
 
@@ -371,6 +445,28 @@ async function report(args: readonly string[], printed: string[]): Promise<numbe
         `1 MB ≤ ${TARGETS.megabyteMs} ms → ${ms(big.medianMs)} ms ${big.medianMs <= TARGETS.megabyteMs ? 'met' : 'NOT met'}; ` +
         `1 MB peak RSS (one run) ≤ ${TARGETS.megabyteRssMb} MB → ${(big.singleRunPeakRssMb ?? big.peakRssMb).toFixed(0)} MB ${(big.singleRunPeakRssMb ?? big.peakRssMb) <= TARGETS.megabyteRssMb ? 'met' : 'NOT met'}`);
     }
+    const mid = markdown('200 KB');
+    const huge = markdown('10 MB (cap raised)');
+    const lines = results.find((r): r is JobResult => !('error' in r) && r.label.endsWith('short lines'));
+    const verdict = (value: number, target: number) => (value <= target ? 'met' : 'NOT met');
+    const targetLines: string[] = [];
+    if (small && huge) {
+      const growth = huge.medianMs / huge.chars / (small.medianMs / small.chars);
+      targetLines.push(`time per KB 20 KB → 10 MB grows ≤ ×${TARGETS.growth} → ×${growth.toFixed(2)} ${verdict(growth, TARGETS.growth)}`);
+    }
+    if (huge) targetLines.push(`10 MB Markdown (cap raised) ≤ ${TARGETS.tenMegabyteMs} ms → ${ms(huge.medianMs)} ms ${verdict(huge.medianMs, TARGETS.tenMegabyteMs)}`);
+    if (lines) targetLines.push(`${SHORT_LINES.toLocaleString('en-US')} short sentences ≤ ${TARGETS.shortLinesMs} ms → ${ms(lines.medianMs)} ms ${verdict(lines.medianMs, TARGETS.shortLinesMs)}`);
+    if (big?.bareParseMs !== undefined) {
+      const ratio = big.medianMs / big.bareParseMs;
+      targetLines.push(`1 MB engine ÷ bare markdown-it parse (same process) ≤ ${TARGETS.parserRatio}× → ${ms(big.medianMs)} ms ÷ ${ms(big.bareParseMs)} ms = ${ratio.toFixed(1)}× ${verdict(ratio, TARGETS.parserRatio)}`);
+    }
+    if (mid?.live) {
+      targetLines.push(
+        `live re-summary after a one-paragraph edit, 200 KB ≤ ${TARGETS.liveMs} ms → median ${ms(mid.live.medianMs)} ms over ${mid.live.edits} edits ` +
+          `(${mid.live.piecesRead.toFixed(1)} of ${mid.live.pieces} pieces read per edit; whole summary ${ms(mid.medianMs)} ms) ${verdict(mid.live.medianMs, TARGETS.liveMs)}`,
+      );
+    }
+    for (const line of targetLines) console.log(`Target: ${line}`);
     const bigDoc = corpusText(corpus, 10 * MB);
     const started = performance.now();
     const refused = summarize(bigDoc, { format: 'markdown' });

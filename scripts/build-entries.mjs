@@ -19,7 +19,7 @@ export const ENTRIES = [
   { in: 'src/extension/extension-web.ts', out: 'dist/extension-web.js', platform: 'browser', format: 'cjs', external: ['vscode'], conditions: ['worker'] },
   { in: 'src/extension/engine-worker-web.ts', out: 'dist/engine-worker-web.js', platform: 'browser', format: 'iife', conditions: ['worker'] },
   // The side panel's script runs in the webview, a browser.
-  { in: 'src/webview/panel.ts', out: 'dist/webview.js', platform: 'browser', format: 'iife' },
+  { in: 'src/webview/panel.ts', out: 'dist/webview/panel.js', platform: 'browser', format: 'iife' },
 ];
 
 /** esbuild options for one entry. */

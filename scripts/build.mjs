@@ -25,6 +25,6 @@ if (only !== undefined && !ENTRIES.some((entry) => nameOf(entry) === only)) {
 mkdirSync(outdir, { recursive: true });
 await Promise.all(
   ENTRIES.filter((entry) => existsSync(entry.in) && (only === undefined || nameOf(entry) === only)).map((entry) =>
-    build({ ...buildOptions(entry, { production }), outfile: join(outdir, basename(entry.out)) }),
+    build({ ...buildOptions(entry, { production }), outfile: join(outdir, entry.out.replace(/^dist\//, '')) }),
   ),
 );

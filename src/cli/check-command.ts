@@ -1,10 +1,11 @@
 /** `tersely check FILE [--abstract-heading TEXT | --abstract FILE] [--format text|json] [--strict]` */
-import { checkAbstract, type AbstractReport, type AbstractSentenceCheck, type AbstractSource } from '../core/index';
+import { checkAbstract, SUMMARY_OPTIONS, type AbstractReport, type AbstractSentenceCheck, type AbstractSource } from '../core/index';
 import { choiceFlag, UsageError } from './args';
 import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
 import { styleFor, type Style } from './style';
 import { forcedFormat } from './summarize-command';
+import { neutralizeControls, terminalSafeJson, warn } from './terminal-text';
 
 /** How the command line names the abstract, added to the engine's message when none was found. */
 const HOW_TO_NAME_ABSTRACT = 'Name its heading with --abstract-heading TEXT, or give it in a file with --abstract FILE.';
@@ -18,6 +19,16 @@ type Check = Extract<AbstractReport, { ok: true }>;
 /** Exit status under --strict: 1 when a section is uncovered or a claim is unsupported or contradicted. */
 export function strictStatus(report: Check): 0 | 1 {
   return report.uncoveredSections.length > 0 || report.unsupportedSentences.length > 0 ? 1 : 0;
+}
+
+/** readInput, with the file named in its refusal as `summarize` does. */
+async function readNamed(path: string, stdinFormat: Parameters<typeof readInput>[1], maxChars: number) {
+  try {
+    return await readInput(path, stdinFormat, maxChars);
+  } catch (error) {
+    if (error instanceof InputError) throw new InputError(`${path}: ${error.message}`);
+    throw error;
+  }
 }
 
 export async function runCheck(args: string[]): Promise<number> {
@@ -35,19 +46,36 @@ export async function runCheck(args: string[]): Promise<number> {
   const format = choiceFlag('format', extra.format as string | undefined, ['text', 'json'] as const) ?? 'text';
   const strict = extra.strict === true;
   const inputFormat = forcedFormat(extra, notes);
-  for (const note of notes) process.stderr.write(`tersely: ${note}\n`);
-  const input = await readInput(positionals[0]!, inputFormat ?? 'markdown');
+  for (const note of notes) warn(`tersely: ${note}`);
+  // The same size cap as a summary (--max-size), applied while reading.
+  const maxChars = (options.maxChars as number | undefined) ?? SUMMARY_OPTIONS.maxChars.default;
+  const input = await readNamed(positionals[0]!, inputFormat ?? 'markdown', maxChars);
   let abstract: AbstractSource | undefined;
   if (heading !== undefined) abstract = { kind: 'heading', heading };
   if (abstractFile !== undefined) {
-    const file = await readInput(abstractFile);
+    const file = await readNamed(abstractFile, 'markdown', maxChars);
     abstract = { kind: 'text', text: file.text, format: file.format };
   }
   const report = checkAbstract(input.text, { ...options, format: inputFormat ?? input.format, ...(abstract ? { abstract } : {}) });
   if (!report.ok) throw new InputError(report.reason === 'noAbstract' || report.reason === 'missingHeading' ? `${report.error} ${HOW_TO_NAME_ABSTRACT}` : report.error);
-  if (format === 'json') process.stdout.write(JSON.stringify({ file: input.name, ...report }) + '\n');
-  else process.stdout.write(renderCheck(input.name, report, styleFor(process.stdout)));
+  if (format === 'json') process.stdout.write(terminalSafeJson({ file: input.name, ...report, notices: [...input.notices, ...report.notices] }) + '\n');
+  else {
+    // Document text is neutralized before styling, so the document cannot drive the terminal.
+    process.stdout.write(renderCheck(neutralizeControls(input.name), neutralizedReport(report), styleFor(process.stdout)));
+    for (const notice of input.notices) warn(`tersely: ${input.name}: note: ${notice}`);
+  }
   return strict ? strictStatus(report) : 0;
+}
+
+/** The report with every string from the document neutralized for a terminal (see terminal-text.ts). */
+function neutralizedReport(report: Check): Check {
+  const walk = (value: unknown): unknown => {
+    if (typeof value === 'string') return neutralizeControls(value);
+    if (Array.isArray(value)) return value.map(walk);
+    if (value !== null && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, walk(v)]));
+    return value;
+  };
+  return walk(report) as Check;
 }
 
 const pct = (x: number) => `${Math.round(x * 100)}%`;

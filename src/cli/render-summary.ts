@@ -29,6 +29,10 @@ export function renderText(name: string, summary: Summary, style: Style): string
     ),
   );
   out.push(style.dim(EXTRACTIVE_NOTE));
+  if (summary.focus) {
+    const f = summary.focus;
+    out.push(`${style.dim('focus:')} ${safe(f.text)} ${style.dim(`(${f.matchingSentences} matching sentence${f.matchingSentences === 1 ? '' : 's'}; only those are picked)`)}`);
+  }
   if (summary.keyPhrases.length > 0) out.push(`${style.dim('key phrases:')} ${summary.keyPhrases.map((k) => safe(k.text)).join(' · ')}`);
   for (const notice of summary.notices) out.push(style.warn(`note: ${safe(notice)}`));
   const leftOut = summary.leftOut ?? [];
@@ -77,6 +81,7 @@ export function summaryToJson(name: string, summary: Summary, input: { readonly 
       rank: p.rank,
       ...(p.edited ? { edited: p.edited.reason } : {}),
     })),
+    ...(summary.focus ? { focus: { ...summary.focus } } : {}),
     keyPhrases: summary.keyPhrases.map((k) => ({
       text: k.text,
       score: round(k.score),

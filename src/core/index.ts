@@ -6,6 +6,9 @@
 // The pipeline and its stages.
 export { summarize, prepareDocument, rankPrepared, finishSummary, rankOptionsOf, candidateSentences } from './summarize';
 export type { SummarizeRequest, SummaryStage, PreparedDocument, Preparation } from './summarize';
+// Sessions: repeated summaries of one document, reading again only what an edit changed.
+export { createSummarySession } from './session';
+export type { SummarySession, SessionUpdate } from './session';
 
 // Options: the schema every surface reads, and their resolution.
 export {
@@ -52,9 +55,15 @@ export { METHODS } from './rank/registry';
 export type { MethodEntry, Ranker } from './rank/registry';
 export { BLEND_WEIGHTS } from './rank/blend';
 export type { RankOptions, BlendComponent, BlendWeights } from './rank/blend';
-export { validateModel, loadModel, defaultModel, modelFeatureReport, ModelError, MODEL_FORMAT, MODEL_VERSION, MODEL_LIMITS } from './rank/trained/model';
-export type { BayesModel, ModelLoad } from './rank/trained/model';
-export { trainModel, exampleFromDocument } from './rank/trained/train-model';
+export { validateModel, defaultModel, modelFeatureReport, ModelError, MODEL_FORMAT, MODEL_VERSION, MODEL_LIMITS } from './rank/trained/model';
+export type { BayesModel } from './rank/trained/model';
+export { validateMaxentModel, defaultMaxentModel, maxentFeatureReport, MAXENT_KIND } from './rank/trained/maxent-model';
+export type { MaxentModel } from './rank/trained/maxent-model';
+export { loadModel, validateSentenceModel, modelMismatch } from './rank/trained/sentence-model';
+export type { SentenceModel, ModelKind, ModelLoad } from './rank/trained/sentence-model';
+export { trainModel, trainMaxentModel, exampleFromDocument, MODEL_KINDS } from './rank/trained/train-model';
+export { LABEL_RULES } from './rank/trained/labels';
+export type { LabelRule } from './rank/trained/labels';
 export type { TrainingExample, TrainOptions, DocumentExampleOptions } from './rank/trained/train-model';
 
 // Sentence kinds, template text and hysteresis (what is never picked, and what is kept).
@@ -89,7 +98,8 @@ export { DEFAULT_EXCLUDED_HEADINGS, HEADING_CLASSES, normalizeHeading, sameHeadi
 export { rougeN, rougeL, rougeS, rougeNTokens, rougeLTokens, tokenizeText } from './evaluate/rouge';
 export type { RougeOptions, RougeScore, TokenizedText } from './evaluate/rouge';
 export { greedyOracle } from './evaluate/oracle';
-export { splitReference } from './evaluate/reference-split';
+export { splitReference, splitIntroduction } from './evaluate/reference-split';
+export type { IntroductionSplit } from './evaluate/reference-split';
 
 export type * from './types';
 

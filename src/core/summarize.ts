@@ -16,6 +16,7 @@ import type { RankOptions } from './rank/blend';
 import { rankWith } from './rank/registry';
 import { selectSentences } from './select/select';
 import { prepareSelection, summaryCandidates } from './select/selection-input';
+import { focusNotice, focusSelection } from './focus/focus';
 import { honourBudget } from './summary/budget';
 import { describeSummary } from './summary/report';
 import type { AnalyzedDocument, DocumentFormat, ParsedDocument, RankerName, RankResult, Summary } from './types';
@@ -45,8 +46,13 @@ export interface PreparedDocument {
 
 export type Preparation = { readonly ok: true; readonly prepared: PreparedDocument } | { readonly ok: false; readonly refused: Summary };
 
-/** Checks the request and the input, then reads and analyses the text. Throws OptionsError on invalid options. */
-export function prepareDocument(text: string, request: SummarizeRequest = {}): Preparation {
+/** A request whose options and input passed the checks, or the summary that refuses the input. */
+export type CheckedRequest =
+  | { readonly ok: true; readonly options: SummaryOptions; readonly format: DocumentFormat; readonly baseOffset: number }
+  | { readonly ok: false; readonly refused: Summary };
+
+/** Checks the request's options and the input. Throws OptionsError on invalid options. */
+export function checkRequest(text: string, request: SummarizeRequest = {}): CheckedRequest {
   const { options, problems } = checkOptions(request);
   const format = request.format ?? 'markdown';
   const allProblems = [...problems];
@@ -61,10 +67,26 @@ export function prepareDocument(text: string, request: SummarizeRequest = {}): P
 
   const problem = inputProblem(text, options.maxChars);
   if (problem) return { ok: false, refused: refusedSummary(text, format, baseOffset, options, problem) };
+  return { ok: true, options, format, baseOffset };
+}
+
+/** Checks the request and the input, then reads and analyses the text. Throws OptionsError on invalid options. */
+export function prepareDocument(text: string, request: SummarizeRequest = {}): Preparation {
+  const checked = checkRequest(text, request);
+  if (!checked.ok) return checked;
+  const { options, format, baseOffset } = checked;
   request.onStage?.('reading');
   const { doc, notices } = withWellFormedTexts(parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes }));
   const analyzed = analyze(doc, resolveLanguage(doc, options.language));
   return { ok: true, prepared: { analyzed, options, ...(notices.length > 0 ? { notices } : {}) } };
+}
+
+/** Ranks, selects and checks a prepared document: the rest of summarize(). */
+export function summarizePrepared(prepared: PreparedDocument, request: SummarizeRequest = {}): Summary {
+  request.onStage?.('ranking');
+  const ranked = rankPrepared(prepared);
+  request.onStage?.('checking');
+  return finishSummary(prepared, ranked);
 }
 
 /** The options a ranker sees. */
@@ -82,12 +104,7 @@ export function rankPrepared(prepared: PreparedDocument, method: RankerName = pr
 
 export function summarize(text: string, request: SummarizeRequest = {}): Summary {
   const preparation = prepareDocument(text, request);
-  if (!preparation.ok) return preparation.refused;
-  const { prepared } = preparation;
-  request.onStage?.('ranking');
-  const ranked = rankPrepared(prepared);
-  request.onStage?.('checking');
-  return finishSummary(prepared, ranked);
+  return preparation.ok ? summarizePrepared(preparation.prepared, request) : preparation.refused;
 }
 
 /** The sentences a summary may pick (prose with words, outside excluded sections, not barred), in document order. */
@@ -99,15 +116,20 @@ export function candidateSentences(prepared: PreparedDocument, options: SummaryO
 }
 
 /** Selection and checks for ranked sentences: fitness, balance, MMR, the stand-alone check and repairs. */
-export function finishSummary(prepared: PreparedDocument, ranked: RankResult, options: SummaryOptions = prepared.options): Summary {
+export function finishSummary(prepared: PreparedDocument, generic: RankResult, options: SummaryOptions = prepared.options): Summary {
   const { analyzed } = prepared;
   const { doc } = analyzed;
-  const { input, candidates, candidateList, kinds } = prepareSelection(analyzed, ranked, options);
+  const general = prepareSelection(analyzed, generic, options);
+  // A focus re-ranks and narrows the candidates to the sentences that speak to it (focus/focus.ts).
+  const focused = options.focus !== '' ? focusSelection(analyzed, options.focus, generic, general) : null;
+  const { input, candidates, candidateList, kinds } = focused ?? general;
+  const ranked = focused?.ranked ?? generic;
   const { wordCounts } = input;
   const { unitOf } = candidates;
   const selection = selectSentences(input);
 
-  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: candidateList, wordLimit: selection.wordLimit });
+  // With a focus, too few matching sentences is the focus notice's to say, not the budget's.
+  const honoured = honourBudget({ budget: options.budget, minSentences: options.minSentences, picked: selection.picked, wordCounts, candidates: general.candidateList, wordLimit: selection.wordLimit });
   let picked = [...honoured.picked];
   let edited: ReadonlyMap<number, string> | undefined;
   if (options.repair === 'auto' && picked.length > 0) {
@@ -130,7 +152,14 @@ export function finishSummary(prepared: PreparedDocument, ranked: RankResult, op
   }
   const warnings = findStandAloneProblems(doc, picked, { scores: ranked.scores, ...(edited ? { edited } : {}) });
   const notices = [...(prepared.notices ?? []), ...honoured.notices];
-  return describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, leftOut: selection.leftOut, kinds, edited, warnings, notices });
+  if (focused) {
+    const words = picked.reduce((sum, i) => sum + wordCounts[i]!, 0);
+    const short = options.budget.unit === 'sentences' ? picked.length < options.budget.value : picked.length === candidateList.length && words < selection.wordLimit;
+    const notice = focusNotice(focused.report, short);
+    if (notice) notices.push(notice);
+  }
+  const summary = describeSummary({ analyzed, ranked, options, picked, wordCounts, candidates, quotas: selection.quotas, leftOut: selection.leftOut, kinds, edited, warnings, notices });
+  return focused ? { ...summary, focus: focused.report } : summary;
 }
 
 function refusedSummary(text: string, format: DocumentFormat, baseOffset: number, options: SummaryOptions, reason: string): Summary {

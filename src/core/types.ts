@@ -131,6 +131,7 @@ export type RankerName =
   | 'textrank'
   | 'centroid'
   | 'bayes'
+  | 'maxent'
   | 'blend';
 
 /** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
@@ -251,6 +252,17 @@ export interface KeyPhrase {
   readonly occurrences: readonly Span[];
 }
 
+/** How a focus was applied (present only on a focused summary). */
+export interface FocusReport {
+  /** The focus as given. */
+  readonly text: string;
+  /** Its distinct content terms, and how many of them the document uses. */
+  readonly terms: number;
+  readonly termsFound: number;
+  /** Sentences that share a term with the focus: the only ones a focused summary may pick. */
+  readonly matchingSentences: number;
+}
+
 /** Why a section with content got no sentence in the summary (balance reports it; coverage stays a goal). */
 export type LeftOutReason = 'belowQualityFloor' | 'onlyFragments' | 'onlyBarred';
 
@@ -273,6 +285,8 @@ export interface Summary {
   /** Picked sentences in document order. */
   readonly sentences: readonly PickedSentence[];
   readonly shares: readonly SectionShare[];
+  /** Set when the summary was asked for with a focus. */
+  readonly focus?: FocusReport;
   /** The document's key phrases, best first. */
   readonly keyPhrases: readonly KeyPhrase[];
   readonly stats: SummaryStats;

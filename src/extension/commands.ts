@@ -41,7 +41,7 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
       void context.panel.show();
       return outcomeResult(await context.summarizer.summarize(editor, 'selection', 'command'));
     }),
-  'tersely.insertSummary': (context) => withEditor(context, (editor) => context.actions.insertSummary(editor)),
+  'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
   'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
   'tersely.toggleLive': (context) => context.live.toggle(),

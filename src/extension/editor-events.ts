@@ -8,6 +8,7 @@ import * as vscode from 'vscode';
 import type { TerselyContext } from './context';
 import { SETTINGS_SECTION } from './settings-access';
 import { isCurrent, isSummarizable } from './summaries';
+import { shiftSpans } from './span-shift';
 
 const SETTINGS_REFRESH_DELAY_MS = 50;
 
@@ -17,8 +18,17 @@ export function watchEditors(context: TerselyContext): void {
   vscode.workspace.onDidChangeTextDocument(
     (event) => {
       if (event.contentChanges.length === 0 || !isSummarizable(event.document)) return;
-      context.abstractCheck.markStale(event.document);
       const key = event.document.uri.toString();
+      const insert = context.actions.pendingInsert;
+      const shownHere = store.get(key);
+      if (insert && insert.key === key && shownHere && event.contentChanges.length === 1 && event.contentChanges[0]!.rangeOffset === insert.offset && event.contentChanges[0]!.text.length === insert.length && event.contentChanges[0]!.rangeLength === 0) {
+        // Insert Summary's own edit: the summary moves with the text and stays on screen.
+        shownHere.summary = shiftSpans(shownHere.summary, insert.offset, insert.length);
+        shownHere.version = event.document.version;
+        summarizer.display(shownHere);
+        return;
+      }
+      context.abstractCheck.markStale(event.document);
       if (context.live.on && vscode.window.activeTextEditor?.document === event.document) {
         debouncer.schedule(key, context.settings.read().host.liveDelay, () => {
           const editor = vscode.window.visibleTextEditors.find((e) => e.document === event.document);

@@ -12,7 +12,7 @@ type Remembered = Partial<Record<ToPanel['type'], ToPanel>>;
 
 /** The only files the panel loads. */
 export function panelResources(extensionUri: vscode.Uri): { script: vscode.Uri; style: vscode.Uri } {
-  return { script: vscode.Uri.joinPath(extensionUri, 'dist', 'webview.js'), style: vscode.Uri.joinPath(extensionUri, 'media', 'panel.css') };
+  return { script: vscode.Uri.joinPath(extensionUri, 'dist', 'webview', 'panel.js'), style: vscode.Uri.joinPath(extensionUri, 'media', 'panel.css') };
 }
 
 export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposable {
@@ -37,8 +37,9 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     this.view = view;
     this.onFirstShow();
     const { script, style } = panelResources(this.extensionUri);
-    // Exactly the two files the panel loads, nothing else of the extension (a root admits itself and what is below it).
-    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [script, style] };
+    // Roots are folders: the panel's own script folder (no other bundle in it) and media/, which
+    // in the VSIX holds only the stylesheet and icons (.vscodeignore).
+    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [vscode.Uri.joinPath(script, '..'), vscode.Uri.joinPath(style, '..')] };
     view.webview.html = panelHtml({
       cspSource: view.webview.cspSource,
       nonce: makeNonce(),
@@ -60,6 +61,8 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     }
     if (parsed.message.type === 'ready') {
       this.replay();
+      if (this.focusWhenReady) void this.view?.webview.postMessage({ type: 'focus' } satisfies ToPanel);
+      this.focusWhenReady = false;
       return;
     }
     this.onMessage(parsed.message);
@@ -105,9 +108,17 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
       this.view.show(true);
       return;
     }
+    if (focus && this.view) {
+      this.view.show(false);
+      void this.view.webview.postMessage({ type: 'focus' } satisfies ToPanel);
+      return;
+    }
+    // A panel that is not there yet gets the focus once its script says it is ready.
+    this.focusWhenReady = focus;
     await vscode.commands.executeCommand(`${VIEW_ID}.focus`);
-    if (focus) void this.view?.webview.postMessage({ type: 'focus' } satisfies ToPanel);
   }
+
+  private focusWhenReady = false;
 
   private replay(): void {
     for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {

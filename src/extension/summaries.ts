@@ -12,7 +12,8 @@ export interface ShownSummary {
   readonly id: number;
   readonly key: string;
   readonly uri: vscode.Uri;
-  readonly version: number;
+  /** Moves on with the document only through Insert Summary's own edit (summary-actions.ts). */
+  version: number;
   readonly scope: Scope;
   readonly selection: Span | null;
   readonly format: DocumentFormat;

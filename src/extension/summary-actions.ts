@@ -8,7 +8,8 @@ import type { RepairArgs } from './diagnostics';
 import { rangeOf } from './editor-ranges';
 import { applyRepair } from '../core/index';
 import { isCurrent } from './summaries';
-import { planInsertion, summaryForClipboard } from './summary-text';
+import { planInsertion, summaryForClipboard, type InsertTarget } from './summary-text';
+import type { Summary } from '../core/index';
 
 export class SummaryActions {
   constructor(private readonly context: TerselyContext) {}
@@ -50,29 +51,68 @@ export class SummaryActions {
     return true;
   }
 
-  async insertSummary(editor: vscode.TextEditor): Promise<{ inserted: boolean; offset: number; placement: string } | undefined> {
+  /** Set while Insert Summary's own edit is applied, so the summary moves with the text instead of going stale. */
+  pendingInsert: { readonly key: string; readonly offset: number; readonly length: number } | undefined;
+
+  /**
+   * Inserts the summary as one undoable edit where the user chooses: at the cursor, or under a
+   * heading they pick (`where` skips the picker: 'cursor' or a heading's text). The summary on
+   * screen stays valid: its places move with the inserted text.
+   */
+  async insertSummary(editor: vscode.TextEditor, where?: string): Promise<{ inserted: boolean; offset: number; placement: string } | undefined> {
+    const { t } = this.context.wording;
     const shown = await this.context.summarizer.currentOrNew(editor);
     if (!shown) return undefined;
     if (shown.summary.sentences.length === 0) {
-      void vscode.window.showInformationMessage('The summary is empty, so there is nothing to insert.');
+      void vscode.window.showInformationMessage(t('The summary is empty, so there is nothing to insert.'));
       return undefined;
     }
     const document = editor.document;
-    const plan = planInsertion(shown.summary, document.getText(), shown.format, document.offsetAt(editor.selection.active), shown.scope);
-    // One edit with undo stops on both sides: a single Undo removes the whole block.
-    const inserted = await editor.edit((builder) => builder.insert(document.positionAt(plan.offset), plan.text), { undoStopBefore: true, undoStopAfter: true });
-    return { inserted, offset: plan.offset, placement: plan.placement };
+    const cursor = document.offsetAt(editor.selection.active);
+    const target = where === undefined ? await this.pickTarget(shown.summary, document, cursor) : resolveTarget(shown.summary, where, cursor);
+    if (!target) return undefined;
+    const plan = planInsertion(shown.summary, document.getText(), shown.format, target, this.context.wording);
+    this.pendingInsert = { key: shown.key, offset: plan.offset, length: plan.text.length };
+    try {
+      // One edit with undo stops on both sides: a single Undo removes the whole block.
+      const inserted = await editor.edit((builder) => builder.insert(document.positionAt(plan.offset), plan.text), { undoStopBefore: true, undoStopAfter: true });
+      return { inserted, offset: plan.offset, placement: plan.placement };
+    } finally {
+      this.pendingInsert = undefined;
+    }
+  }
+
+  private async pickTarget(summary: Summary, document: vscode.TextDocument, cursor: number): Promise<InsertTarget | undefined> {
+    const { t, count } = this.context.wording;
+    const cursorItem = { label: t('At the cursor (line {0})', count(document.positionAt(cursor).line + 1)), target: { kind: 'cursor', offset: cursor } as InsertTarget };
+    const headings = summary.document.sections
+      .filter((section) => section.headingSpan !== null && section.heading.length > 0)
+      .map((section) => ({
+        label: t('Under “{0}”', section.heading),
+        description: t('line {0}', count(document.positionAt(section.headingSpan!.start).line + 1)),
+        target: { kind: 'heading', section: section.index } as InsertTarget,
+      }));
+    const choice = await vscode.window.showQuickPick([cursorItem, ...headings], { title: t('Insert the summary'), placeHolder: t('Where should the summary go? (one edit; Undo removes it)') });
+    return choice?.target;
   }
 
   async copySummary(editor: vscode.TextEditor | undefined): Promise<string | undefined> {
+    const { t, count } = this.context.wording;
     const shown = editor ? await this.context.summarizer.currentOrNew(editor) : this.context.store.inPanel();
     if (!shown) {
-      void vscode.window.showInformationMessage('There is no summary to copy yet: run Summarize Document first.');
+      void vscode.window.showInformationMessage(t('There is no summary to copy yet: run Summarize Document first.'));
       return undefined;
     }
-    const markdown = summaryForClipboard(shown.summary);
+    const document = vscode.workspace.textDocuments.find((d) => d.uri.toString() === shown.key && d.version === shown.version);
+    const markdown = summaryForClipboard(shown.summary, document?.getText() ?? null, shown.format, shown.documentName, this.context.wording);
     await vscode.env.clipboard.writeText(markdown);
-    vscode.window.setStatusBarMessage(`Tersely: copied a summary of ${shown.summary.sentences.length} sentences.`, 4000);
+    vscode.window.setStatusBarMessage(t('Tersely: copied a summary of {0} sentences.', count(shown.summary.sentences.length)), 4000);
     return markdown;
   }
+}
+
+function resolveTarget(summary: Summary, where: string, cursor: number): InsertTarget | undefined {
+  if (where === 'cursor') return { kind: 'cursor', offset: cursor };
+  const section = summary.document.sections.find((s) => s.headingSpan !== null && s.heading === where);
+  return section ? { kind: 'heading', section: section.index } : undefined;
 }

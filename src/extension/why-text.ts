@@ -15,7 +15,7 @@ const MIN_TERM_LENGTH = 4;
 const COMMON = new Set(['this', 'that', 'with', 'from', 'have', 'will', 'when', 'what', 'which', 'their', 'there', 'they', 'them', 'then', 'than', 'into', 'about', 'also', 'been', 'were', 'more', 'most', 'some', 'such', 'only', 'over', 'each', 'other', 'should', 'would', 'could']);
 
 /** Feature names the engine reports, worded as what a high value means. */
-const FEATURE_WORDS: Readonly<Record<string, string>> = {
+export const FEATURE_WORDS: Readonly<Record<string, string>> = {
   lexrank: 'among the most central sentences (many others say something similar)',
   textrank: 'shares words with many other sentences',
   centroid: 'close to the document’s main topic',

@@ -10,6 +10,8 @@ import assert from 'node:assert/strict';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { summarize } from '../../src/core/summarize';
+import { checkAbstract } from '../../src/core/index';
+import { abstractView } from '../../src/extension/abstract-view';
 import { LineIndex } from '../../src/extension/ranges';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
@@ -36,25 +38,51 @@ async function main(): Promise<void> {
   const { page, blocked } = session;
   const consoleErrors: string[] = [];
   page.on('pageerror', (error) => consoleErrors.push(error.message));
+  // The panel's own warnings and errors (a dropped message, a script error) come through the page's console.
+  page.on('console', (message) => {
+    if (message.type() === 'error' || message.type() === 'warning') consoleErrors.push(`${message.type()}: ${message.text().slice(0, 300)}`);
+  });
   try {
     await page.goto(`${base}/?folder=${encodeURIComponent(workspace)}`, { waitUntil: 'domcontentloaded' });
     await waitForWorkbench(page, DEMO);
     mark('workbench up');
 
-    // ---- Summarize Document on the demo ----
+    // ---- the empty panel: one Summarize, Copy and Insert disabled, focus moved into the panel ----
     const demo = expectedSummary(DEMO);
     await openFile(page, DEMO, 'Quillhaven Bike Share');
+    await runCommand(page, 'Tersely: Show Summary Panel');
+    const emptyPanel = panelLocator(page);
+    await emptyPanel.locator('.empty').waitFor({ timeout: 60_000 });
+    const empty = await poll(
+      async () =>
+        (await panelFrame(page)).evaluate(() => ({
+          summarizeButtons: Array.from(document.querySelectorAll('button')).filter((b) => /summarize/i.test(b.textContent ?? '')).length,
+          copyDisabled: (document.querySelector('[data-command="copySummary"]') as HTMLButtonElement | null)?.disabled ?? null,
+          insertDisabled: (document.querySelector('[data-command="insertSummary"]') as HTMLButtonElement | null)?.disabled ?? null,
+          focusInPanel: document.hasFocus() && document.activeElement !== document.body,
+        })),
+      (e) => e.focusInPanel,
+      10_000,
+      'focus to move into the panel',
+    );
+    assert.deepEqual(empty, { summarizeButtons: 1, copyDisabled: true, insertDisabled: true, focusInPanel: true }, 'empty state: one Summarize, disabled actions, focus in the panel');
+    checks['emptyState'] = empty;
+    await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '00-empty-state.png') });
+    mark('empty state checked');
+
+    // ---- Summarize Document on the demo ----
+    await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
     const commandStarted = await runCommand(page, 'Tersely: Summarize Document');
     const panel = panelLocator(page);
     await panel.locator('.note').waitFor({ timeout: 60_000 });
     const panelShownAt = Date.now();
-    await panel.locator('.summary button.sentence').first().waitFor({ timeout: 60_000 });
+    await panel.locator('.summary-list li.pick').first().waitFor({ timeout: 60_000 });
     const panelFilledAt = Date.now();
     checks['commandToPanelMs'] = panelFilledAt - commandStarted;
     mark(`panel filled (${checks['commandToPanelMs']} ms after the command)`);
 
-    const groups = await panel.locator('.summary .group').evaluateAll((nodes) =>
-      nodes.map((node) => [node.getAttribute('data-heading'), node.querySelectorAll('button.sentence').length] as [string, number]),
+    const groups = await panel.locator('.summary-list li.group').evaluateAll((nodes) =>
+      nodes.map((node) => [node.getAttribute('data-heading'), node.querySelectorAll('li.pick').length] as [string, number]),
     );
     const expectedGroups = demo.summary.shares.filter((share) => share.picked > 0).map((share) => [share.heading || UNTITLED_SECTION, share.picked] as [string, number]);
     checks['groups'] = groups;
@@ -63,6 +91,46 @@ async function main(): Promise<void> {
     assert.deepEqual([...groups].sort(), [...expectedGroups].sort(), 'grouped by the same sections, same counts');
     assert.ok(groups.length > 1, 'more than one section is represented');
     assert.match(await panel.locator('.note').innerText(), /extractive/i, 'the extractive-summary note is visible');
+    // Summary first: the first sentence sits above the figures, which start collapsed; the wording is ours.
+    const layout = await (await panelFrame(page)).evaluate(() => {
+      const first = document.querySelector('li.pick')!.getBoundingClientRect();
+      const details = document.querySelector('details[data-part="details"]') as HTMLDetailsElement;
+      const list = document.querySelector('.summary-list')!;
+      const picks = Array.from(document.querySelectorAll('li.pick')) as HTMLElement[];
+      return {
+        firstPickTop: first.top,
+        detailsTop: details.getBoundingClientRect().top,
+        detailsOpen: details.open,
+        words: document.querySelector('[data-figure="words"]')!.textContent,
+        reading: document.querySelector('[data-figure="reading"]')!.textContent,
+        listLabel: list.getAttribute('aria-label'),
+        tabStops: picks.filter((p) => p.tabIndex === 0).length,
+        picks: picks.length,
+        innerTabStops: picks.slice(1).flatMap((p) => Array.from(p.querySelectorAll('button, summary')) as HTMLElement[]).filter((e) => e.tabIndex >= 0).length,
+      };
+    });
+    checks['layout'] = layout;
+    assert.ok(layout.firstPickTop < layout.detailsTop && !layout.detailsOpen, 'the summary comes before the collapsed figures');
+    assert.match(layout.words ?? '', /^\d[\d,]* of \d[\d,]* words$/);
+    assert.match(layout.reading ?? '', /^reads in about \d+ min \(document about \d+ min\)$/);
+    assert.ok(layout.listLabel && layout.listLabel.length > 10, 'the list has a label');
+    assert.equal(layout.tabStops, 1, 'one Tab stop for the whole list');
+    assert.equal(layout.innerTabStops, 0, 'controls of the other sentences are out of the Tab order');
+    const announced = await poll(async () => (await panelFrame(page)).evaluate(() => document.getElementById('announcer')?.textContent ?? ''), (t) => t.length > 0, 5_000, 'the announcement');
+    assert.match(announced, /^Summary ready: \d+ sentences/);
+    checks['announced'] = announced;
+    // Highlights: a thin underline and a left-edge bar, no background fill.
+    const look = await page.evaluate(() => {
+      const els = Array.from(document.querySelectorAll('.editor-instance .monaco-editor [class*="ced-"]')) as HTMLElement[];
+      const styles = els.map((e) => getComputedStyle(e));
+      return {
+        underline: styles.some((c) => c.borderBottomWidth === '1px' && c.borderBottomStyle === 'solid'),
+        bar: styles.some((c) => c.borderLeftWidth === '3px' && c.borderLeftStyle === 'solid'),
+        filled: styles.filter((c) => c.backgroundColor !== 'rgba(0, 0, 0, 0)' && c.backgroundColor !== 'transparent').length,
+      };
+    });
+    checks['highlightLook'] = look;
+    assert.ok(look.underline && look.bar, 'underline and left-edge bar drawn');
 
     const decorations = await poll(() => countDecorations(page), (n) => n > 0, 15_000, 'highlights in the editor');
     checks['decorations'] = decorations;
@@ -73,13 +141,13 @@ async function main(): Promise<void> {
     await page.screenshot({ path: join(artifacts, '01-panel-beside-document.png') });
 
     // ---- clicking a sentence selects its source range ----
-    const buttons = panel.locator('.summary button.sentence');
+    const buttons = panel.locator('.summary-list li.pick');
     const target = buttons.nth(1);
     const sentenceIndex = Number(await target.getAttribute('data-sentence'));
     const pick = demo.summary.sentences.find((p) => p.sentence === sentenceIndex);
     assert.ok(pick, `sentence ${sentenceIndex} is in the engine's summary`);
     const end = new LineIndex(demo.text).positionAt(pick.span.end);
-    await target.click();
+    await target.locator('.pick-text').click();
     const cursor = await poll(() => cursorStatus(page), (c) => c?.line === end.line + 1, 10_000, 'the cursor to move');
     assert.deepEqual(cursor, { line: end.line + 1, column: end.character + 1, selected: pick.span.end - pick.span.start }, 'selection covers the sentence');
     checks['reveal'] = cursor;
@@ -87,15 +155,32 @@ async function main(): Promise<void> {
     await page.screenshot({ path: join(artifacts, '02-sentence-selected.png') });
 
     // ---- state survives hiding and re-showing the view ----
-    const before = await panel.locator('.summary button.sentence').count();
+    // Keyboard: arrow keys move within the list; why-this-sentence opens in words, numbers behind a toggle.
+    await buttons.first().focus();
+    await page.keyboard.press('ArrowDown');
+    const focusedIndex = await (await panelFrame(page)).evaluate(() => Array.from(document.querySelectorAll('li.pick')).indexOf(document.activeElement as Element));
+    assert.equal(focusedIndex, 1, 'ArrowDown moves to the second sentence');
+    const why = buttons.first().locator('details.why');
+    await why.locator('> summary').click();
+    const whyWords = await why.locator('.why-words').innerText();
+    assert.match(whyWords, /ranked \d+(st|nd|rd|th) of \d+ sentences\.$/);
+    assert.equal(await why.locator('details.numbers').evaluate((d) => (d as HTMLDetailsElement).open), false, 'numbers are behind a toggle');
+    await why.locator('details.numbers > summary').click();
+    assert.match(await why.locator('.why-numbers').innerText(), /score/);
+    checks['why'] = whyWords;
+    await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '02b-why-this-sentence.png') });
+
+    const before = await panel.locator('.summary-list li.pick').count();
     await runCommand(page, 'View: Toggle Primary Side Bar Visibility');
     await runCommand(page, 'View: Toggle Primary Side Bar Visibility');
-    await panel.locator('.summary button.sentence').first().waitFor({ timeout: 15_000 });
-    assert.equal(await panel.locator('.summary button.sentence').count(), before, 'same summary after hide/show');
+    await panel.locator('.summary-list li.pick').first().waitFor({ timeout: 15_000 });
+    assert.equal(await panel.locator('.summary-list li.pick').count(), before, 'same summary after hide/show');
     mark('panel kept its summary across hide/show');
 
     // ---- the same command again, with the panel open and the engine thread warm ----
     const warm: number[] = [];
+    // A new summary starts at the top of the panel.
+    await (await panelFrame(page)).evaluate(() => window.scrollTo(0, document.body.scrollHeight));
     for (let i = 0; i < 5; i++) {
       const previousId = await panel.locator('[data-summary-id]').getAttribute('data-summary-id');
       await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
@@ -104,19 +189,20 @@ async function main(): Promise<void> {
       warm.push(Date.now() - warmStarted);
     }
     checks['commandToPanelWarmMs'] = warm;
+    assert.equal(await (await panelFrame(page)).evaluate(() => window.scrollY), 0, 'scrolled to the top for the new summary');
     mark(`summarized again: panel refilled ${warm.join(', ')} ms after the command`);
 
     // ---- live mode follows edits ----
-    const wordsBefore = await panel.locator('[data-figure="words"] dd').innerText();
+    const wordsBefore = await panel.locator('[data-figure="words"]').innerText();
     await runCommand(page, 'Tersely: Toggle Live Summary');
     await panel.locator('#live[aria-pressed="true"]').waitFor({ timeout: 10_000 });
     await page.locator('.editor-instance .monaco-editor .view-lines').first().click();
     await page.keyboard.press('Control+End');
     await page.keyboard.type('\n\nA closing note adds that every rebalancing truck will now carry spare batteries for the electric fleet.\n');
     // The panel follows while typing goes on; in the end it must show the text as typed (16 more words).
-    const wordsIn = (text: string) => Number(text.split('→')[0]!.replace(/[^0-9]/g, ''));
-    const wordsAfter = await poll(() => panel.locator('[data-figure="words"] dd').innerText(), (text) => wordsIn(text) >= wordsIn(wordsBefore) + 16, 30_000, 'the panel to follow the edit');
-    checks['live'] = { wordsBefore, wordsAfter };
+    const wordsIn = (text: string) => Number(text.split(' of ')[1]!.replace(/[^0-9]/g, ''));
+    const wordsAfter = await poll(() => panel.locator('[data-figure="words"]').innerText(), (text) => wordsIn(text) >= wordsIn(wordsBefore) + 16, 30_000, 'the panel to follow the edit');
+    checks['live'] = { wordsBefore, wordsAfter, newPicks: await panel.locator('li.pick.new').count() };
     mark(`live update: ${wordsBefore} became ${wordsAfter}`);
     // The typing left the viewport at the end of the document; highlights are drawn only where visible.
     await page.keyboard.press('Control+Home');
@@ -142,11 +228,12 @@ async function main(): Promise<void> {
     // The live edit above is not saved; the engine ran on the saved text, so summarize that again.
     await page.keyboard.press('Control+Z');
     await runCommand(page, 'File: Revert File');
-    await panel.locator('#length-value').fill(String(flagged.length));
-    await panel.locator('#length-value').press('Enter');
+    await panel.locator('details[data-part="settings"] > summary').click();
+    await panel.locator('#length').fill(`${flagged.length}s`);
+    await panel.locator('#length').press('Enter');
     await runCommand(page, 'Tersely: Summarize Document');
     const warnings = panel.locator('.summary .warning');
-    await poll(() => panel.locator('.summary button.sentence').count(), (n) => n === flagged!.length, 20_000, `a ${flagged.length}-sentence summary`);
+    await poll(() => panel.locator('.summary-list li.pick').count(), (n) => n === flagged!.length, 20_000, `a ${flagged.length}-sentence summary`);
     await poll(() => warnings.count(), (n) => n === flagged!.warnings, 10_000, 'the inline warnings');
     const repairs = warnings.first().locator('.repairs button');
     assert.equal(await repairs.count(), flagged.repairs, 'a button per repair');
@@ -169,12 +256,11 @@ async function main(): Promise<void> {
     // The webview host adds a script of its own to the panel's document; count the scripts before the payloads.
     const scriptsBefore = await (await panelFrame(page)).evaluate(() => Array.from(document.scripts).map((s) => s.src.replace(/^.*\//, '') || 'inline'));
     await openFile(page, XSS, 'Sanitizer regression notes');
-    await panel.locator('#length-unit').selectOption('percent');
-    await panel.locator('#length-value').fill('100');
-    await panel.locator('#length-value').press('Enter');
+    await panel.locator('#length').fill('100%');
+    await panel.locator('#length').press('Enter');
     await runCommand(page, 'Tersely: Summarize Document');
     await panel.locator('.document-name', { hasText: XSS }).waitFor({ timeout: 30_000 });
-    await poll(() => panel.locator('.summary button.sentence').count(), (n) => n >= 10, 20_000, 'the whole payload document in the panel');
+    await poll(() => panel.locator('.summary-list li.pick').count(), (n) => n >= 10, 20_000, 'the whole payload document in the panel');
     const frame = await panelFrame(page);
     const inside = await frame.evaluate(() => {
       const content = document.getElementById('content')!;
@@ -192,7 +278,7 @@ async function main(): Promise<void> {
     assert.equal(topGlobal, null, 'no payload set a global in the workbench');
     assert.equal(inside.activeElements, 0, 'no element was created from document text');
     assert.deepEqual(inside.scripts, scriptsBefore, 'no script was added by the payloads');
-    assert.equal(inside.scripts.filter((src) => src === 'webview.js').length, 1, 'the panel’s own script, once');
+    assert.equal(inside.scripts.filter((src) => src === 'panel.js').length, 1, 'the panel’s own script, once');
     assert.match(inside.csp, /default-src 'none'/);
     assert.ok(inside.text.includes('<script>') && inside.text.includes('onerror='), 'payloads are shown as text');
     assert.ok(inside.overflow <= 1, `a 2,000-character word wraps (overflow ${inside.overflow}px)`);
@@ -200,7 +286,7 @@ async function main(): Promise<void> {
     const dirtyTabs = await page.locator('.tabs-container .tab.dirty').allInnerTexts();
     assert.deepEqual(dirtyTabs, [], 'no document is modified (the demo was reverted above)');
     assert.equal(readFileSync(join(workspace, XSS), 'utf8'), xssOnDisk, 'the payload document on disk is unchanged');
-    const ownResource = (url: string) => /\.vscode-resource\.vscode-cdn\.net\/.*\/(media\/panel\.css|dist\/webview\.js)$/.test(url);
+    const ownResource = (url: string) => /\.vscode-resource\.vscode-cdn\.net\/.*\/(media\/panel\.css|dist\/webview\/panel\.js)$/.test(url);
     const fromPanel = blocked.slice(blockedBefore).filter((request) => (request.frameUrl.includes('webview') && !ownResource(request.url)) || /example\.invalid/.test(request.url));
     assert.deepEqual(fromPanel, [], 'no network request was attempted from the panel');
     checks['xss'] = { ...inside, text: `${inside.text.length} characters`, topGlobal, dirtyTabs, blockedSincePayloads: blocked.slice(blockedBefore) };
@@ -208,12 +294,78 @@ async function main(): Promise<void> {
     await page.screenshot({ path: join(artifacts, '05-payloads-inert.png') });
 
     // ---- keyboard: Tab to a sentence, Enter reveals it ----
-    const first = panel.locator('.summary button.sentence').first();
+    const first = panel.locator('.summary-list li.pick').first();
     await first.focus();
     await page.keyboard.press('Enter');
     const keyboardCursor = await poll(() => cursorStatus(page), (c) => (c?.selected ?? 0) > 0 && c?.line !== cursor.line, 10_000, 'Enter on a sentence to select it');
     checks['keyboardReveal'] = keyboardCursor;
     mark(`Enter on a focused sentence selected ${keyboardCursor?.selected} characters`);
+
+    // ---- the abstract check: its own place, named for its document, lines that reveal their text ----
+    await openFile(page, 'abstract-check.md', 'Text-Message Appointment Reminders');
+    await runCommand(page, 'Tersely: Check Abstract');
+    const checkPart = panel.locator('section.check');
+    await checkPart.waitFor({ timeout: 30_000 });
+    assert.match(await checkPart.locator('.check-title').innerText(), /abstract-check\.md/);
+    const lineLinks = checkPart.locator('button.link');
+    assert.ok((await lineLinks.count()) > 0, 'the check links to body lines');
+    const linkLabel = await lineLinks.first().innerText();
+    // Expected from the engine run here: the first link's place, selected in the editor (the cursor sits at its end).
+    const checkText = readFileSync(join(workspace, 'abstract-check.md'), 'utf8');
+    const checkView = abstractView(checkAbstract(checkText, { format: 'markdown' }), 'abstract-check.md');
+    const firstLink = checkView.panel.items.flatMap((item) => item.links)[0]!;
+    assert.equal(linkLabel, firstLink.label, 'the panel shows the engine’s first link');
+    const place = checkView.places[firstLink.target]!;
+    const placeEnd = new LineIndex(checkText).positionAt(place.end);
+    await lineLinks.first().click();
+    const checkCursor = await poll(() => cursorStatus(page), (c) => c?.line === placeEnd.line + 1 && c.selected === place.end - place.start, 10_000, `the cursor to select the text of ${linkLabel}`);
+    checks['abstractCheck'] = { link: linkLabel, cursor: checkCursor, items: await checkPart.locator('li.check-item').count() };
+    await checkPart.scrollIntoViewIfNeeded();
+    await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '06-abstract-check.png') });
+    mark(`abstract check: ${checks['abstractCheck'] ? JSON.stringify(checks['abstractCheck']) : ''}`);
+
+    // ---- back to the demo summary; narrow and wide panel; dark, light and high-contrast themes ----
+    await openFile(page, DEMO, 'Quillhaven Bike Share');
+    await panel.locator('#length').fill('6s');
+    await panel.locator('#length').press('Enter');
+    await runCommand(page, 'Tersely: Summarize Document');
+    await poll(() => panel.locator('.summary-list li.pick').count(), (n) => n === 6, 20_000, 'the 6-sentence summary');
+    const widths: Record<string, unknown> = {};
+    for (const width of [260, 600]) {
+      await setSidebarWidth(page, width);
+      const fit = await (await panelFrame(page)).evaluate(() => {
+        const toolbar = document.querySelector('.toolbar') as HTMLElement;
+        const buttons = Array.from(toolbar.querySelectorAll('button')) as HTMLElement[];
+        return {
+          width: document.documentElement.clientWidth,
+          overflow: document.documentElement.scrollWidth - document.documentElement.clientWidth,
+          toolbarRows: new Set(buttons.map((b) => Math.round(b.getBoundingClientRect().top))).size,
+          firstPickVisible: (document.querySelector('li.pick') as HTMLElement).getBoundingClientRect().top < window.innerHeight,
+        };
+      });
+      widths[String(width)] = fit;
+      assert.ok(Math.abs(fit.width - width) <= 40, `panel about ${width} px wide (got ${fit.width})`);
+      assert.ok(fit.overflow <= 1, `nothing overflows at ${width} px`);
+      assert.equal(fit.toolbarRows, 1, `the toolbar fits on one row at ${width} px`);
+      assert.ok(fit.firstPickVisible, `the first summary sentence is in view at ${width} px`);
+      await page.screenshot({ path: join(artifacts, `07-width-${width}.png`) });
+      await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, `07-panel-${width}px.png`) });
+    }
+    checks['widths'] = widths;
+    await setSidebarWidth(page, 340);
+    for (const [name, theme] of [
+      ['light', 'Default Light Modern'],
+      ['high-contrast', 'Default High Contrast'],
+      ['dark', 'Default Dark Modern'],
+    ] as const) {
+      const user = JSON.parse(readFileSync(settingsFile, 'utf8')) as Record<string, unknown>;
+      user['workbench.colorTheme'] = theme;
+      writeFileSync(settingsFile, JSON.stringify(user, null, 2));
+      await poll(() => page.evaluate(() => document.querySelector('.monaco-workbench')!.className), (c) => (name === 'light' ? /\bvs\b(?!-dark)/.test(c) : name === 'dark' ? /vs-dark/.test(c) : /hc-black/.test(c)), 15_000, `the ${name} theme`);
+      await page.waitForTimeout(800);
+      await page.screenshot({ path: join(artifacts, `08-theme-${name}.png`) });
+    }
+    mark('widths and themes captured');
 
     // ---- where it ran and how long activation took, from the extension's own log ----
     const logText = await outputChannelText(page, 'Tersely');
@@ -236,6 +388,7 @@ async function main(): Promise<void> {
   } catch (error) {
     checks['ok'] = false;
     checks['error'] = error instanceof Error ? error.stack : String(error);
+    checks['pageErrors'] = consoleErrors.slice(-30);
     await page.screenshot({ path: join(artifacts, 'zz-ui-failure.png') }).catch(() => undefined);
   } finally {
     writeFileSync(join(artifacts, 'ui-result.json'), JSON.stringify(checks, null, 2));
@@ -247,6 +400,19 @@ async function main(): Promise<void> {
   }
   mark('UI checks passed');
   process.exit(0);
+}
+
+/** Drags the sash between the side bar and the editor until the side bar is `width` px wide. */
+async function setSidebarWidth(page: import('playwright-core').Page, width: number): Promise<void> {
+  const sidebar = await page.locator('.part.sidebar').boundingBox();
+  if (!sidebar) throw new Error('no side bar');
+  const x = sidebar.x + sidebar.width;
+  const y = sidebar.y + sidebar.height / 2;
+  await page.mouse.move(x, y);
+  await page.mouse.down();
+  await page.mouse.move(sidebar.x + width, y, { steps: 8 });
+  await page.mouse.up();
+  await page.waitForTimeout(400);
 }
 
 void main();

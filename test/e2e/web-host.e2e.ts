@@ -51,12 +51,12 @@ function expectedSentences(file: string, model?: unknown, user = userSettings())
 
 async function panelGroups(page: Page): Promise<[string, number][]> {
   return panelLocator(page)
-    .locator('.summary .group')
-    .evaluateAll((nodes) => nodes.map((node) => [node.getAttribute('data-heading') ?? '', node.querySelectorAll('button.sentence').length] as [string, number]));
+    .locator('.summary-list li.group')
+    .evaluateAll((nodes) => nodes.map((node) => [node.getAttribute('data-heading') ?? '', node.querySelectorAll('li.pick').length] as [string, number]));
 }
 
 async function panelSentences(page: Page): Promise<string[]> {
-  return panelLocator(page).locator('.summary button.sentence').allInnerTexts();
+  return panelLocator(page).locator('.summary-list li.pick .pick-text').allInnerTexts();
 }
 
 /** Writes the test inputs into the workspace: a large document (for visible progress) and a model that differs from the built-in one. */
@@ -132,7 +132,7 @@ async function main(): Promise<void> {
     const panel = panelLocator(page);
     await panel.locator('.note').waitFor({ timeout: 60_000 });
     const panelShownAt = Date.now();
-    await panel.locator('.summary button.sentence').first().waitFor({ timeout: 60_000 });
+    await panel.locator('.summary-list li.pick').first().waitFor({ timeout: 60_000 });
     const panelFilledAt = Date.now();
     const firstSummaryMs = panelFilledAt - entered;
     mark(`panel filled ${firstSummaryMs} ms after the command`);

@@ -106,6 +106,19 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.equal(removed.length, 1);
   });
 
+  it('reads the body where it uses the negated word, even when that sentence shares little else with the claim', () => {
+    // The closest body sentence using "late" says plainly that the ferry runs late.
+    const claim = 'On Sundays the island ferry is not late.';
+    const findings = checkNegation(input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is late most mornings.']));
+    assert.equal(findings.length, 1);
+    assert.equal(findings[0]!.abstractSays, 'is not late');
+    assert.match(findings[0]!.bodySays ?? '', /^late/);
+    // A body sentence that negates the word too agrees with the claim.
+    assert.deepEqual(checkNegation(input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is not late on Sundays.'])), []);
+    // A word the body never uses is left to the support rule.
+    assert.deepEqual(checkNegation(input('On Sundays the island ferry is not crowded.', ['On Sundays the island ferry carries bikes.'])), []);
+  });
+
   it('stays silent when the pool agrees with the claim', () => {
     const findings = checkNegation(input('The new timetable does not reduce waiting times at the pier.', ['The new timetable does reduce waiting times at the pier.'], ['The new timetable does not reduce waiting times at the pier much.']));
     assert.deepEqual(findings, []);
@@ -124,6 +137,12 @@ describe('check consistency: modality', () => {
     assert.equal(swapped[0]!.abstractSays, 'must publish');
     assert.equal(swapped[0]!.bodySays, 'may publish');
     assert.deepEqual(checkModality(input('Operators will publish the winter timetable online.', ['Operators publish the winter timetable online.'])), []);
+  });
+
+  it('accepts the claim\'s modal on the word anywhere in the body\'s closest sentences about it', () => {
+    const claim = 'Operators must publish the winter timetable online.';
+    assert.equal(checkModality(input(claim, ['Operators may publish the winter timetable online.'])).length, 1);
+    assert.deepEqual(checkModality(input(claim, ['Operators may publish the winter timetable online.'], ['Each operator must publish its timetable.'])), []);
   });
 });
 

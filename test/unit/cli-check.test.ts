@@ -50,4 +50,27 @@ describe('command line: tersely check', function () {
     const notCovered = [...stdout.matchAll(/✗ (.+?) \(line \d+\): not covered/gu)].map((m) => m[1]!);
     for (const heading of notCovered) assert.doesNotMatch(stdout, new RegExp(`supported \\(line \\d+\\): [^\\n]*\\(${heading}\\)`));
   });
+
+  it('applies the size cap while reading (--max-size), naming the file', () => {
+    const run = tersely(['check', DEMO, '--max-size', '1000']);
+    assert.equal(run.code, 1);
+    assert.equal(run.stdout, '');
+    assert.match(run.stderr, /^tersely check: media\/demo\/abstract-check\.md: is larger than the 1,000-character limit/);
+  });
+
+  it('shows control characters from the document instead of obeying them; JSON keeps the text exact with C1 escaped', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'tersely-check-'));
+    const file = join(dir, 'ferry.md');
+    const hostile = 'From May the harbour ferry \u001b]0;owned\u0007adds a late crossing \u009b31m at eleven on Fridays.';
+    writeFileSync(file, ['# Harbour ferry', '', '## Summary', '', hostile, '', '## Timetable', '', 'From May the harbour ferry adds a late crossing at eleven on Fridays and Saturdays.', ''].join('\n'));
+    const text = tersely(['check', file]);
+    assert.equal(text.code, 0, text.stderr);
+    assert.ok(!/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/u.test(text.stdout), 'no raw control character reaches the terminal');
+    assert.ok(text.stdout.includes('\u241b]0;owned\u2407'), 'ESC and BEL are shown as control pictures');
+    const json = tersely(['check', file, '--format', 'json']);
+    assert.equal(json.code, 0, json.stderr);
+    assert.ok(!/[\u007f-\u009f]/u.test(json.stdout), 'C1 controls are escaped in JSON');
+    const parsed = JSON.parse(json.stdout) as { abstract: { sentences: { text: string }[] } };
+    assert.ok(parsed.abstract.sentences.some((s) => s.text.includes('\u001b]0;owned\u0007') && s.text.includes('\u009b31m')), 'the text itself is unchanged');
+  });
 });

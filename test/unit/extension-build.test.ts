@@ -33,7 +33,7 @@ describe('extension build', function () {
     const browser = ENTRIES.filter((entry) => entry.platform === 'browser');
     assert.deepEqual(
       browser.map((entry) => entry.out),
-      ['dist/extension-web.js', 'dist/engine-worker-web.js', 'dist/webview.js'],
+      ['dist/extension-web.js', 'dist/engine-worker-web.js', 'dist/webview/panel.js'],
     );
     for (const entry of browser) {
       const options = buildOptions(entry);

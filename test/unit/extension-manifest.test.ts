@@ -78,7 +78,7 @@ describe('extension manifest (package.json contributes)', () => {
     assert.match(entries, /src\/extension\/extension\.ts', out: 'dist\/extension\.cjs', platform: 'node'/);
     assert.match(entries, /src\/extension\/extension-web\.ts', out: 'dist\/extension-web\.js', platform: 'browser', format: 'cjs', external: \['vscode'\]/);
     const ignore = read('.vscodeignore');
-    for (const bundle of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/extension-web.js', 'dist/engine-worker-web.js', 'dist/webview.js']) {
+    for (const bundle of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/extension-web.js', 'dist/engine-worker-web.js', 'dist/webview/panel.js']) {
       assert.ok(ignore.includes(`!${bundle}`), `${bundle} goes into the VSIX`);
     }
     assert.equal(manifest.capabilities.untrustedWorkspaces.supported, 'limited');
@@ -102,6 +102,6 @@ describe('extension manifest (package.json contributes)', () => {
     const ignore = read('.vscodeignore').split('\n').filter((line) => line && !line.startsWith('#'));
     assert.equal(ignore[0], '**');
     const kept = ignore.filter((line) => line.startsWith('!')).map((line) => line.slice(1));
-    for (const path of kept) assert.match(path, /^(dist\/|media\/|package\.json$|README|CHANGELOG|LICENSE)/, path);
+    for (const path of kept) assert.match(path, /^(dist\/|media\/|l10n\/\*\.json$|package\.json$|package\.nls(\.\*)?\.json$|README|CHANGELOG|LICENSE)/, path);
   });
 });

@@ -127,8 +127,8 @@ function blocks(markdown: string): RootContent[] {
 describe('extension summary text: copy and insert', () => {
   it('inserts a Markdown document’s summary as a block right under its title (checked with mdast)', () => {
     const summary = ferrySummary();
-    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', 200, 'document');
-    assert.equal(plan.placement, 'underTitle');
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', { kind: 'heading', section: 1 });
+    assert.equal(plan.placement, 'underHeading');
     assert.equal(plan.offset, '# Night Ferry Timetable'.length);
     const result = FERRY_TEXT.slice(0, plan.offset) + plan.text + FERRY_TEXT.slice(plan.offset);
     // The rest of the document is unchanged, byte for byte.
@@ -147,7 +147,7 @@ describe('extension summary text: copy and insert', () => {
 
   it('follows the document’s CRLF line endings', () => {
     const crlf = FERRY_TEXT.replace(/\n/g, '\r\n');
-    const plan = planInsertion(ferrySummary(crlf), crlf, 'markdown', 0, 'document');
+    const plan = planInsertion(ferrySummary(crlf), crlf, 'markdown', { kind: 'heading', section: 1 });
     assert.ok(plan.text.includes('\r\n'));
     assert.ok(!/[^\r]\n/.test(plan.text), 'no bare LF');
   });
@@ -155,11 +155,11 @@ describe('extension summary text: copy and insert', () => {
   it('puts a selection’s summary, and plain text, at the cursor, on a line of its own', () => {
     const summary = ferrySummary();
     const cursor = FERRY_TEXT.indexOf('returns');
-    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', cursor, 'selection');
+    const plan = planInsertion(summary, FERRY_TEXT, 'markdown', { kind: 'cursor', offset: cursor });
     assert.equal(plan.placement, 'atCursor');
     assert.equal(plan.offset, cursor);
     assert.ok(plan.text.startsWith('\n\n'));
-    const plain = planInsertion(summary, FERRY_TEXT, 'plaintext', 0, 'document');
+    const plain = planInsertion(summary, FERRY_TEXT, 'plaintext', { kind: 'cursor', offset: 0 });
     assert.equal(plain.offset, 0);
     assert.match(plain.text, /^Summary \(extractive/);
     assert.equal(plain.text.split('\n').filter((line) => line.startsWith('- ')).length, summary.sentences.length);
@@ -168,7 +168,7 @@ describe('extension summary text: copy and insert', () => {
   it('copies Markdown whose sentence text cannot turn into markup (checked with mdast)', () => {
     const hostile = '<img src=x onerror=alert(1)> *not emphasis* [link](javascript:alert(1))';
     const summary = ferrySummary(FERRY_TEXT, { sentence: hostile });
-    const markdown = summaryForClipboard(summary);
+    const markdown = summaryForClipboard(summary, null, 'markdown');
     // External reference: micromark/mdast must see no HTML, emphasis or link nodes in the list items.
     const types = new Set<string>();
     const visit = (node: { type: string; children?: unknown[] }): void => {

@@ -2,7 +2,8 @@ import assert from 'node:assert/strict';
 import { analyze } from '../../src/core/analyze';
 import { FEATURES, rankBins, sentenceFeatures } from '../../src/core/rank/trained/features';
 import { labelSentences, termOverlapF1 } from '../../src/core/rank/trained/labels';
-import { defaultModel, loadModel, rankBayes, validateModel, ModelError } from '../../src/core/rank/trained/model';
+import { defaultModel, rankBayes, validateModel, ModelError } from '../../src/core/rank/trained/model';
+import { loadModel } from '../../src/core/rank/trained/sentence-model';
 import { exampleFromDocument, trainModel, type TrainingExample } from '../../src/core/rank/trained/train-model';
 import { parseDocument } from '../../src/core/formats/registry';
 

@@ -9,7 +9,8 @@ import defaultModelJson from '../../media/models/default-model.json';
 import { analyze } from '../../src/core/analyze';
 import { parseDocument } from '../../src/core/formats/registry';
 import { OptionsError } from '../../src/core/options/resolve';
-import { loadModel, MODEL_LIMITS, ModelError, rankBayes, validateModel } from '../../src/core/rank/trained/model';
+import { MODEL_LIMITS, ModelError, rankBayes, validateModel } from '../../src/core/rank/trained/model';
+import { loadModel } from '../../src/core/rank/trained/sentence-model';
 import { summarize } from '../../src/core/summarize';
 
 type Json = Record<string, unknown>;

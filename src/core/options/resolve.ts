@@ -3,14 +3,14 @@
  * program) into complete summary options. Every value is checked against the schema; an invalid
  * one is reported with the option's name and the reason, never clamped or replaced in silence.
  */
-import { loadModel, type BayesModel } from '../rank/trained/model';
+import { loadModel, modelMismatch, type SentenceModel } from '../rank/trained/sentence-model';
 import { checkTemplates } from '../select/template-text';
 import type { DocumentFormat, Span } from '../types';
 import { SUMMARY_OPTIONS, type SummaryOptionKey, type SummaryOptionValues } from './schema';
 
 export interface SummaryOptions extends SummaryOptionValues {
-  /** A validated trained sentence model for the trained method; the shipped one when absent. */
-  readonly model?: BayesModel;
+  /** A validated trained sentence model for the trained methods; the shipped one of each kind when absent. */
+  readonly model?: SentenceModel;
   /** The team's document templates (their text): sentences found in them are never picked. */
   readonly templates?: readonly { readonly text: string; readonly format: DocumentFormat }[];
   /**
@@ -65,8 +65,12 @@ export function checkOptions(partial: SummaryRequestOptions = {}): CheckedOption
   }
   if (partial.model !== undefined) {
     const loaded = loadModel(partial.model);
-    if (loaded.ok) options.model = loaded.model;
-    else problems.push({ key: 'model', reason: loaded.error });
+    if (!loaded.ok) problems.push({ key: 'model', reason: loaded.error });
+    else {
+      const mismatch = modelMismatch(options.method as SummaryOptions['method'], loaded.model);
+      if (mismatch === null) options.model = loaded.model;
+      else problems.push({ key: 'model', reason: mismatch });
+    }
   }
   if (partial.templates !== undefined) {
     try {

@@ -175,6 +175,12 @@ export const SUMMARY_OPTIONS = {
     setting: { key: 'maxDocumentSize', order: 14, restricted: true, scope: 'machine-overridable' },
     cli: { flag: 'max-size', placeholder: 'CHARS', commands: ['summarize', 'check', 'train'] },
   }),
+  focus: define({
+    kind: textKind(500),
+    default: '',
+    description: 'A question or a few words to focus the summary on: only sentences that use its words are picked, ranked towards it; empty for a general summary.',
+    cli: { flag: 'focus', placeholder: 'TEXT', commands: ['summarize'] },
+  }),
   mmrLambda: define({
     kind: numberKind(0, 1),
     // Carbonell & Goldstein (1998) leave λ to the application; 0.7 favours relevance while still

@@ -11,9 +11,10 @@ import { normalize, type Normalization } from '../scale';
 import { positionRank, type PositionOptions } from './position';
 import { textRank, type TextRankOptions } from './textrank';
 import { withDefaultsOnce } from './memo';
-import { rankBayes, type BayesModel } from './trained/model';
+import { rankBayes } from './trained/model';
+import { modelOfKind, type SentenceModel } from './trained/sentence-model';
 
-export type SingleRankerName = Exclude<RankerName, 'blend' | 'bayes'>;
+export type SingleRankerName = Exclude<RankerName, 'blend' | 'bayes' | 'maxent'>;
 
 /** What the blend can mix: every single ranker plus the title-word overlap on its own. */
 export type BlendComponent = SingleRankerName | 'title' | 'bayes';
@@ -25,8 +26,8 @@ export interface RankOptions extends PositionOptions, LuhnOptions, EdmundsonOpti
   readonly blend?: Partial<BlendWeights>;
   /** How the blend puts component scores on one scale. */
   readonly normalization?: Normalization;
-  /** Trained sentence model for the 'bayes' component (the shipped model when absent). */
-  readonly model?: BayesModel;
+  /** The user's trained sentence model for the trained methods (the shipped model of each kind when absent). */
+  readonly model?: SentenceModel;
 }
 
 export type RankerFn = (a: AnalyzedDocument, options?: RankOptions) => RankResult;
@@ -69,7 +70,7 @@ function componentScores(component: BlendComponent, a: AnalyzedDocument, options
     const settings = options.edmundson;
     return { scores: titleComponent(a, settings?.titleWordWeight, settings?.headingWordWeight) };
   }
-  if (component === 'bayes') return rankBayes(a, options.model);
+  if (component === 'bayes') return rankBayes(a, modelOfKind(options.model, 'naive-bayes'));
   if (component === 'lexrank' && !options.lexrank) return withDefaultsOnce(a, 'lexrank', () => lexRank(a));
   if (component === 'centroid' && !options.centroid) return withDefaultsOnce(a, 'centroid', () => centroidRank(a));
   return RANKERS[component](a, options);

@@ -51,9 +51,14 @@ const INFO: Readonly<Record<RankerName, Omit<MethodInfo, 'name'>>> = {
     detail: 'Prefers sentences close to the document’s average term vector (centroid method).',
     citation: 'Radev et al. 2004',
   },
-  bayes: {
+  maxent: {
     label: 'Trained on your documents',
-    detail: 'A naive Bayes sentence model trained by `tersely train` (the shipped one, or yours).',
+    detail: 'A maximum-entropy (logistic regression) sentence model over position, headings, cue phrases and the other methods’ scores, trained by `tersely train` (the shipped one, or yours).',
+    citation: 'Osborne 2002',
+  },
+  bayes: {
+    label: 'Trained on your documents, feature by feature',
+    detail: 'A naive Bayes sentence model trained by `tersely train --kind naive-bayes` (the shipped one, or yours).',
     citation: 'Kupiec, Pedersen & Chen 1995',
   },
 };

@@ -4,7 +4,9 @@
 import type { AnalyzedDocument, RankerName, RankResult } from '../types';
 import { RANKERS, rankBlend, type RankOptions } from './blend';
 import { METHOD_INFO, type MethodInfo } from './methods';
+import { rankMaxent } from './trained/maxent-model';
 import { rankBayes } from './trained/model';
+import { modelOfKind } from './trained/sentence-model';
 
 export type Ranker = (a: AnalyzedDocument, options: RankOptions) => RankResult;
 
@@ -16,7 +18,8 @@ const RANKER_OF: Readonly<Record<RankerName, Ranker>> = {
   lexrank: RANKERS.lexrank,
   textrank: RANKERS.textrank,
   centroid: RANKERS.centroid,
-  bayes: (a, options) => rankBayes(a, options.model),
+  bayes: (a, options) => rankBayes(a, modelOfKind(options.model, 'naive-bayes')),
+  maxent: (a, options) => rankMaxent(a, modelOfKind(options.model, 'maximum-entropy')),
 };
 
 export interface MethodEntry extends MethodInfo {

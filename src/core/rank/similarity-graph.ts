@@ -9,18 +9,18 @@
  *    sf·(sf−1)/2 pairs, so a term held by more sentences than this proposes no pairs (the total of
  *    visits is then at most limit × postings). Pairs proposed through other terms still get their
  *    exact similarity, these terms included; only pairs linked by such common terms alone are
- *    lost. Such terms carry little weight where it matters (LexRank's idf of a term in 200 of 200+
- *    sentences is at most log(n/200)), and a document of up to this many sentences is never pruned.
+ *    lost. The limit is a count, not a share, so the cost stays linear in long documents; a
+ *    document of up to this many sentences is never pruned this way.
  *  - `maxNeighbours` (k): each sentence keeps its k most similar partners (ties: the earlier
  *    sentence); a link stays when either end keeps it, so the graph has at most n·k links and the
  *    power iteration costs O(n·k) per step. Below k + 1 sentences nothing is cut.
- * Both values were chosen on the benchmark's train half (even RFC numbers, `scripts/graph-limits`
- * figures in bench/RESULTS.md): with k = 32, 97% of those documents keep their whole LexRank
- * graph and the scores of the rest move by a few percent at most; raising either limit moved no
- * ROUGE figure. These are ours, not the papers' (Erkan & Radev 2004 and Mihalcea & Tarau 2004 use
- * the full graph).
+ * Both values were chosen on the benchmark's train half (even RFC numbers; `node dist/bench.cjs
+ * quality --split train`): the default blend's ROUGE-1 F1 was 0.343 with the unpruned graph, with
+ * k = 32 and with k = 64; with k = 32, 89% of those documents keep their LexRank scores exactly.
+ * rank-graph-limits.test.ts states how far the scores of larger documents move. The values are
+ * ours; Erkan & Radev (2004) and Mihalcea & Tarau (2004) use the full graph.
  */
-import { dot, invertedIndex, makeVector, type SparseVector } from '../vectors';
+import { invertedIndex, type SparseVector } from '../vectors';
 
 export const SPARSE_GRAPH_DEFAULTS = {
   maxNeighbours: 32,
@@ -56,7 +56,9 @@ export function similarityGraph(
   const n = vectors.length;
   const postings = invertedIndex(vectors, vocabularySize);
   const common = commonTerms(postings.offsets, limits.maxProposingFrequency);
-  const commonParts = common.count === 0 ? null : vectors.map((vector) => restrict(vector, common.flags));
+  const commonPart = common.count === 0 ? null : commonEntries(vectors, common.flags);
+  // Row i's weights of common terms, dense, so a candidate's share costs one lookup per term.
+  const rowCommon = commonPart === null ? null : new Float64Array(vocabularySize);
   const accumulated = new Float64Array(n);
   const seenBy = new Int32Array(n).fill(-1);
   const candidates = new Int32Array(n);
@@ -82,16 +84,22 @@ export function similarityGraph(
         accumulated[j]! += weight * postings.values[p]!;
       }
     }
-    const mine = commonParts?.[i];
+    const mineFrom = commonPart === null ? 0 : commonPart.offsets[i]!;
+    const mineTo = commonPart === null ? 0 : commonPart.offsets[i + 1]!;
+    for (let e = mineFrom; e < mineTo; e++) rowCommon![commonPart!.ids[e]!] = commonPart!.values[e]!;
     for (let c = 0; c < count; c++) {
       const j = candidates[c]!;
-      const extra = mine !== undefined && mine.ids.length > 0 ? dot(mine, commonParts![j]!) : 0;
+      let extra = 0;
+      if (mineTo > mineFrom) {
+        for (let e = commonPart!.offsets[j]!; e < commonPart!.offsets[j + 1]!; e++) extra += rowCommon![commonPart!.ids[e]!]! * commonPart!.values[e]!;
+      }
       const similarity = similarityOf(i, j, accumulated[j]! + extra);
       if (similarity > minSimilarity) {
         kept.offer(i, j, similarity);
         kept.offer(j, i, similarity);
       }
     }
+    for (let e = mineFrom; e < mineTo; e++) rowCommon![commonPart!.ids[e]!] = 0;
   }
   return kept.toCsr();
 }
@@ -110,15 +118,26 @@ export function commonTerms(offsets: Int32Array, maxFrequency: number): { readon
   return { flags, count };
 }
 
-/** The entries of `vector` whose id is flagged in `keep`. */
-function restrict(vector: SparseVector, keep: Uint8Array): SparseVector {
-  const slots: number[] = [];
-  for (let k = 0; k < vector.ids.length; k++) if (keep[vector.ids[k]!]) slots.push(k);
-  if (slots.length === 0) return EMPTY_VECTOR;
-  return makeVector(Int32Array.from(slots, (k) => vector.ids[k]!), Float64Array.from(slots, (k) => vector.values[k]!));
+/** Each sentence's entries for flagged terms, as compressed rows (sentence i: `offsets[i] .. offsets[i+1]`). */
+function commonEntries(vectors: readonly SparseVector[], flags: Uint8Array): { offsets: Int32Array; ids: Int32Array; values: Float64Array } {
+  const offsets = new Int32Array(vectors.length + 1);
+  vectors.forEach((vector, i) => {
+    let count = 0;
+    for (const id of vector.ids) if (flags[id]) count++;
+    offsets[i + 1] = offsets[i]! + count;
+  });
+  const ids = new Int32Array(offsets[vectors.length]!);
+  const values = new Float64Array(offsets[vectors.length]!);
+  vectors.forEach((vector, i) => {
+    let slot = offsets[i]!;
+    for (let k = 0; k < vector.ids.length; k++) {
+      if (!flags[vector.ids[k]!]) continue;
+      ids[slot] = vector.ids[k]!;
+      values[slot++] = vector.values[k]!;
+    }
+  });
+  return { offsets, ids, values };
 }
-
-const EMPTY_VECTOR: SparseVector = { ids: new Int32Array(0), values: new Float64Array(0), norm: 0 };
 
 /** Number of neighbours of each node (a sentence's degree in the similarity graph). */
 export function linkCounts(graph: CsrGraph): Float64Array {
@@ -192,42 +211,56 @@ class Neighbours {
   /** Symmetric CSR of every kept link (kept by either end), rows ascending, each link once per row. */
   toCsr(): CsrGraph {
     const { n, k, sizes, targets, weights } = this;
-    // Each kept entry (i → j) lands in row i and in row j; a link both ends kept lands twice and is
-    // merged below.
-    const counts = new Int32Array(n + 1);
-    for (let i = 0; i < n; i++) {
-      counts[i + 1]! += sizes[i]!;
-      for (let s = 0; s < sizes[i]!; s++) counts[targets[i * k + s]! + 1]! += 1;
-    }
-    for (let i = 0; i < n; i++) counts[i + 1]! += counts[i]!;
-    const fill = counts.slice(0, n);
-    const rawTargets = new Int32Array(counts[n]!);
-    const rawWeights = new Float64Array(counts[n]!);
+    // In-links: for each node j, the nodes i that kept j, ascending (filled in order of i).
+    const inOffsets = new Int32Array(n + 1);
+    for (let i = 0; i < n; i++) for (let s = 0; s < sizes[i]!; s++) inOffsets[targets[i * k + s]! + 1]! += 1;
+    for (let i = 0; i < n; i++) inOffsets[i + 1]! += inOffsets[i]!;
+    const fill = inOffsets.slice(0, n);
+    const inSources = new Int32Array(inOffsets[n]!);
+    const inWeights = new Float64Array(inOffsets[n]!);
     for (let i = 0; i < n; i++) {
       for (let s = 0; s < sizes[i]!; s++) {
         const j = targets[i * k + s]!;
-        const w = weights[i * k + s]!;
-        rawTargets[fill[i]!] = j;
-        rawWeights[fill[i]!++] = w;
-        rawTargets[fill[j]!] = i;
-        rawWeights[fill[j]!++] = w;
+        inSources[fill[j]!] = i;
+        inWeights[fill[j]!++] = weights[i * k + s]!;
       }
     }
-    // Sort each row by target and drop the duplicates (a row holds at most k + its in-links).
+    // Row i: its own kept partners (sorted here; at most k) merged with its in-links, duplicates once.
     const offsets = new Int32Array(n + 1);
-    const outTargets = new Int32Array(counts[n]!);
-    const outWeights = new Float64Array(counts[n]!);
-    const order: number[] = [];
+    const outTargets = new Int32Array(n * k + inOffsets[n]!);
+    const outWeights = new Float64Array(n * k + inOffsets[n]!);
+    const ownTargets = new Int32Array(k);
+    const ownWeights = new Float64Array(k);
     let out = 0;
     for (let i = 0; i < n; i++) {
-      order.length = 0;
-      for (let e = counts[i]!; e < counts[i + 1]!; e++) order.push(e);
-      order.sort((x, y) => rawTargets[x]! - rawTargets[y]!);
-      const start = out;
-      for (const e of order) {
-        if (out > start && outTargets[out - 1] === rawTargets[e]) continue;
-        outTargets[out] = rawTargets[e]!;
-        outWeights[out++] = rawWeights[e]!;
+      const size = sizes[i]!;
+      for (let s = 0; s < size; s++) {
+        // Insertion sort by partner.
+        const t = targets[i * k + s]!;
+        const w = weights[i * k + s]!;
+        let at = s;
+        while (at > 0 && ownTargets[at - 1]! > t) {
+          ownTargets[at] = ownTargets[at - 1]!;
+          ownWeights[at] = ownWeights[at - 1]!;
+          at--;
+        }
+        ownTargets[at] = t;
+        ownWeights[at] = w;
+      }
+      let a = 0;
+      let b = inOffsets[i]!;
+      const bEnd = inOffsets[i + 1]!;
+      while (a < size || b < bEnd) {
+        const ta = a < size ? ownTargets[a]! : n;
+        const tb = b < bEnd ? inSources[b]! : n;
+        if (ta <= tb) {
+          outTargets[out] = ta;
+          outWeights[out++] = ownWeights[a++]!;
+          if (ta === tb) b++; // both ends kept it: same pair, same weight
+        } else {
+          outTargets[out] = tb;
+          outWeights[out++] = inWeights[b++]!;
+        }
       }
       offsets[i + 1] = out;
     }

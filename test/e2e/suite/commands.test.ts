@@ -100,13 +100,18 @@ describe('Tersely in the editor', function () {
   it('inserts the summary under the title as one edit that a single undo removes', async () => {
     const editor = await openDemo();
     const original = editor.document.getText();
-    const result = (await vscode.commands.executeCommand('tersely.insertSummary')) as { inserted: boolean; placement: string };
+    const titleLine = original.split('\n')[0]!;
+    const result = (await vscode.commands.executeCommand('tersely.insertSummary', titleLine.replace(/^#\s+/, ''))) as { inserted: boolean; placement: string };
     assert.equal(result.inserted, true);
-    assert.equal(result.placement, 'underTitle');
+    assert.equal(result.placement, 'underHeading');
     const changed = editor.document.getText();
     assert.notEqual(changed, original);
-    const titleLine = original.split('\n')[0]!;
-    assert.ok(changed.startsWith(`${titleLine}\n\n**Summary**`), 'the block sits right under the title');
+    assert.ok(changed.startsWith(`${titleLine}\n\nSummary — extractive`), 'the block sits right under the chosen heading');
+    // The insert itself never makes the summary on screen out of date: its places moved with the text.
+    const after = api.inspect(editor.document.uri)!;
+    assert.equal(after.version, editor.document.version, 'the summary follows the inserted text');
+    assert.equal(after.highlighted, true);
+    for (const span of after.spans) assert.ok(span.start >= titleLine.length + (changed.length - original.length), 'every place moved past the inserted block');
     assert.ok(changed.endsWith(original.slice(titleLine.length)), 'the rest of the document is unchanged');
     await vscode.commands.executeCommand('undo');
     assert.equal(editor.document.getText(), original, 'one undo restores the document exactly');
@@ -185,7 +190,7 @@ describe('Tersely in the editor', function () {
   it('copies the summary as Markdown', async () => {
     await openDemo();
     const markdown = (await vscode.commands.executeCommand('tersely.copySummary')) as string;
-    assert.match(markdown, /^Summary of /);
+    assert.match(markdown, /^Summary of bike-share-rebalancing\.md — extractive/);
     assert.equal(await vscode.env.clipboard.readText(), markdown);
   });
 

@@ -4,9 +4,10 @@
  * read from the sentence's source so code formatting is seen.
  *
  * A finding is either
- *   - a swap: the body sentence closest to the claim's other words (the frame) has another
- *     identifier where the claim has this one (the word before or after it is the same), and no
- *     sentence of the pool puts the claim's identifier there; or
+ *   - a swap: neither the body sentence closest to the claim's other words (the frame), nor the
+ *     support, nor the next closest sentences name the claim's identifier, and the frame names
+ *     another of the same kind (or any other in the same place: the word before or after it is
+ *     the same); or
  *   - an absence: the body never mentions an option or a file name the claim names (compared
  *     without case); other names are too often written differently (`Foo::bar` / `bar`) to judge.
  * Code spans after a reStructuredText role (:ref:`x`) are cross-references, not identifiers.
@@ -80,16 +81,35 @@ function identifiersOf(e: Evidence): Identifier[] {
 
 const sameSlot = (a: Identifier, b: Identifier) => (a.before !== null && a.before === b.before) || (a.after !== null && a.after === b.after);
 
+/** Whether a source mentions an identifier (compared without case, on word boundaries). */
+function mentions(lowerSource: string, key: string): boolean {
+  let at = lowerSource.indexOf(key);
+  while (at >= 0) {
+    const before = lowerSource[at - 1];
+    const after = lowerSource[at + key.length];
+    if (!(before && /[\w]/u.test(before) && /^\w/u.test(key)) && !(after && /[\w]/u.test(after) && /\w$/u.test(key))) return true;
+    at = lowerSource.indexOf(key, at + 1);
+  }
+  return false;
+}
+
+/** Pool sentences read for the claim's identifier besides the frame and the support. */
+const IDENTIFIER_POOL = 3;
+
 export const checkIdentifiers: Detector = (input) => {
   const findings: RawFinding[] = [];
   const claimed = identifiersIn(input.claimSource);
   const claimKeys = new Set(claimed.map((i) => i.key));
   for (const identifier of claimed) {
     const frame = input.frame;
-    if (frame && !frame.source.toLowerCase().includes(identifier.key)) {
-      const swap = identifiersOf(frame).find((other) => !claimKeys.has(other.key) && !other.key.includes(identifier.key) && sameSlot(identifier, other));
-      const agreed = input.pool.some((e) => identifiersOf(e).some((other) => other.key === identifier.key && sameSlot(identifier, other)));
-      if (swap && !agreed) {
+    const near = [...new Set([frame, ...input.support, ...input.pool.slice(0, IDENTIFIER_POOL)].filter((e): e is Evidence => e != null))];
+    const named = near.some((e) => mentions(e.source.toLowerCase(), identifier.key));
+    if (frame && !named) {
+      // The sentence closest to the claim's other words names another identifier of the kind: a swap.
+      const swap =
+        identifiersOf(frame).find((other) => other.kind === identifier.kind && !claimKeys.has(other.key) && !other.key.includes(identifier.key) && !identifier.key.includes(other.key)) ??
+        identifiersOf(frame).find((other) => !claimKeys.has(other.key) && sameSlot(identifier, other));
+      if (swap) {
         findings.push({ kind: 'identifier', abstractSays: identifier.text, bodySays: swap.text, evidence: frame });
         continue;
       }

@@ -5,14 +5,14 @@
  * the claim. Negation of the modal is the negation detector's business.
  *
  * The governed word is the first content word after the modal (within four words, before any
- * punctuation). A finding needs a support sentence where the same word is governed by a modal of
- * another class, sharing at least two more content words with the claim, and no sentence of the
- * pool with the claim's class on that word. A body that states plainly what the abstract says with
+ * punctuation). The body's sentences that use that word, closest to the claim first (and the
+ * support), are read: a modal of the claim's class on the word there agrees; otherwise a modal of
+ * another class on it is a finding. A body that states plainly what the abstract says with
  * a modal ("adds" for "will add") is a paraphrase, not a conflict. English only.
  */
 import type { CheckedText } from './claim-tokens';
 import { sharedTerms } from './claim-tokens';
-import type { Detector, Evidence, RawFinding } from './detector';
+import { sentencesUsing, type Detector, type Evidence, type RawFinding } from './detector';
 
 export type ModalClass = 'obligation' | 'advice' | 'possibility' | 'prediction';
 
@@ -26,7 +26,6 @@ const SINGLE: Readonly<Record<string, ModalClass>> = {
 const BEFORE_TO: Readonly<Record<string, ModalClass>> = { have: 'obligation', has: 'obligation', had: 'obligation', need: 'obligation', needs: 'obligation', required: 'obligation' };
 const BREAK = /[,;:()[\]{}!?]|\.\s/u;
 const HEAD_WINDOW = 4;
-const MIN_SHARED_CONTEXT = 2;
 
 export interface ModalUse {
   readonly modal: number;
@@ -75,28 +74,25 @@ function phrase(text: CheckedText, use: ModalUse): string {
   return text.text.slice(text.tokens[use.modal]!.start, text.tokens[use.head]!.end);
 }
 
+/** How many of the body's sentences about the governed word are read (the closest to the claim first). */
+export const MODAL_NEIGHBOURS = 3;
+
 export const checkModality: Detector = (input) => {
   if (!input.language.startsWith('en')) return [];
   const findings: RawFinding[] = [];
   const claim = input.claim;
   for (const use of usesOf(claim)) {
     const term = claim.tokens[use.head]!.term!;
-    const classOn = (e: Evidence) => usesOf(e.checked).filter((u) => e.checked.tokens[u.head]!.term === term).map((u) => u.modalClass);
-    let conflict: { evidence: Evidence; other: ModalUse; shared: number } | null = null;
-    for (const evidence of input.support) {
-      const other = usesOf(evidence.checked).find((u) => evidence.checked.tokens[u.head]!.term === term && u.modalClass !== use.modalClass);
-      if (!other || classOn(evidence).includes(use.modalClass)) continue;
-      const shared = sharedTerms(claim, evidence.checked, new Set([term])).length;
-      if (shared >= MIN_SHARED_CONTEXT) {
-        conflict = { evidence, other, shared };
-        break;
-      }
-    }
+    const on = (e: Evidence) => usesOf(e.checked).filter((u) => e.checked.tokens[u.head]!.term === term);
+    // The body's closest sentences about the governed word, and the support itself.
+    const near = [...new Set([...sentencesUsing(input, term, MODAL_NEIGHBOURS), ...input.support.filter((e) => e.checked.terms.has(term))])];
+    if (near.some((e) => on(e).some((u) => u.modalClass === use.modalClass))) continue;
+    // A body that says it plainly ("adds" for "will add") is a paraphrase, not a conflict.
+    // The conflicting modal must be in a sentence about the claim: its support, its frame, or one sharing two more words.
+    const about = new Set([...input.support, input.frame]);
+    const conflict = near.filter((e) => about.has(e) || sharedTerms(claim, e.checked, new Set([term])).length >= 2).map((e) => ({ evidence: e, other: on(e).find((u) => u.modalClass !== use.modalClass) })).find((c) => c.other !== undefined);
     if (!conflict) continue;
-    const found = conflict;
-    const agrees = input.pool.some((e) => classOn(e).includes(use.modalClass) && sharedTerms(claim, e.checked, new Set([term])).length >= found.shared);
-    if (agrees) continue;
-    findings.push({ kind: 'modality', abstractSays: phrase(claim, use), bodySays: phrase(found.evidence.checked, found.other), evidence: found.evidence });
+    findings.push({ kind: 'modality', abstractSays: phrase(claim, use), bodySays: phrase(conflict.evidence.checked, conflict.other!), evidence: conflict.evidence });
   }
   return findings;
 };

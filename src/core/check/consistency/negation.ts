@@ -6,14 +6,17 @@
  * "whether or not", "no doubt") negate nothing. The negated word is the first content word in
  * scope.
  *
- * A finding needs the same word negated on one side and plainly asserted on the other, in a
- * support sentence (the first, or the frame) that shares at least three more content words with the claim, and no sentence of
- * the pool that agrees with the claim at least as closely; one of the three words after the negated
- * word must be the same on both sides (it is said of the same thing). English only.
+ * The body is read where it speaks of the negated word: its sentences that use the word, closest
+ * to the claim first (`NEGATION_NEIGHBOURS`).
+ *   - The claim negates a word that none of them negates: a finding (cited: the closest).
+ *   - The claim asserts a word that the closest of them negates, and that sentence is about the
+ *     claim's matter (its first support, its frame, or sharing `ABOUT_SHARED` more words) while
+ *     the next ones do not assert it: a finding.
+ * A word the body never uses is left to the support rule. English only.
  */
 import type { CheckedText } from './claim-tokens';
 import { sharedTerms } from './claim-tokens';
-import { sentencesUsing, type Detector, type Evidence, type RawFinding } from './detector';
+import { sentencesUsing, type Detector, type DetectorInput, type Evidence, type RawFinding } from './detector';
 
 /** NegEx's window: a cue governs at most this many following words. */
 export const NEGATION_WINDOW = 5;
@@ -28,8 +31,6 @@ const BREAK = /[,;:()[\]{}!?]|\.\s/u;
 const AUXILIARIES = new Set(['is', 'are', 'was', 'were', 'be', 'been', 'being', 'am', 'do', 'does', 'did', 'has', 'have', 'had', 'will', 'would', 'can', 'could', 'should', 'shall', 'may', 'might', 'must', 'need', 'also', 'still']);
 /** Adverbs that sit between a negation and the word it negates ("does not currently check"). */
 const SCOPE_ADVERBS = new Set(['currently', 'yet', 'always', 'really', 'necessarily', 'actually', 'generally', 'usually', 'normally', 'directly', 'explicitly', 'fully', 'entirely', 'simply', 'easily', 'typically', 'officially', 'today']);
-/** Context words the two sentences must share besides the negated word. */
-const MIN_SHARED_CONTEXT = 3;
 
 export interface NegationScope {
   /** Token index of the cue. */
@@ -101,6 +102,14 @@ function scopesOf(text: CheckedText): NegationScope[] {
   return scopes;
 }
 
+/** Words besides the negated one that a body sentence shares with the claim to speak of the same matter. */
+export const ABOUT_SHARED = 2;
+
+/** Whether a body sentence speaks of the claim's matter: its closest support, its frame, or one sharing enough words besides `term`. */
+function aboutClaim(input: DetectorInput, evidence: Evidence, term: string): boolean {
+  return evidence === input.support[0] || evidence === input.frame || sharedTerms(input.claim, evidence.checked, new Set([term])).length >= ABOUT_SHARED;
+}
+
 /** How many of the body's sentences about a word are read for its polarity (the closest to the claim first). */
 export const NEGATION_NEIGHBOURS = 3;
 
@@ -134,9 +143,7 @@ export const checkNegation: Detector = (input) => {
     if (!closest) continue;
     const there = polarity(closest, term);
     if (there.negated === null || there.plain !== null) continue;
-    // Only a sentence about the claim's matter: its closest support, its frame, or one sharing enough words.
-    const about = closest === input.support[0] || closest === input.frame || sharedTerms(claim, closest.checked, new Set([term])).length >= MIN_SHARED_CONTEXT;
-    if (!about) continue;
+    if (!aboutClaim(input, closest, term)) continue;
     // Said plainly in the next sentences about it: the body says it both ways.
     if (near.slice(1).some((e) => polarity(e, term).plain !== null && polarity(e, term).negated === null)) continue;
     const scope = scopesOf(closest.checked).find((s) => s.scope.includes(there.negated!));

@@ -24,8 +24,13 @@ export interface MarkdownOptions {
  * mark), into a document whose spans index `source.text` plus `options.baseOffset`.
  */
 export function readMarkdownTree(tree: Root, source: InlineSource, options: MarkdownOptions): ParsedDocument {
+  return readMarkdownBlocks(tree.children, source, options);
+}
+
+/** Reads some top-level blocks of a tree (one piece of a document, see pieces.ts) the same way. */
+export function readMarkdownBlocks(blocks: readonly RootContent[], source: InlineSource, options: MarkdownOptions): ParsedDocument {
   const walker = new MarkdownWalker(source, new DocumentBuilder(source.text, options.baseOffset, 'markdown'), options);
-  walker.walkBlocks(tree.children, ROOT_CONTEXT);
+  walker.walkBlocks(blocks, ROOT_CONTEXT);
   return walker.finish();
 }
 

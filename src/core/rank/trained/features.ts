@@ -14,7 +14,7 @@
 // Rankers are imported one by one, not through rank/index, so the blend may use this model without an import cycle.
 import { centroidRank } from '../centroid';
 import { lexRank } from '../lexrank';
-import { countPhrases, DEFAULT_CUE_WORDS } from '../edmundson';
+import { countPhrases, DEFAULT_CUE_WORDS, phraseIndex } from '../edmundson';
 import { sectionPriors } from '../heading-prior';
 import { withDefaultsOnce } from '../memo';
 import type { AnalyzedDocument, BlockKind } from '../../types';
@@ -132,6 +132,9 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
   } satisfies Record<FeatureName, Uint8Array>;
   if (n === 0) return m;
 
+  // Indexed once per document, not once per sentence.
+  const indicatorIndex = phraseIndex(INDICATOR_PHRASES);
+  const hedgeIndex = phraseIndex(HEDGE_PHRASES);
   const priors = sectionPriors(doc.sections);
   const thematic = thematicTerms(a.terms);
   const title = new Set(a.titleTerms);
@@ -144,8 +147,8 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
   doc.sentences.forEach((sentence, i) => {
     const words = a.words[i]!;
     m.length[i] = lengthBin(words.length);
-    const bonus = countPhrases(words, INDICATOR_PHRASES);
-    const hedge = countPhrases(words, HEDGE_PHRASES);
+    const bonus = countPhrases(words, indicatorIndex);
+    const hedge = countPhrases(words, hedgeIndex);
     m.cue[i] = bonus > hedge ? 1 : hedge > bonus ? 2 : 0;
     m.paragraphPosition[i] =
       sentence.paragraphLength <= 1 ? 0 : sentence.positionInParagraph === 0 ? 1 : sentence.positionInParagraph === sentence.paragraphLength - 1 ? 3 : 2;

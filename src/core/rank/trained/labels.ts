@@ -3,6 +3,8 @@
  * sentence. Kupiec et al. (1995) matched abstract sentences to document sentences by hand-checked
  * "direct match" and "direct join"; a best match by term overlap is the automatic stand-in.
  */
+import { greedyOracle } from '../../evaluate/oracle';
+import { tokenizeText } from '../../evaluate/rouge';
 import { contentTerms, wordTokens } from '../../text/tokens';
 import type { AnalyzedDocument } from '../../types';
 
@@ -46,4 +48,33 @@ export function labelSentences(a: AnalyzedDocument, referenceSentences: readonly
     if (best >= 0) labels[best] = 1;
   }
   return labels;
+}
+
+/** How training labels are chosen: Kupiec-style best matches, the greedy oracle's picks, or either. */
+export type LabelRule = 'best-match' | 'oracle' | 'either';
+export const LABEL_RULES: readonly LabelRule[] = ['best-match', 'oracle', 'either'];
+
+/**
+ * The sentences the greedy ROUGE oracle (evaluate/oracle.ts) picks at the reference's length:
+ * the extract a ROUGE-scored summary should come closest to (stemmed tokens, as the benchmark scores).
+ */
+export function oracleLabels(a: AnalyzedDocument, referenceSentences: readonly string[]): Uint8Array {
+  const labels = new Uint8Array(a.doc.sentences.length);
+  const options = { stem: true };
+  const picked = greedyOracle({
+    sentences: a.doc.sentences.map((s) => tokenizeText([s.text], options).flat()),
+    wordCounts: a.words.map((w) => w.length),
+    reference: tokenizeText(referenceSentences, options).flat(),
+    wordLimit: referenceSentences.reduce((sum, s) => sum + wordTokens(s).length, 0),
+  });
+  for (const i of picked) labels[i] = 1;
+  return labels;
+}
+
+export function labelsBy(rule: LabelRule, a: AnalyzedDocument, referenceSentences: readonly string[]): Uint8Array {
+  if (rule === 'best-match') return labelSentences(a, referenceSentences);
+  const oracle = oracleLabels(a, referenceSentences);
+  if (rule === 'oracle') return oracle;
+  const match = labelSentences(a, referenceSentences);
+  return oracle.map((label, i) => label | match[i]!);
 }

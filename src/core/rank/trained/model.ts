@@ -17,10 +17,13 @@ import defaultModelJson from '../../../../media/models/default-model.json';
 import { checkLearnedTemplateText } from '../../select/template-text';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { FEATURES, sentenceFeatures, type FeatureMatrix } from './features';
+import { describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
 import { scoreNaiveBayes, valueLogOdds, type ClassCounts, type NaiveBayesCounts } from './naive-bayes';
 
 export const MODEL_FORMAT = 'tersely-sentence-model';
 export const MODEL_VERSION = 1;
+
+export { ModelError } from './model-checks';
 
 export interface BayesModel {
   readonly format: typeof MODEL_FORMAT;
@@ -32,10 +35,6 @@ export interface BayesModel {
   readonly trainedOn?: Readonly<Record<string, unknown>>;
   /** Sentences `tersely train` found recurring across the training documents (select/template-text.ts); never picked. */
   readonly templateText?: readonly string[];
-}
-
-export class ModelError extends Error {
-  override readonly name = 'ModelError';
 }
 
 /**
@@ -50,30 +49,18 @@ export const MODEL_LIMITS = {
   maxFileBytes: 256 * 1024,
   maxCount: Number.MAX_SAFE_INTEGER,
   maxSmoothing: 1_000_000,
+  /**
+   * Largest weight (or bias) of a maximum-entropy model. A fitted L2-regularised weight is a log
+   * odds ratio of a few units; one of a thousand would put σ at 0 or 1 in double precision (e^−745
+   * underflows), so it cannot come from a real fit and would make scores tie.
+   */
+  maxWeight: 1_000,
 } as const;
 
 /** Arity of each feature this version knows; a Map, so "__proto__" or "constructor" is just an unknown name. */
 const ARITY: ReadonlyMap<string, number> = new Map(FEATURES.map((f) => [f.name, f.arity]));
 const TOP_LEVEL_KEYS = new Set(['format', 'version', 'kind', 'smoothing', 'classes', 'features', 'trainedOn', 'templateText']);
 const CLASS_KEYS = new Set(['positive', 'negative']);
-
-/** A plain JSON object (as JSON.parse makes them), not an array, a class instance or a null-prototype trick. */
-function isRecord(value: unknown): value is Record<string, unknown> {
-  if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
-  const prototype: unknown = Object.getPrototypeOf(value);
-  return prototype === Object.prototype || prototype === null;
-}
-
-/** The record's own property `key` (never one inherited from Object.prototype), or undefined. */
-function own(record: Record<string, unknown>, key: string): unknown {
-  return Object.hasOwn(record, key) ? record[key] : undefined;
-}
-
-/** Refuses keys outside `allowed`, naming the first one. */
-function onlyKeys(record: Record<string, unknown>, allowed: ReadonlySet<string>, where: string): void {
-  const unknown = Object.keys(record).find((key) => !allowed.has(key));
-  if (unknown !== undefined) throw new ModelError(`${where} has an unknown field ${JSON.stringify(unknown)} (expected ${[...allowed].join(', ')})`);
-}
 
 function isCount(value: unknown, min: number): value is number {
   return typeof value === 'number' && Number.isSafeInteger(value) && value >= min && value <= MODEL_LIMITS.maxCount;
@@ -88,10 +75,6 @@ function countList(value: unknown, where: string, arity: number): number[] {
   });
 }
 
-function describeValue(value: unknown): string {
-  return typeof value === 'number' || typeof value === 'boolean' || value === null ? String(value) : typeof value === 'string' ? JSON.stringify(value.slice(0, 40)) : typeof value;
-}
-
 /**
  * Checks a parsed model file and returns it typed; throws ModelError saying what is wrong. Only
  * own properties are read; unknown fields and features this version does not know are refused;
@@ -103,7 +86,7 @@ export function validateModel(json: unknown): BayesModel {
   const version = own(json, 'version');
   if (version !== MODEL_VERSION) throw new ModelError(`model version ${describeValue(version)} is not supported (expected ${MODEL_VERSION})`);
   const kind = own(json, 'kind');
-  if (kind !== 'naive-bayes') throw new ModelError(`model kind ${describeValue(kind)} is not supported (expected "naive-bayes")`);
+  if (kind !== 'naive-bayes') throw new ModelError(`model kind ${describeValue(kind)} is not supported (expected "naive-bayes", or "maximum-entropy" where either kind is read)`);
   onlyKeys(json, TOP_LEVEL_KEYS, 'the model');
   const smoothing = own(json, 'smoothing');
   if (typeof smoothing !== 'number' || !Number.isFinite(smoothing) || smoothing <= 0 || smoothing > MODEL_LIMITS.maxSmoothing) {
@@ -156,24 +139,12 @@ export function validateModel(json: unknown): BayesModel {
 }
 
 /** The optional learned template text, checked (an optional field any model kind may carry). */
-function templateTextOf(value: unknown): readonly string[] | undefined {
+export function templateTextOf(value: unknown): readonly string[] | undefined {
   if (value === undefined) return undefined;
   try {
     return checkLearnedTemplateText(value);
   } catch (error) {
     throw new ModelError((error as Error).message);
-  }
-}
-
-export type ModelLoad = { readonly ok: true; readonly model: BayesModel } | { readonly ok: false; readonly error: string };
-
-/** Validation without throwing, for callers that fall back to the default model. */
-export function loadModel(json: unknown): ModelLoad {
-  try {
-    return { ok: true, model: validateModel(json) };
-  } catch (error) {
-    if (error instanceof ModelError) return { ok: false, error: `invalid sentence model: ${error.message}` };
-    throw error;
   }
 }
 

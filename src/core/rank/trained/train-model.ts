@@ -3,13 +3,18 @@
  * line reads the files and hands over their text.
  */
 import { analyze, resolveLanguage } from '../../analyze';
-import { splitReference } from '../../evaluate/reference-split';
+import { splitIntroduction, splitReference } from '../../evaluate/reference-split';
 import { parseDocument } from '../../formats/registry';
 import type { AnalyzedDocument, DocumentFormat } from '../../types';
 import { FEATURES, sentenceFeatures } from './features';
 import { labelSentences } from './labels';
 import { MODEL_FORMAT, MODEL_VERSION, type BayesModel } from './model';
 import { countFeatureValues, type LabelledDocument } from './naive-bayes';
+import { labelMaxentDocument, maxentModelFromLabelled, type MaxentTrainOptions } from './train-maxent';
+import type { MaxentModel } from './maxent-model';
+
+/** The kinds `tersely train --kind` makes, the default first (naive Bayes, so earlier recorded commands still make what they made). */
+export const MODEL_KINDS = ['naive-bayes', 'maximum-entropy'] as const;
 
 export interface TrainingExample {
   /** The document without its reference section. */
@@ -36,6 +41,11 @@ export function trainModel(examples: readonly TrainingExample[], options: TrainO
   return modelFromLabelled(documents, options);
 }
 
+/** Labels the examples and fits the maximum-entropy model (train-maxent.ts). */
+export function trainMaxentModel(examples: readonly TrainingExample[], options: MaxentTrainOptions = {}): MaxentModel {
+  return maxentModelFromLabelled(examples.map((example) => labelMaxentDocument(example.analyzed, example.reference, options.labels)), options);
+}
+
 /** The counting half of training, for callers that already have features and labels. */
 export function modelFromLabelled(documents: readonly LabelledDocument[], options: TrainOptions = {}): BayesModel {
   const counts = countFeatureValues(documents, ARITIES);
@@ -58,7 +68,10 @@ export function modelFromLabelled(documents: readonly LabelledDocument[], option
 }
 
 export interface DocumentExampleOptions {
-  readonly referenceHeading: string;
+  /** The heading of the section that holds the document's own summary; null: always the introduction. */
+  readonly referenceHeading: string | null;
+  /** A document without that section gives its introduction (the prose before its first section) instead. */
+  readonly introductionFallback?: boolean;
   readonly format?: DocumentFormat;
   /** 'auto' or an ISO 639-1 code. */
   readonly language?: string;
@@ -67,8 +80,12 @@ export interface DocumentExampleOptions {
 /** Turns one document into a training example, or says why it cannot be one. */
 export function exampleFromDocument(text: string, options: DocumentExampleOptions): TrainingExample | { readonly skipped: string } {
   const format = options.format ?? 'markdown';
-  const split = splitReference(text, options.referenceHeading, format);
-  if (!split) return { skipped: `no "${options.referenceHeading}" section` };
+  const parsed = parseDocument(text, { format });
+  const heading = options.referenceHeading;
+  const split =
+    (heading !== null ? splitReference(text, heading, format, parsed) : null) ??
+    (heading === null || options.introductionFallback ? splitIntroduction(text, format, parsed) : null);
+  if (!split) return { skipped: heading !== null && !options.introductionFallback ? `no "${heading}" section` : 'no summary section and no introduction before a section' };
   const reference = parseDocument(split.referenceText, { format }).sentences.map((s) => s.text);
   if (reference.length === 0) return { skipped: `the "${options.referenceHeading}" section has no prose sentences` };
   const body = parseDocument(split.bodyText, { format });

@@ -46,13 +46,33 @@ export interface ParsedTokens {
   readonly blockEnds: number[];
 }
 
+/**
+ * Link reference and footnote labels defined outside the text being parsed (the rest of the
+ * document, when one piece of it is read again): references to them resolve as they would in the
+ * whole document. Link labels as markdown-it normalizes them, footnote labels as written.
+ */
+export interface KnownLabels {
+  readonly links: Iterable<string>;
+  readonly footnotes: Iterable<string>;
+}
+
 /** Block tokens of `text` (without a byte order mark), inline tokens as their children. */
-export function parseTokens(text: string, md: MarkdownIt = parser): ParsedTokens {
-  const env: PositionEnv & FrontMatterEnv & FootnoteEnv = {
+export function parseTokens(text: string, md: MarkdownIt = parser, known?: KnownLabels, frontMatter = true): ParsedTokens {
+  const refs = caseInsensitiveLabels();
+  const references: Record<string, { href: string; title: string }> = {};
+  if (known !== undefined) {
+    // A definition met while parsing sets nothing over these (the first definition wins), as in
+    // the whole document, where they come first or their duplicates would not count.
+    for (const label of known.links) references[label] = { href: '', title: '' };
+    // markdown-it-footnote's own marker for "defined, not yet referenced".
+    for (const label of known.footnotes) refs[`:${label}`] = -1;
+  }
+  const env: PositionEnv & FrontMatterEnv & FootnoteEnv & { references: typeof references } = {
     blockStarts: [],
     blockEnds: [],
-    frontMatter: findFrontMatter(text),
-    footnotes: { refs: caseInsensitiveLabels() },
+    frontMatter: frontMatter ? findFrontMatter(text) : null,
+    footnotes: { refs },
+    references,
   };
   const tokens = md.parse(text, env as unknown as Record<string, unknown>);
   return { tokens, blockStarts: env.blockStarts, blockEnds: env.blockEnds };
