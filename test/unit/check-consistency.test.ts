@@ -4,7 +4,7 @@ import { checkComparatives } from '../../src/core/check/consistency/comparatives
 import type { DetectorInput, Evidence } from '../../src/core/check/consistency/detector';
 import { checkIdentifiers, identifiersIn } from '../../src/core/check/consistency/identifiers';
 import { checkModality, modalUses } from '../../src/core/check/consistency/modality';
-import { checkNegation, negationScopes } from '../../src/core/check/consistency/negation';
+import { checkNegation, NEGATION_CLOSENESS, negationScopes } from '../../src/core/check/consistency/negation';
 import { checkNumbers } from '../../src/core/check/consistency/numbers';
 import { quantitiesIn } from '../../src/core/check/consistency/quantities';
 
@@ -115,6 +115,10 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.match(findings[0]!.bodySays ?? '', /^late/);
     // A body sentence that negates the word too agrees with the claim.
     assert.deepEqual(checkNegation(input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is not late on Sundays.'])), []);
+    // A body sentence too far from the claim (support strength below NEGATION_CLOSENESS) is not cited.
+    const far = input(claim, ['On Sundays the island ferry carries bikes.'], ['The ferry is late most mornings.']);
+    assert.deepEqual(checkNegation({ ...far, closeness: () => NEGATION_CLOSENESS / 2 }), []);
+    assert.equal(checkNegation({ ...far, closeness: () => NEGATION_CLOSENESS }).length, 1);
     // A word the body never uses is left to the support rule.
     assert.deepEqual(checkNegation(input('On Sundays the island ferry is not crowded.', ['On Sundays the island ferry carries bikes.'])), []);
   });

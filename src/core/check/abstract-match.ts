@@ -102,6 +102,8 @@ export interface BodyModel {
   readonly bodyWeights: readonly WeightedTerms[];
   readonly space: ReturnType<typeof termSpace>;
   readonly copies: CopyIndex;
+  /** Body evidence → its position in the body list. */
+  readonly positionOf: ReadonlyMap<Evidence, number>;
 }
 
 /** Null when the document has no prose outside the abstract. */
@@ -118,7 +120,8 @@ export function bodyModel(analyzed: AnalyzedDocument, abstractSections: Uint8Arr
   });
   const space = termSpace(body.termLists);
   const copies = new CopyIndex(body.sentences.map((i) => analyzed.words[i]!));
-  return { body, index, idf, bodyWeights, space, copies };
+  const positionOf = new Map(body.evidence.map((e, p) => [e, p] as const));
+  return { body, index, idf, bodyWeights, space, copies, positionOf };
 }
 
 /** Body sentences whose words include `term`, closest to the claim first. */
@@ -169,6 +172,7 @@ export function matchAbstract(analyzed: AnalyzedDocument, located: LocatedAbstra
           body: body.facts,
           language,
           using: (term, n) => usingTerm(model, alignment, term, n),
+          closeness: (e) => alignment.single[model.positionOf.get(e) ?? -1] ?? 0,
         })
       : [];
     const copy = copies.match(sentence.wordList);

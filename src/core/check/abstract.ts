@@ -101,7 +101,7 @@ function report(prepared: PreparedDocument, located: LocatedAbstract, match: Ret
 
 /** The one rule, said the same way by every surface. */
 export const COVERAGE_RULE =
-  'An abstract sentence is supported when one to three body sentences together hold enough of its content and nothing in them contradicts it; a section is covered when it holds a sentence that supports an abstract sentence.';
+  'An abstract sentence is supported when one to three body sentences together hold enough of its content and nothing in the body contradicts it (contradicted when something does); a section is covered when it holds one of those body sentences for a supported or contradicted abstract sentence.';
 
 function copiedShare(located: LocatedAbstract, sentences: readonly AbstractSentenceCheck[]): AbstractCheck['copied'] {
   const copied = sentences.filter((s) => s.copy !== null).map((s) => s.index);

@@ -50,6 +50,8 @@ export interface DetectorInput {
    * claim first, at most `n`: where the body speaks of the same thing. Without it, the pool.
    */
   readonly using?: (term: string, n: number) => readonly Evidence[];
+  /** Support strength of one body sentence alone for the claim, 0-1 (support.ts); without it, 1. */
+  readonly closeness?: (evidence: Evidence) => number;
 }
 
 /** `input.using`, or the pool sentences that use the term. */

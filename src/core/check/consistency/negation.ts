@@ -103,7 +103,12 @@ function scopesOf(text: CheckedText): NegationScope[] {
 }
 
 /** Words besides the negated one that a body sentence shares with the claim to speak of the same matter. */
-export const ABOUT_SHARED = 2;
+export const ABOUT_SHARED = 3;
+/**
+ * Least support strength (support.ts) of the body sentence cited against a claim's negation: a
+ * sentence that merely uses the word says little about the claim. Chosen on the train half.
+ */
+export const NEGATION_CLOSENESS = 0.1;
 
 /** Whether a body sentence speaks of the claim's matter: its closest support, its frame, or one sharing enough words besides `term`. */
 function aboutClaim(input: DetectorInput, evidence: Evidence, term: string): boolean {
@@ -130,6 +135,8 @@ export const checkNegation: Detector = (input) => {
     if (near.length === 0) continue; // the body never speaks of it: the support rule decides
     if (near.some((e) => polarity(e, term).negated !== null)) continue;
     const evidence = near[0]!;
+    // Only a sentence close enough to the claim to stand for what the body says about it.
+    if ((input.closeness?.(evidence) ?? 1) < NEGATION_CLOSENESS) continue;
     reported.add(term);
     findings.push({ kind: 'negation', abstractSays: phrase(claim, scope.cue, scope.head), bodySays: phrase(evidence.checked, null, polarity(evidence, term).plain!), evidence });
   }
