@@ -9,6 +9,8 @@
  *   node dist/bench.cjs digest [options]    multi-document digests: quality and speed (bench/digest.ts)
  *   node dist/bench.cjs training-list       the train halves' documents for `tersely train --files` (bench/training-list.ts)
  *   node dist/bench.cjs audit [--limit N]   what the default summaries pick, counted by rule (bench/audit.ts)
+ *   node dist/bench.cjs select-speed        lazy MMR against the full-scan selector (bench/select-speed.ts)
+ *   node dist/bench.cjs churn [options]     picks kept after a one-paragraph edit, with and without hysteresis (bench/churn.ts)
  */
 async function main(): Promise<number> {
   const mode = process.argv[2];
@@ -21,7 +23,9 @@ async function main(): Promise<number> {
   if (mode === 'focus') return (await import('./focus')).run(process.argv.slice(3));
   if (mode === 'digest') return (await import('./digest')).run(process.argv.slice(3));
   if (mode === 'audit') return (await import('./audit')).run(process.argv.slice(3));
-  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|training-list|focus|digest|audit [options]');
+  if (mode === 'select-speed') return (await import('./select-speed')).run(process.argv.slice(3));
+  if (mode === 'churn') return (await import('./churn')).run(process.argv.slice(3));
+  console.error('usage: node dist/bench.cjs quality|speed|tune|tune-repair|check|training-list|focus|digest|audit|churn|select-speed [options]');
   return 2;
 }
 

@@ -14,3 +14,5 @@ export { normalize, minMax } from './scale';
 export { findStandAloneProblems, repairAutomatically } from './coherence/index';
 export { REPAIR_STRATEGY, type RepairStrategy } from './coherence/repair';
 export { sentenceFitness, summaryRelevance } from './select/fitness';
+export { prepareSelection } from './select/selection-input';
+export { selectSentences, type SelectionInput } from './select/select';

@@ -112,6 +112,9 @@ export function learnTemplateText(documents: readonly ParsedDocument[], settings
  * pairs found through an inverted index of sentences; sentences in many documents are skipped
  * there, since they are the template text we look for, not evidence of copying).
  */
+/** Two documents sharing fewer sentences than this are not copies, whatever their length. */
+const MIN_SHARED = 3;
+
 function documentFamilies(keys: readonly (readonly string[])[], overlap: number): Int32Array {
   const parent = Int32Array.from(keys.keys());
   const find = (d: number): number => {
@@ -131,7 +134,8 @@ function documentFamilies(keys: readonly (readonly string[])[], overlap: number)
   });
   const shared = new Map<number, number>();
   const pairKey = (a: number, b: number) => a * keys.length + b;
-  const common = Math.max(2, Math.ceil(Math.sqrt(keys.length)));
+  // Sentences in very many documents are what we are looking for, not evidence of copying (and would cost n² pairs).
+  const common = Math.max(16, Math.ceil(Math.sqrt(keys.length)));
   for (const docs of postings.values()) {
     if (docs.length < 2 || docs.length > common) continue;
     for (let x = 0; x < docs.length; x++) for (let y = x + 1; y < docs.length; y++) shared.set(pairKey(docs[x]!, docs[y]!), (shared.get(pairKey(docs[x]!, docs[y]!)) ?? 0) + 1);
@@ -139,7 +143,7 @@ function documentFamilies(keys: readonly (readonly string[])[], overlap: number)
   for (const [pair, count] of shared) {
     const a = Math.floor(pair / keys.length);
     const b = pair % keys.length;
-    if (count >= overlap * Math.min(keys[a]!.length, keys[b]!.length)) parent[find(a)] = find(b);
+    if (count >= MIN_SHARED && count >= overlap * Math.min(keys[a]!.length, keys[b]!.length)) parent[find(a)] = find(b);
   }
   return Int32Array.from(keys.keys(), find);
 }

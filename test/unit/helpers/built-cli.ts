@@ -28,13 +28,14 @@ export interface CliRun {
 }
 
 /** Runs the built CLI; `stdin` is text to feed, or a file descriptor to read from. */
-export function tersely(args: readonly string[], options: { readonly stdin?: string | number; readonly timeoutMs?: number } = {}): CliRun {
+export function tersely(args: readonly string[], options: { readonly stdin?: string | number; readonly timeoutMs?: number; readonly cwd?: string } = {}): CliRun {
   const spawnOptions: SpawnSyncOptions = {
     encoding: 'utf8',
     env: { ...process.env, NO_COLOR: '1' },
     timeout: options.timeoutMs ?? 20_000,
     stdio: [typeof options.stdin === 'number' ? options.stdin : 'pipe', 'pipe', 'pipe'],
     ...(typeof options.stdin === 'string' ? { input: options.stdin } : {}),
+    ...(options.cwd !== undefined ? { cwd: options.cwd } : {}),
   };
   const result = spawnSync(process.execPath, [builtCli(), ...args], spawnOptions);
   const timedOut = (result.error as NodeJS.ErrnoException | undefined)?.code === 'ETIMEDOUT';
