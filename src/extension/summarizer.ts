@@ -12,6 +12,7 @@ import { startProgress } from './progress';
 import { CONTEXT_KEYS } from './ids';
 import { checkedSpan } from './ranges';
 import { formatFor, settingKeyOf, toEngineOptions } from './settings';
+import { readTemplateFiles } from './template-files';
 import type { Scope, ShownSummary } from './summaries';
 import { CancelledError } from './worker-client';
 
@@ -24,6 +25,8 @@ export type SummarizeOutcome =
 export class Summarizer {
   /** Document key of the job the engine is running. */
   private runningKey: string | undefined;
+  /** Template problems already shown, so each is said once. */
+  private readonly toldTemplateProblems = new Set<string>();
 
   constructor(private readonly context: TerselyContext) {}
 
@@ -65,6 +68,11 @@ export class Summarizer {
     const ticket = sequencer.issue(key, document.version);
     engine.useModel(await models.load(settings.host.modelFile));
     const format = formatFor(document.languageId, document.fileName);
+    const { templates, problems } = await readTemplateFiles(settings.host.templateFiles, document.uri);
+    for (const problem of problems) this.tellTemplateProblem(problem);
+    // Live mode keeps the picks it showed unless a new sentence is clearly better (less churn while typing).
+    const before = store.get(key);
+    const previous = trigger === 'live' && before && before.scope === scope ? before.summary.sentences.map((p) => p.text) : undefined;
     const progress = startProgress(this.context.panel, 'summarize', this.context.wording);
     this.runningKey = key;
     const requested = performance.now();
@@ -75,7 +83,7 @@ export class Summarizer {
     };
     let summary: Summary;
     try {
-      const result = await engine.run({ kind: 'summarize', text, options: toEngineOptions(settings, format, baseOffset) }, { onStage });
+      const result = await engine.run({ kind: 'summarize', text, options: { ...toEngineOptions(settings, format, baseOffset), ...(templates.length > 0 ? { templates } : {}), ...(previous ? { previous } : {}) } }, { onStage });
       if (result.kind !== 'summarize') return { kind: 'failed' };
       summary = result.summary;
       if (result.modelProblem) models.reportProblem(settings.host.modelFile, result.modelProblem);
@@ -99,7 +107,6 @@ export class Summarizer {
       return { kind: 'stale' };
     }
     // Picks of the summary this one replaces (same document), so new ones can be marked.
-    const before = store.get(key);
     const previousPicks = before && before.scope === scope && trigger !== 'command' ? new Set(before.summary.sentences.map((p) => p.text)) : undefined;
     const shown = store.add({
       key,
@@ -188,6 +195,13 @@ export class Summarizer {
       return ok;
     });
     return sentences.length === summary.sentences.length ? summary : { ...summary, sentences };
+  }
+
+  private tellTemplateProblem(problem: string): void {
+    this.context.log.warn(problem);
+    if (this.toldTemplateProblems.has(problem)) return;
+    this.toldTemplateProblems.add(problem);
+    void vscode.window.showWarningMessage(this.context.wording.t('Tersely: {0} (tersely.templateFiles)', problem));
   }
 
   private explain(kind: 'tooLarge' | 'empty' | 'failed', message: string, trigger: Trigger): SummarizeOutcome {

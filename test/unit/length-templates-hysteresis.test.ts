@@ -9,6 +9,7 @@ import { existsSync, readFileSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { parseLength } from '../../src/core/options/length';
 import { validateModel, defaultModel } from '../../src/core/rank/trained/model';
+import { defaultMaxentModel, validateMaxentModel } from '../../src/core/rank/trained/maxent-model';
 import { AUTO_LENGTH, autoWords, WORDS_PER_MINUTE } from '../../src/core/reading';
 import { learnTemplateText } from '../../src/core/select/template-text';
 import { parseDocument } from '../../src/core/formats/registry';
@@ -67,8 +68,11 @@ describe('template text', () => {
 
   it('never picks the template text a model carries, and a model refuses malformed template text', () => {
     const model = { ...defaultModel(), templateText: ['Describe why this change is needed and who asked for it.'] };
-    const summary = summarize(doc, { budget: '100%', model });
+    const summary = summarize(doc, { budget: '100%', method: 'bayes', model });
     assert.ok(!summary.sentences.some((s) => s.text.startsWith('Describe why')));
+    const maxent = validateMaxentModel({ ...defaultMaxentModel(), templateText: ['Describe why this change is needed and who asked for it.'] });
+    assert.ok(!summarize(doc, { budget: '100%', model: maxent }).sentences.some((s) => s.text.startsWith('Describe why')));
+    assert.throws(() => validateMaxentModel({ ...defaultMaxentModel(), templateText: [3] }), /templateText/);
     assert.throws(() => validateModel({ ...defaultModel(), templateText: [3] }), /templateText/);
     assert.throws(() => validateModel({ ...defaultModel(), templateText: 'x' }), /templateText/);
   });

@@ -97,6 +97,27 @@ describe('Tersely in the editor', function () {
     assert.match(hoverText, /rank \d+ of \d+/);
   });
 
+  it('never picks a sentence of a team template named by tersely.templateFiles', async () => {
+    const editor = await openDemo();
+    await vscode.commands.executeCommand('tersely.summarizeDocument');
+    const text = editor.document.getText();
+    const before = api.inspect(editor.document.uri)!;
+    const picked = text.slice(before.spans[0]!.start, before.spans[0]!.end);
+    const folder = vscode.workspace.workspaceFolders![0]!.uri;
+    const template = vscode.Uri.joinPath(folder, 'team-template.md');
+    await vscode.workspace.fs.writeFile(template, new TextEncoder().encode(`# Proposal template\n\n${picked}\n`));
+    try {
+      await setting('templateFiles', ['team-template.md']);
+      await vscode.commands.executeCommand('tersely.summarizeDocument');
+      const after = api.inspect(editor.document.uri)!;
+      assert.equal(after.spans.length, 5, 'still five sentences');
+      assert.ok(!after.spans.some((span) => text.slice(span.start, span.end) === picked), `the template sentence is not picked: ${picked}`);
+    } finally {
+      await setting('templateFiles', undefined);
+      await vscode.workspace.fs.delete(template);
+    }
+  });
+
   it('inserts the summary under the title as one edit that a single undo removes', async () => {
     const editor = await openDemo();
     const original = editor.document.getText();

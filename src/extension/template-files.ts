@@ -1,0 +1,65 @@
+/**
+ * The team's document templates named by `tersely.templateFiles`, read through the editor's file
+ * system (so it works in the browser editor too) relative to the document's workspace folder.
+ * The engine never picks a sentence found in one. A location that does not exist is passed over:
+ * the default names the conventional pull-request and issue template places, which most
+ * workspaces lack. A template that exists but cannot be read as text is reported, never hidden.
+ */
+import * as vscode from 'vscode';
+import { formatForFileName, TEMPLATE_LIMITS, type DocumentFormat } from '../core/index';
+
+export interface TemplateRead {
+  readonly templates: readonly { readonly text: string; readonly format: DocumentFormat }[];
+  /** One line per template that exists but could not be used. */
+  readonly problems: readonly string[];
+}
+
+async function statOf(uri: vscode.Uri): Promise<vscode.FileStat | undefined> {
+  try {
+    return await vscode.workspace.fs.stat(uri);
+  } catch {
+    return undefined;
+  }
+}
+
+/** The document files an entry names: the file, or a folder's document files (sorted, not recursive). */
+async function filesOf(entry: string, folder: vscode.Uri): Promise<vscode.Uri[]> {
+  const uri = /^[a-z][a-z0-9+.-]*:/i.test(entry) ? vscode.Uri.parse(entry) : vscode.Uri.joinPath(folder, entry);
+  const stat = await statOf(uri);
+  if (!stat) return [];
+  if (stat.type & vscode.FileType.File) return [uri];
+  if (!(stat.type & vscode.FileType.Directory)) return [];
+  const names = (await vscode.workspace.fs.readDirectory(uri))
+    .filter(([name, type]) => type & vscode.FileType.File && !name.startsWith('.') && formatForFileName(name) !== undefined)
+    .map(([name]) => name)
+    .sort();
+  return names.map((name) => vscode.Uri.joinPath(uri, name));
+}
+
+export async function readTemplateFiles(entries: readonly string[], document: vscode.Uri): Promise<TemplateRead> {
+  const folder = vscode.workspace.getWorkspaceFolder(document)?.uri;
+  if (!folder || entries.length === 0) return { templates: [], problems: [] };
+  const templates: { text: string; format: DocumentFormat }[] = [];
+  const problems: string[] = [];
+  const decoder = new TextDecoder('utf-8', { fatal: true });
+  for (const entry of entries) {
+    for (const uri of await filesOf(entry, folder)) {
+      const name = vscode.workspace.asRelativePath(uri, false);
+      if (templates.length >= TEMPLATE_LIMITS.maxTemplates) {
+        problems.push(`more than ${TEMPLATE_LIMITS.maxTemplates} templates: ${name} and later ones were not read`);
+        return { templates, problems };
+      }
+      try {
+        const bytes = await vscode.workspace.fs.readFile(uri);
+        // A UTF-8 character is at most 3 bytes per UTF-16 unit: bigger files cannot fit the cap.
+        if (bytes.length > 3 * TEMPLATE_LIMITS.maxTemplateChars) throw new Error(`larger than ${TEMPLATE_LIMITS.maxTemplateChars.toLocaleString('en-US')} characters`);
+        const text = decoder.decode(bytes).replace(/^\uFEFF/, '');
+        if (text.length > TEMPLATE_LIMITS.maxTemplateChars) throw new Error(`larger than ${TEMPLATE_LIMITS.maxTemplateChars.toLocaleString('en-US')} characters`);
+        templates.push({ text, format: formatForFileName(uri.path)?.id ?? 'markdown' });
+      } catch (error) {
+        problems.push(`template ${name} was not used: ${error instanceof Error ? error.message : String(error)}`);
+      }
+    }
+  }
+  return { templates, problems };
+}
