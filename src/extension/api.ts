@@ -11,6 +11,8 @@ export interface TerselyApi {
   readonly rejectedPanelMessages: number;
   /** Engine hosts started so far for summaries. */
   readonly engineHosts: number;
+  /** Templates (tersely.templateFiles) sent with the last summary request. */
+  readonly templatesInUse: number;
   readonly runtime: RuntimeReport;
   /** How long `activate` took, measured inside it. */
   readonly activationMs: number;
@@ -41,6 +43,9 @@ export function testApi(context: TerselyContext, runtime: RuntimeReport, activat
     },
     get engineHosts() {
       return context.engine.startedHosts;
+    },
+    get templatesInUse() {
+      return context.summarizer.templatesInUse;
     },
     runtime,
     activationMs,

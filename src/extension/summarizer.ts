@@ -25,6 +25,8 @@ export type SummarizeOutcome =
 export class Summarizer {
   /** Document key of the job the engine is running. */
   private runningKey: string | undefined;
+  /** Templates sent with the last request (the in-editor tests read it through the API). */
+  templatesInUse = 0;
   /** Template problems already shown, so each is said once. */
   private readonly toldTemplateProblems = new Set<string>();
 
@@ -70,6 +72,7 @@ export class Summarizer {
     const format = formatFor(document.languageId, document.fileName);
     const { templates, problems } = await readTemplateFiles(settings.host.templateFiles, document.uri);
     for (const problem of problems) this.tellTemplateProblem(problem);
+    this.templatesInUse = templates.length;
     // Live mode keeps the picks it showed unless a new sentence is clearly better (less churn while typing).
     const before = store.get(key);
     const previous = trigger === 'live' && before && before.scope === scope ? before.summary.sentences.map((p) => p.text) : undefined;

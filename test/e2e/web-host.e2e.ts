@@ -13,6 +13,7 @@ import assert from 'node:assert/strict';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
+import { SUMMARY_OPTIONS } from '../../src/core/options/schema';
 import { summarize } from '../../src/core/summarize';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
@@ -199,7 +200,7 @@ async function main(): Promise<void> {
     checks['modelFile'] = { method: 'bayes', sentences: withModel.length, differsFromBuiltIn: true };
     mark('the model file was read and used in the web worker');
     await setWorkspaceSettings(page, {});
-    await poll(() => panel.locator('#method').inputValue(), (value) => value === 'blend', 15_000, 'the settings to be restored');
+    await poll(() => panel.locator('#method').inputValue(), (value) => value === SUMMARY_OPTIONS.method.default, 15_000, 'the settings to be restored');
 
     // ---- a large document: progress names its stage ----
     await openFile(page, LARGE, 'Quillhaven Mobility');

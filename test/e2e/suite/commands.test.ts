@@ -107,11 +107,12 @@ describe('Tersely in the editor', function () {
     const template = vscode.Uri.joinPath(folder, 'team-template.md');
     await vscode.workspace.fs.writeFile(template, new TextEncoder().encode(`# Proposal template\n\n${picked}\n`));
     try {
+      // The setting change refreshes the summary on screen by itself.
       await setting('templateFiles', ['team-template.md']);
-      await vscode.commands.executeCommand('tersely.summarizeDocument');
-      const after = api.inspect(editor.document.uri)!;
+      const after = await until(() => api.inspect(editor.document.uri)!, (shown) => shown.id !== before.id, 'the summary refreshed after the setting changed');
+      assert.equal(api.templatesInUse, 1, 'the template file was read and sent');
       assert.equal(after.spans.length, 5, 'still five sentences');
-      assert.ok(!after.spans.some((span) => text.slice(span.start, span.end) === picked), `the template sentence is not picked: ${picked}`);
+      assert.ok(!after.spans.some((span) => text.slice(span.start, span.end) === picked), `the template sentence is not picked: ${JSON.stringify(picked)}; picks: ${JSON.stringify(after.spans.map((span) => text.slice(span.start, span.start + 30)))}; version ${after.version} id ${after.id} before id ${before.id}`);
     } finally {
       await setting('templateFiles', undefined);
       await vscode.workspace.fs.delete(template);
