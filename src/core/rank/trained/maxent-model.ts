@@ -16,7 +16,7 @@
 import defaultMaxentJson from '../../../../media/models/maxent-model.json';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { CONTINUOUS_NAMES, MAXENT_FEATURES, maxentFeatures, type MaxentFeatureMatrix } from './maxent-features';
-import { describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
+import { checkModelHeader, describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
 import { MODEL_FORMAT, MODEL_LIMITS, MODEL_VERSION, templateTextOf } from './model';
 
 export const MAXENT_KIND = 'maximum-entropy';
@@ -45,10 +45,7 @@ function weight(value: unknown, where: string): number {
 
 /** Checks a parsed maximum-entropy model file; throws ModelError saying what is wrong. */
 export function validateMaxentModel(json: unknown): MaxentModel {
-  if (!isRecord(json)) throw new ModelError('a model file must hold a JSON object');
-  if (own(json, 'format') !== MODEL_FORMAT) throw new ModelError(`not a sentence model: "format" must be "${MODEL_FORMAT}"`);
-  const version = own(json, 'version');
-  if (version !== MODEL_VERSION) throw new ModelError(`model version ${describeValue(version)} is not supported (expected ${MODEL_VERSION})`);
+  checkModelHeader(json, MODEL_FORMAT, MODEL_VERSION);
   if (own(json, 'kind') !== MAXENT_KIND) throw new ModelError(`model kind ${describeValue(own(json, 'kind'))} is not "${MAXENT_KIND}"`);
   onlyKeys(json, TOP_LEVEL_KEYS, 'the model');
   const regularization = own(json, 'regularization');

@@ -28,3 +28,11 @@ export function onlyKeys(record: Record<string, unknown>, allowed: ReadonlySet<s
 export function describeValue(value: unknown): string {
   return typeof value === 'number' || typeof value === 'boolean' || value === null ? String(value) : typeof value === 'string' ? JSON.stringify(value.slice(0, 40)) : typeof value;
 }
+
+/** The part every model file shares: a plain object of our format and version (the kind is each reader's). */
+export function checkModelHeader(json: unknown, format: string, version: number): asserts json is Record<string, unknown> {
+  if (!isRecord(json)) throw new ModelError('a model file must hold a JSON object');
+  if (own(json, 'format') !== format) throw new ModelError(`not a sentence model: "format" must be "${format}"`);
+  const found = own(json, 'version');
+  if (found !== version) throw new ModelError(`model version ${describeValue(found)} is not supported (expected ${version})`);
+}

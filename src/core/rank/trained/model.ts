@@ -17,7 +17,7 @@ import defaultModelJson from '../../../../media/models/default-model.json';
 import { checkLearnedTemplateText } from '../../select/template-text';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { FEATURES, sentenceFeatures, type FeatureMatrix } from './features';
-import { describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
+import { checkModelHeader, describeValue, isRecord, ModelError, onlyKeys, own } from './model-checks';
 import { scoreNaiveBayes, valueLogOdds, type ClassCounts, type NaiveBayesCounts } from './naive-bayes';
 
 export const MODEL_FORMAT = 'tersely-sentence-model';
@@ -81,10 +81,7 @@ function countList(value: unknown, where: string, arity: number): number[] {
  * every number is a finite count within MODEL_LIMITS. Features the model leaves out are not used.
  */
 export function validateModel(json: unknown): BayesModel {
-  if (!isRecord(json)) throw new ModelError('a model file must hold a JSON object');
-  if (own(json, 'format') !== MODEL_FORMAT) throw new ModelError(`not a sentence model: "format" must be "${MODEL_FORMAT}"`);
-  const version = own(json, 'version');
-  if (version !== MODEL_VERSION) throw new ModelError(`model version ${describeValue(version)} is not supported (expected ${MODEL_VERSION})`);
+  checkModelHeader(json, MODEL_FORMAT, MODEL_VERSION);
   const kind = own(json, 'kind');
   if (kind !== 'naive-bayes') throw new ModelError(`model kind ${describeValue(kind)} is not supported (expected "naive-bayes", or "maximum-entropy" where either kind is read)`);
   onlyKeys(json, TOP_LEVEL_KEYS, 'the model');
