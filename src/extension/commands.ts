@@ -43,10 +43,9 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
     }),
   'tersely.summarizeWithFocus': (context, focus) =>
     withEditor(context, async (editor) => {
-      // A focus passed in (tests, keybindings) wins; otherwise the selected words become the focus.
-      const selected = editor.document.getText(editor.selection);
-      const words = typeof focus === 'string' ? focus : selected;
-      if (words.trim() === '') {
+      // A focus passed in (tests, keybindings; empty = back to general) wins; otherwise the selected words.
+      const words = typeof focus === 'string' ? focus : editor.document.getText(editor.selection);
+      if (typeof focus !== 'string' && words.trim() === '') {
         void vscode.window.showInformationMessage(context.wording.t('Select a few words first: they become the focus of the summary.'));
         return { kind: 'empty' };
       }
