@@ -7,7 +7,7 @@
  * closes. Problems view entries only when `tersely.problemsView` asks.
  */
 import * as vscode from 'vscode';
-import { parseDocument, type AbstractReport, type Span } from '../core/index';
+import type { AbstractReport, Span } from '../core/index';
 import { abstractView } from './abstract-view';
 import type { TerselyContext } from './context';
 import { rangeOf } from './editor-ranges';
@@ -102,8 +102,19 @@ export class AbstractCheck {
 
   private async pickHeading(document: vscode.TextDocument): Promise<string | undefined> {
     const { t } = this.context.wording;
-    const parsed = parseDocument(document.getText(), { format: formatFor(document.languageId, document.fileName) });
-    const headings = parsed.sections.filter((s) => s.heading.length > 0).map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, heading: s.heading }));
+    // Parsed in the engine host, so the extension bundle carries no document parser.
+    let found: readonly { heading: string; depth: number }[];
+    try {
+      const result = await this.engine.run({ kind: 'headings', text: document.getText(), format: formatFor(document.languageId, document.fileName) });
+      if (result.kind !== 'headings') return undefined;
+      found = result.headings;
+    } catch (error) {
+      if (error instanceof CancelledError) return undefined;
+      const message = error instanceof Error ? error.message : String(error);
+      void vscode.window.showErrorMessage(t('Tersely could not read the document’s headings: {0}', message));
+      return undefined;
+    }
+    const headings = found.map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, heading: s.heading }));
     if (headings.length === 0) {
       void vscode.window.showInformationMessage(t('No section is headed Summary, Abstract or TL;DR, and the document has no headings. Select the abstract’s text and run Check Abstract again.'));
       return undefined;

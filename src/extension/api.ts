@@ -3,6 +3,7 @@ import type { Span } from '../core/index';
 import type { TerselyContext } from './context';
 import type { RuntimeReport } from './engine-hosts';
 import type { Scope } from './summaries';
+import type { PanelControls, PanelSummary } from './messages';
 
 export interface TerselyApi {
   inspect(uri: { toString(): string }): { id: number; version: number; scope: Scope; spans: Span[]; highlighted: boolean; warnings: number } | undefined;
@@ -16,6 +17,11 @@ export interface TerselyApi {
   readonly runtime: RuntimeReport;
   /** How long `activate` took, measured inside it. */
   readonly activationMs: number;
+  /** The panel webview's resource roots and command-link switch, once the panel has been shown. */
+  readonly panelWebview: { roots: string[]; enableCommandUris: boolean; enableScripts: boolean } | undefined;
+  /** What the panel was last sent to show. */
+  readonly panelSummary: PanelSummary | undefined;
+  readonly panelControls: PanelControls | undefined;
 }
 
 export function testApi(context: TerselyContext, runtime: RuntimeReport, activationMs: number): TerselyApi {
@@ -49,5 +55,16 @@ export function testApi(context: TerselyContext, runtime: RuntimeReport, activat
     },
     runtime,
     activationMs,
+    get panelWebview() {
+      const options = context.panel.webviewOptions;
+      if (!options) return undefined;
+      return { roots: (options.localResourceRoots ?? []).map((uri) => uri.toString()), enableCommandUris: options.enableCommandUris === true, enableScripts: options.enableScripts === true };
+    },
+    get panelSummary() {
+      return context.panel.shownSummary;
+    },
+    get panelControls() {
+      return context.controls();
+    },
   };
 }

@@ -41,6 +41,19 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
       void context.panel.show();
       return outcomeResult(await context.summarizer.summarize(editor, 'selection', 'command'));
     }),
+  'tersely.summarizeWithFocus': (context, focus) =>
+    withEditor(context, async (editor) => {
+      // A focus passed in (tests, keybindings; empty = back to general) wins; otherwise the selected words.
+      const words = typeof focus === 'string' ? focus : editor.document.getText(editor.selection);
+      if (typeof focus !== 'string' && words.trim() === '') {
+        void vscode.window.showInformationMessage(context.wording.t('Select a few words first: they become the focus of the summary.'));
+        return { kind: 'empty' };
+      }
+      void context.panel.show();
+      const used = await context.focus.set(words);
+      context.panel.post({ type: 'controls', controls: context.controls() });
+      return { ...outcomeResult(await context.summarizer.summarize(editor, 'document', 'command')), focus: used };
+    }),
   'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
   'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),

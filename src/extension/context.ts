@@ -14,6 +14,7 @@ import { LiveMode } from './live-mode';
 import type { PanelControls } from './messages';
 import { editorWording, localizedPanelText } from './localize';
 import { ModelFiles } from './model-file';
+import { FocusState } from './recent-focuses';
 import { handlePanelMessage } from './panel-actions';
 import { SummaryPanel } from './panel-provider';
 import { Debouncer, RequestSequencer } from './scheduling';
@@ -40,6 +41,7 @@ export class TerselyContext implements vscode.Disposable {
   readonly summarizer: Summarizer;
   readonly actions: SummaryActions;
   readonly abstractCheck: AbstractCheck;
+  readonly focus: FocusState;
   /** Every user-visible string goes through this (the editor's localization API). */
   readonly wording = editorWording();
 
@@ -53,6 +55,7 @@ export class TerselyContext implements vscode.Disposable {
     this.models = new ModelFiles(this.log);
     this.panel = this.own(new SummaryPanel(extension.extensionUri, (message) => void handlePanelMessage(this, message), this.log, () => this.engine.warm()));
     this.live = new LiveMode(this, extension.workspaceState);
+    this.focus = new FocusState(extension.workspaceState);
     this.editorView = new EditorView(this);
     this.summarizer = new Summarizer(this);
     this.actions = new SummaryActions(this);
@@ -83,7 +86,18 @@ export class TerselyContext implements vscode.Disposable {
       methods: METHOD_INFO.map((m) => ({ value: m.name, label: t(m.label), detail: t(m.detail) })),
       balance: summary.balance,
       live: this.live.on,
+      focus: this.focus.current,
+      recentFocuses: this.focus.recent,
     };
+  }
+
+  /** Sets the focus of the next summaries (empty: general), remembers it, and summarizes again. */
+  async setFocus(raw: string): Promise<string> {
+    const focus = await this.focus.set(raw);
+    this.panel.post({ type: 'controls', controls: this.controls() });
+    const editor = this.targetEditor();
+    if (editor) await this.summarizer.summarize(editor, 'document', 'refresh');
+    return focus;
   }
 
   /** The editor a command acts on: the active one, else the one whose summary the panel shows. */

@@ -7,7 +7,7 @@
  * size), the host validates and keeps it, and each job names the key it expects. Document text
  * and settings travel with every job.
  */
-import type { AbstractReport, CheckAbstractRequest, Summary, SummaryStage as SummarizeStage } from '../core/index';
+import type { AbstractReport, CheckAbstractRequest, DocumentFormat, Summary, SummaryStage as SummarizeStage } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
 export type EngineStage = SummarizeStage;
@@ -20,7 +20,15 @@ export interface EngineModel {
 
 export type EngineTask =
   | { readonly kind: 'summarize'; readonly text: string; readonly options: Omit<EngineRequestOptions, 'model'> }
-  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: Omit<CheckAbstractRequest, 'thresholds' | 'model'> };
+  | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: Omit<CheckAbstractRequest, 'thresholds' | 'model'> }
+  /** The document's headings in order (the abstract check's picker): read in the host, so the extension bundle carries no parser. */
+  | { readonly kind: 'headings'; readonly text: string; readonly format: DocumentFormat };
+
+/** One heading of a `headings` job: its text and nesting depth (1 = top level). */
+export interface EngineHeading {
+  readonly heading: string;
+  readonly depth: number;
+}
 
 /** Extension → host. */
 export type ToEngine =
@@ -37,7 +45,8 @@ export type EngineResult =
       readonly modelProblem?: string;
       readonly elapsedMs: number;
     }
-  | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number };
+  | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
+  | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number };
 
 /** Host → extension. */
 export type FromEngine =

@@ -6,7 +6,7 @@
  */
 import { checkAbstract } from '../core/index';
 import { loadModel } from '../core/index';
-import { summarize } from '../core/index';
+import { parseDocument, summarize } from '../core/index';
 import type { FromEngine, ToEngine } from './engine-protocol';
 
 interface CachedModel {
@@ -49,6 +49,11 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
         // The extension has the text already; sending it back would only double the copy.
         const slim = { ...summary, document: { ...summary.document, text: '' } };
         post({ type: 'done', id, result: { kind: 'summarize', summary: slim, elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}) } });
+      } else if (task.kind === 'headings') {
+        const headings = parseDocument(task.text, { format: task.format })
+          .sections.filter((s) => s.heading.length > 0)
+          .map((s) => ({ heading: s.heading, depth: s.depth }));
+        post({ type: 'done', id, result: { kind: 'headings', headings, elapsedMs: performance.now() - started } });
       } else {
         const report = checkAbstract(task.text, task.options);
         post({ type: 'done', id, result: { kind: 'checkAbstract', report, elapsedMs: performance.now() - started } });

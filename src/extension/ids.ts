@@ -24,6 +24,7 @@ export const COLOR_IDS = {
 export const COMMAND_IDS = [
   'tersely.summarizeDocument',
   'tersely.summarizeSelection',
+  'tersely.summarizeWithFocus',
   'tersely.insertSummary',
   'tersely.copySummary',
   'tersely.clearHighlights',

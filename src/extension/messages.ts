@@ -90,6 +90,10 @@ export interface PanelSummary {
   readonly changed: number;
   /** Sections with content the engine left out, and why (one line each). */
   readonly leftOut: readonly string[];
+  /** The document's key phrases, best first (a few). */
+  readonly keyPhrases: readonly string[];
+  /** The focus this summary was ranked towards; empty for a general summary. */
+  readonly focus: string;
 }
 
 /** A place the panel can ask the extension to show: an index into the check's own list of places. */
@@ -129,6 +133,9 @@ export interface PanelControls {
   readonly methods: readonly PanelMethodChoice[];
   readonly balance: boolean;
   readonly live: boolean;
+  /** The focus of the next summaries (empty: general) and the recent ones, newest first. */
+  readonly focus: string;
+  readonly recentFocuses: readonly string[];
 }
 
 export type NoticeKind = 'info' | 'stale' | 'tooLarge' | 'error';
@@ -187,4 +194,6 @@ export type FromPanel =
   | { readonly type: 'setLength'; readonly length: string }
   | { readonly type: 'setMethod'; readonly method: RankerName }
   | { readonly type: 'setBalance'; readonly enabled: boolean }
+  /** Empty: back to a general summary. */
+  | { readonly type: 'setFocus'; readonly focus: string }
   | { readonly type: 'command'; readonly command: import('./from-panel').PanelCommand };

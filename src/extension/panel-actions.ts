@@ -27,6 +27,9 @@ export async function handlePanelMessage(context: TerselyContext, message: FromP
     case 'setBalance':
       await settings.update(settingKeyOf('balance')!, message.enabled);
       return;
+    case 'setFocus':
+      await context.setFocus(message.focus);
+      return;
     case 'command':
       await vscode.commands.executeCommand(`tersely.${message.command}`);
       return;

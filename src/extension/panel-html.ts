@@ -10,6 +10,13 @@ export interface PanelHtmlInput {
   readonly styleUri: string;
 }
 
+/**
+ * The folders the webview may load from, below the extension: the panel's own script folder (no
+ * other bundle in it) and media/, which in the VSIX holds only the stylesheet and icons
+ * (.vscodeignore). Nothing else of dist/ (the extension and engine bundles) is reachable.
+ */
+export const PANEL_RESOURCE_FOLDERS: readonly (readonly string[])[] = [['dist', 'webview'], ['media']];
+
 /** The part of Web Crypto a nonce needs; both extension hosts (Node 20 and a Web Worker) have it. */
 export interface RandomSource {
   getRandomValues<T extends Uint8Array>(array: T): T;

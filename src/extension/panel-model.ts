@@ -11,6 +11,9 @@ import { ENGLISH, type Wording } from './wording';
 
 export { unitOfSection };
 
+/** Key phrases at the top of the panel: a compact line, not a list to read (ours). */
+export const KEY_PHRASES_SHOWN = 8;
+
 export const UNTITLED_SECTION = '(before the first heading)';
 
 export function repairLabel(repair: Repair, warning: StandAloneWarning, wording: Wording = ENGLISH): string {
@@ -115,5 +118,7 @@ export function buildPanelSummary(summary: Summary, id: number, documentName: st
     notices: summary.refused ? [summary.refused, ...summary.notices.filter((n) => n !== summary.refused)] : [...summary.notices],
     changed,
     leftOut: (summary.leftOut ?? []).map((section) => section.message),
+    keyPhrases: summary.keyPhrases.slice(0, KEY_PHRASES_SHOWN).map((phrase) => phrase.text),
+    focus: summary.focus?.text ?? '',
   };
 }

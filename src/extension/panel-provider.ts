@@ -5,7 +5,7 @@
  */
 import * as vscode from 'vscode';
 import { parsePanelMessage, type FromPanel, type PanelProgress, type ToPanel } from './messages';
-import { makeNonce, panelHtml } from './panel-html';
+import { makeNonce, PANEL_RESOURCE_FOLDERS, panelHtml } from './panel-html';
 import { VIEW_ID } from './ids';
 
 type Remembered = Partial<Record<ToPanel['type'], ToPanel>>;
@@ -15,6 +15,10 @@ export function panelResources(extensionUri: vscode.Uri): { script: vscode.Uri; 
   return { script: vscode.Uri.joinPath(extensionUri, 'dist', 'webview', 'panel.js'), style: vscode.Uri.joinPath(extensionUri, 'media', 'panel.css') };
 }
 
+export function panelResourceRoots(extensionUri: vscode.Uri): vscode.Uri[] {
+  return PANEL_RESOURCE_FOLDERS.map((folder) => vscode.Uri.joinPath(extensionUri, ...folder));
+}
+
 export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposable {
   private view: vscode.WebviewView | undefined;
   private readonly remembered: Remembered = {};
@@ -22,6 +26,15 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
   private readonly progress = new Map<number, PanelProgress>();
   private nextProgress = 1;
   private readonly disposables: vscode.Disposable[] = [];
+  /** The options the webview was given (the in-editor tests check its resource roots). */
+  get webviewOptions(): vscode.WebviewOptions | undefined {
+    return this.view?.webview.options;
+  }
+  /** The last summary the panel was sent (the in-editor tests check its new-pick marks). */
+  get shownSummary(): import('./messages').PanelSummary | undefined {
+    const message = this.remembered.summary;
+    return message?.type === 'summary' ? message.summary : undefined;
+  }
   /** Messages rejected so far (tests read it through the extension's API). */
   rejectedMessages = 0;
 
@@ -37,9 +50,7 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     this.view = view;
     this.onFirstShow();
     const { script, style } = panelResources(this.extensionUri);
-    // Roots are folders: the panel's own script folder (no other bundle in it) and media/, which
-    // in the VSIX holds only the stylesheet and icons (.vscodeignore).
-    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: [vscode.Uri.joinPath(script, '..'), vscode.Uri.joinPath(style, '..')] };
+    view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: panelResourceRoots(this.extensionUri) };
     view.webview.html = panelHtml({
       cspSource: view.webview.cspSource,
       nonce: makeNonce(),

@@ -86,7 +86,7 @@ export class Summarizer {
     };
     let summary: Summary;
     try {
-      const result = await engine.run({ kind: 'summarize', text, options: { ...toEngineOptions(settings, format, baseOffset), ...(templates.length > 0 ? { templates } : {}), ...(previous ? { previous } : {}) } }, { onStage });
+      const result = await engine.run({ kind: 'summarize', text, options: { ...toEngineOptions(settings, format, baseOffset), focus: this.context.focus.current, ...(templates.length > 0 ? { templates } : {}), ...(previous ? { previous } : {}) } }, { onStage });
       if (result.kind !== 'summarize') return { kind: 'failed' };
       summary = result.summary;
       if (result.modelProblem) models.reportProblem(settings.host.modelFile, result.modelProblem);

@@ -58,6 +58,8 @@ const summary = shape({
   notices: list(text),
   changed: whole,
   leftOut: list(text),
+  keyPhrases: list(text),
+  focus: text,
 });
 const link = shape({ label: text, target: whole });
 const check = shape({
@@ -73,6 +75,8 @@ const controls = shape({
   methods: list(shape({ value: text, label: text, detail: text })),
   balance: flag,
   live: flag,
+  focus: text,
+  recentFocuses: list(text),
 });
 const progress = shape({ task: oneOf('summarize', 'checkAbstract'), stage: oneOf('waiting', 'reading', 'ranking', 'checking', 'checkingAbstract'), label: text, stages: list(text) });
 const panelText = shape(Object.fromEntries(Object.keys(PANEL_TEXT).map((key) => [key, text])));

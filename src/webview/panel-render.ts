@@ -116,6 +116,15 @@ function renderShares(shares: readonly PanelShare[], text: PanelText): HTMLEleme
   ]);
 }
 
+/** Key phrases on one wrapping line: a list for screen readers, compact on screen. */
+function renderKeyPhrases(phrases: readonly string[], text: PanelText): HTMLElement | null {
+  if (phrases.length === 0) return null;
+  return el('div', { className: 'key-phrases' }, [
+    el('span', { className: 'label', attrs: { id: 'key-phrases-label' } }, [text.keyPhrases]),
+    el('ul', { attrs: { 'aria-labelledby': 'key-phrases-label' } }, phrases.map((phrase) => el('li', {}, [phrase]))),
+  ]);
+}
+
 /** The summary: heading, figures line, the sentence list, then the collapsible figures part. */
 export function renderSummary(summary: PanelSummary, text: PanelText, actions: RenderActions, open: ReadonlySet<string>): { element: HTMLElement; list: HTMLElement; items: HTMLElement[] } {
   const list = el(
@@ -132,6 +141,8 @@ export function renderSummary(summary: PanelSummary, text: PanelText, actions: R
       ' · ',
       el('span', { attrs: { 'data-figure': 'reading' } }, [summary.figures.reading]),
     ]),
+    summary.focus !== '' ? el('p', { className: 'focused-on' }, [el('span', { className: 'label' }, [text.focusedOn, ' ']), el('span', { attrs: { 'data-focus': '' } }, [summary.focus])]) : null,
+    renderKeyPhrases(summary.keyPhrases, text),
     ...summary.notices.map((notice) => el('p', { className: 'summary-notice' }, [notice])),
     list,
     el('p', { className: 'note' }, [text.note]),

@@ -9,6 +9,7 @@ import { PANEL_TEXT, type PanelText } from '../extension/panel-text';
 import { isToPanel } from '../extension/to-panel';
 import { el } from './dom';
 import { renderCheck, renderEmpty, renderSummary, collapsible, type RenderActions } from './panel-render';
+import { restoreState, stateToSave, type SavedState } from './panel-state';
 import { progressView } from './progress-view';
 import { rovingList, type RovingList } from './roving-list';
 
@@ -19,15 +20,8 @@ interface VsCodeApi {
 }
 declare function acquireVsCodeApi(): VsCodeApi;
 
-/** What survives a reload: no document text. */
-interface SavedState {
-  readonly scrollY: number;
-  readonly open: readonly string[];
-  readonly summaryId: number | null;
-}
-
 const vscode = acquireVsCodeApi();
-const saved = restore(vscode.getState());
+const saved = restoreState(vscode.getState());
 let text: PanelText = PANEL_TEXT;
 let summary: PanelSummary | null = null;
 let controls: PanelControls | null = null;
@@ -37,16 +31,8 @@ let busy: PanelProgress | null = null;
 const open = new Set<string>(saved.open);
 let summaryList: RovingList | null = null;
 
-function restore(raw: unknown): SavedState {
-  const state = typeof raw === 'object' && raw !== null ? (raw as Record<string, unknown>) : {};
-  const scrollY = typeof state['scrollY'] === 'number' && Number.isFinite(state['scrollY']) ? state['scrollY'] : 0;
-  const openParts = Array.isArray(state['open']) ? state['open'].filter((v): v is string => typeof v === 'string' && v.length < 100).slice(0, 200) : [];
-  const summaryId = typeof state['summaryId'] === 'number' ? state['summaryId'] : null;
-  return { scrollY, open: openParts, summaryId };
-}
-
 function save(): void {
-  vscode.setState({ scrollY: window.scrollY, open: [...open], summaryId: summary?.id ?? null });
+  vscode.setState(stateToSave(window.scrollY, open, summary?.id ?? null));
 }
 
 const post = (message: FromPanel): void => vscode.postMessage(message);
@@ -74,9 +60,10 @@ const progress = progressView();
 const noticeBox = el('div', { className: 'notice', attrs: { role: 'status', hidden: '' } });
 const content = el('div', { className: 'content', attrs: { id: 'content' } });
 const settingsPart = el('div', { className: 'settings-slot' });
+const focusPart = el('div', { className: 'focus-slot' });
 const checkPart = el('div', { className: 'check-slot' });
 const announcer = el('div', { className: 'visually-hidden', attrs: { role: 'status', 'aria-live': 'polite', id: 'announcer' } });
-app.append(toolbar, progress.element, noticeBox, content, checkPart, settingsPart, announcer);
+app.append(toolbar, focusPart, progress.element, noticeBox, content, checkPart, settingsPart, announcer);
 
 function commandButton(label: string, title: string, command: Extract<FromPanel, { type: 'command' }>['command'], primary: boolean, disabled = false): HTMLButtonElement {
   const button = el('button', { className: primary ? 'primary' : 'secondary', attrs: { type: 'button', title, 'aria-label': title, 'data-command': command } }, [label]);
@@ -142,6 +129,35 @@ function renderSettings(): void {
   );
 }
 
+/** The focus box: always in view under the toolbar; recent focuses offered as suggestions. */
+function renderFocus(): void {
+  if (!controls) {
+    focusPart.replaceChildren();
+    return;
+  }
+  const current = controls;
+  const input = el('input', {
+    attrs: { id: 'focus', type: 'search', spellcheck: 'false', list: 'recent-focuses', placeholder: text.focusPlaceholder, 'aria-describedby': 'focus-help', maxlength: '500' },
+  });
+  input.value = current.focus;
+  const recent = el('datalist', { attrs: { id: 'recent-focuses' } }, current.recentFocuses.map((focus) => el('option', { attrs: { value: focus } })));
+  const send = (value: string): void => {
+    if (value.trim() !== current.focus) post({ type: 'setFocus', focus: value.trim() });
+  };
+  input.addEventListener('keydown', (event) => {
+    if (event.key === 'Enter') send(input.value);
+  });
+  const apply = el('button', { className: 'secondary', attrs: { type: 'button', id: 'focus-apply', title: text.focusApplyTitle } }, [text.focusApply]);
+  apply.addEventListener('click', () => send(input.value));
+  const clear = el('button', { className: 'secondary', attrs: { type: 'button', id: 'focus-clear', title: text.focusClearTitle } }, [text.focusClear]);
+  clear.disabled = current.focus === '';
+  clear.addEventListener('click', () => send(''));
+  focusPart.replaceChildren(
+    el('div', { className: 'focus-row', attrs: { role: 'search', 'aria-label': text.focus } }, [el('label', { attrs: { for: 'focus' } }, [text.focus]), input, apply, clear, recent]),
+    el('p', { className: 'help', attrs: { id: 'focus-help' } }, [text.focusHelp]),
+  );
+}
+
 function renderNotice(): void {
   noticeBox.textContent = notice?.text ?? '';
   noticeBox.dataset['kind'] = notice?.kind ?? '';
@@ -182,6 +198,7 @@ function renderAll(): void {
   document.documentElement.lang = text === PANEL_TEXT ? 'en' : document.documentElement.lang;
   renderToolbar();
   renderSettings();
+  renderFocus();
   renderNotice();
   renderContent();
   renderCheckPart();
@@ -203,6 +220,7 @@ function handle(message: import('../extension/messages').ToPanel): void {
     case 'controls':
       controls = message.controls;
       renderSettings();
+      renderFocus();
       renderToolbar();
       break;
     case 'text':

@@ -203,6 +203,14 @@ async function main(): Promise<void> {
     const wordsIn = (text: string) => Number(text.split(' of ')[1]!.replace(/[^0-9]/g, ''));
     const wordsAfter = await poll(() => panel.locator('[data-figure="words"]').innerText(), (text) => wordsIn(text) >= wordsIn(wordsBefore) + 16, 30_000, 'the panel to follow the edit');
     checks['live'] = { wordsBefore, wordsAfter, newPicks: await panel.locator('li.pick.new').count() };
+    // A pick marked new carries the visible mark and says so to screen readers; the others carry neither
+    // (the in-editor suite checks which picks the model marks after a deterministic edit).
+    const newPickLabel = 'New since the last summary';
+    for (const item of await panel.locator('li.pick.new').all()) {
+      assert.equal(await item.locator('.badge-new').count(), 1, 'a new pick shows its mark');
+      assert.ok(((await item.getAttribute('aria-label')) ?? '').startsWith(`${newPickLabel}: `));
+    }
+    assert.equal(await panel.locator('li.pick:not(.new) .badge-new').count(), 0, 'no mark on picks that are not new');
     mark(`live update: ${wordsBefore} became ${wordsAfter}`);
     // The typing left the viewport at the end of the document; highlights are drawn only where visible.
     await page.keyboard.press('Control+Home');
@@ -212,6 +220,21 @@ async function main(): Promise<void> {
     assert.deepEqual(await page.locator('.tabs-container .tab.dirty').allInnerTexts(), [DEMO]);
     await runCommand(page, 'Tersely: Toggle Live Summary');
     await panel.locator('#live[aria-pressed="false"]').waitFor({ timeout: 10_000 });
+
+    // ---- the focus box: a focus typed in the panel re-ranks towards it; Clear goes back ----
+    assert.ok((await panel.locator('.key-phrases li').count()) > 0, 'key phrases on top of the summary');
+    await panel.locator('#focus').fill('van routes');
+    await panel.locator('#focus').press('Enter');
+    await panel.locator('.focused-on [data-focus]').waitFor({ timeout: 20_000 });
+    assert.equal(await panel.locator('.focused-on [data-focus]').innerText(), 'van routes');
+    const focusedPicks = await panel.locator('.summary-list li.pick .pick-text').allInnerTexts();
+    assert.ok(focusedPicks.length > 0 && focusedPicks.every((pick) => /\bvans?\b|\brout/i.test(pick)), `every focused pick uses a focus word: ${focusedPicks.join(' | ')}`);
+    checks['focus'] = { picks: focusedPicks.length, keyPhrases: await panel.locator('.key-phrases li').allInnerTexts() };
+    await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '03b-focus-box.png') });
+    await panel.locator('#focus-clear').click();
+    await poll(() => panel.locator('.focused-on').count(), (n) => n === 0, 20_000, 'a general summary after Clear');
+    assert.equal(await panel.locator('#recent-focuses option').first().getAttribute('value'), 'van routes', 'the focus is offered again');
+    mark(`focus box: ${focusedPicks.length} focused picks, back to general`);
 
     // ---- coherence warnings sit inline with a button per repair; a repair changes the summary only ----
     // The engine (run here) tells which length gives the demo a flagged sentence; the panel's

@@ -7,7 +7,8 @@
 import assert from 'node:assert/strict';
 import { digestDocuments, startDigest, OptionsError, DIGEST_WEIGHTS } from '../../src/core/index';
 import { collectDocument } from '../../src/core/digest/collect';
-import { crossDocument } from '../../src/core/digest/cross-document';
+import { crossDocument, nearDuplicate } from '../../src/core/digest/cross-document';
+import { cosine } from '../../src/core/vectors';
 
 const doc = (title: string, ...paragraphs: string[]) => `# ${title}\n\n${paragraphs.join('\n\n')}\n`;
 
@@ -61,6 +62,54 @@ describe('digest of several documents', () => {
     const copies = pool.map((s, i) => [s, i] as const).filter(([s]) => s.text.startsWith('The night ferry leaves'));
     assert.equal(copies.length, 2);
     assert.equal(cross.representative[copies[0]![1]], cross.representative[copies[1]![1]]);
+  });
+
+  describe('near-duplicates across documents (shapes seen between re-proposed specs; sentences ours)', () => {
+    const sentence = (document: number, text: string) => {
+      const collected = collectDocument(document, `d${document}.md`, `# T\n\n${text}\n`, { format: 'markdown' }, 8);
+      return collected.kept.find((s) => s.text === text) ?? assert.fail(`not kept: ${text}`);
+    };
+    // Other sentences of the set, so that shared words have an inverse document frequency above zero.
+    const others = collectDocument(2, 'c.md', C, { format: 'markdown' }, 8).kept;
+    const pairs = (a: string, b: string) => {
+      const pool = [sentence(0, a), sentence(1, b), ...others];
+      const cross = crossDocument(pool, 3);
+      return cross.representative[0] === cross.representative[1];
+    };
+    it('groups a sentence whose one mechanism word changed between releases', () => {
+      assert.ok(pairs('Add a v3[.2] service extension that lets a reader add, remove, and list labels for a parcel.', 'Add a service microrevision that lets a reader add, remove, and list labels for a parcel.'));
+    });
+    it('groups a sentence whose option name changed', () => {
+      assert.ok(pairs('We will add a new routine for counting crates and pallets from the ledger that is read when [legacy]skip_ledger_counting is False.', 'We will add a new routine for counting crates and pallets from the ledger that is read when [stock]count_from_ledger is True.'));
+    });
+    it('groups a sentence repeated with a clause added', () => {
+      assert.ok(pairs('Change the depot routing methods to allow moving of parked trailers.', 'Change the depot routing methods to allow moving of parked trailers and check for the minimum yard version across sites.'));
+    });
+    it('keeps apart sentences that differ by a negation or a number, and sentences that only share a topic', () => {
+      assert.ok(!pairs('The depot accepts trailers from the northern yard at night.', 'The depot no longer accepts trailers from the northern yard at night.'));
+      assert.ok(!pairs('The depot keeps 20 trailers in reserve for the harbour shift.', 'The depot keeps 35 trailers in reserve for the harbour shift.'));
+      assert.ok(!pairs('Trailers parked at the depot are weighed before loading.', 'The depot schedules its loading crews from a weekly rota kept by the harbour office.'));
+    });
+    it('never chains two distinct sentences through a middle one (star groups around the most relevant)', () => {
+      const pool = [
+        sentence(0, 'Change the depot routing methods to allow moving of parked trailers.'),
+        sentence(1, 'Change the depot routing methods to allow moving of parked trailers and checking of yard versions.'),
+        sentence(2, 'Change the depot routing methods to allow checking of yard versions and weighing of parked trailers at every site.'),
+        ...others,
+      ];
+      const cross = crossDocument(pool, 4);
+      const settings = { duplicateThreshold: 0.7, duplicateDice: 0.75 };
+      // The middle one is a near-duplicate of each end, the ends are not of each other.
+      assert.ok(nearDuplicate(pool[0]!, pool[1]!, 0, settings) && nearDuplicate(pool[1]!, pool[2]!, 0, settings));
+      assert.ok(!nearDuplicate(pool[0]!, pool[2]!, 0, settings));
+      // Every grouped sentence is a near-duplicate of its group's representative itself, not through another.
+      assert.ok(cross.representative.some((r, i) => r !== i), 'something is grouped');
+      for (let i = 0; i < pool.length; i++) {
+        const r = cross.representative[i]!;
+        assert.equal(cross.representative[r], r);
+        if (r !== i) assert.ok(nearDuplicate(pool[r]!, pool[i]!, cosine(cross.vectors[r]!, cross.vectors[i]!), settings), `${i} under ${r}`);
+      }
+    });
   });
 
   it('ranks by LexRank over the set: a sentence linked to sentences of other documents is more central (Erkan & Radev 2004)', () => {

@@ -155,6 +155,19 @@ describe('engine hosts', function () {
       assert.equal(out.length, 1);
       assert.ok(out[0]!.type === 'done' && out[0]!.result.kind === 'checkAbstract' && out[0]!.result.report.ok);
     });
+
+    it('lists the headings for the abstract picker in document order, with their depth', () => {
+      // CommonMark: ATX level = number of #, setext '=' = level 1 (spec 0.31.2, sections 4.2 and 4.3).
+      const text = '# Title\n\nIntro text here.\n\n## Findings\n\nSome text.\n\nNotes\n=====\n\nMore text.\n';
+      const out = run([{ type: 'job', id: 3, task: { kind: 'headings', text, format: 'markdown' } }]);
+      assert.equal(out.length, 1);
+      assert.ok(out[0]!.type === 'done' && out[0]!.result.kind === 'headings');
+      assert.deepEqual(out[0]!.result.headings, [
+        { heading: 'Title', depth: 1 },
+        { heading: 'Findings', depth: 2 },
+        { heading: 'Notes', depth: 1 },
+      ]);
+    });
   });
 
   describe('Node worker thread host', () => {

@@ -7,8 +7,9 @@
  *  - Pyramid weight (Nenkova & Passonneau 2004): content expressed in more sources weighs more.
  *    A sentence's tier is the number of documents with a sentence that says much the same
  *    (cosine at least `shareThreshold`), its own included; the weight is (tier − 1) / (D − 1).
- *  - Cross-document near-duplicates (cosine at least `duplicateThreshold`, different documents)
- *    are grouped; only the best of a group may be picked, and the others are listed as "also in".
+ *  - Cross-document near-duplicates (tf·idf cosine or Dice of content stems high enough, no
+ *    negation or number changed; `nearDuplicate`) are grouped around the most relevant one; only
+ *    that one may be picked, and the others are listed as "also in".
  * Sentences are compared in one tf·idf space built over the pool (vectors.ts), pairs found through
  * the inverted index within the limits of the sentence graph (similarity-graph.ts: each sentence
  * keeps its 32 strongest links, so a content unit shared by more documents than that is undercounted).
@@ -26,6 +27,12 @@ export const CROSS_DOCUMENT_DEFAULTS = {
   shareThreshold: 0.3,
   /** Cosine at which two sentences of different documents are near-duplicates (ours). */
   duplicateThreshold: 0.7,
+  /**
+   * Dice coefficient of the two sentences' sets of content stems at which they are near-duplicates
+   * even when tf·idf cosine is lower: a renamed option or a changed API mechanism ("API extension"
+   * → "API microversion") is one rare term that tf·idf weighs heavily (ours; set on the train half).
+   */
+  duplicateDice: 0.75,
   /** Strongest centroid terms kept, as centroid.ts (common practice, no source). */
   centroidTerms: 100,
 } as const;
@@ -75,7 +82,7 @@ export function crossDocument(pool: readonly PoolSentence[], documents: number, 
   for (let i = 0; i < n; i++) {
     relevance[i] = weights.own * pool[i]!.own + weights.pyramid * pyramid[i]! + weights.lexrank * lexrank[i]! + weights.centroid * centroid[i]!;
   }
-  const representative = duplicateGroups(pool, graph, relevance, settings.duplicateThreshold);
+  const representative = duplicateGroups(pool, graph, relevance, settings);
   return { vectors, vocabularySize, pyramid, lexrank, centroid, relevance, tier, representative };
 }
 
@@ -97,30 +104,44 @@ function centroidCloseness(vectors: readonly SparseVector[], totalCount: Float64
   return Float64Array.from(vectors, (vector) => cosine(vector, centroid));
 }
 
+const NEGATION = /\b(?:not|no|never|cannot|none|without|nor)\b|n't\b/iu;
+/** Stand-alone numbers (not parts of names such as "v2" or "[.1]"). */
+const NUMBER = /(?<=^|[\s(])\d+(?:[.,]\d+)*(?=$|[\s,;:.!?)%])/gu;
+
 /**
- * Near-duplicate groups across documents (union–find over links at or above the threshold); each
- * group's representative is its most relevant sentence (ties: the earlier one).
+ * Near-duplicates across documents: tf·idf cosine at least `duplicateThreshold`, or Dice of the
+ * content-stem sets at least `duplicateDice`; never when one says "not" and the other does not, or
+ * their stand-alone numbers differ (a changed value or a reversed statement is news, not a copy).
  */
-function duplicateGroups(pool: readonly PoolSentence[], graph: CsrGraph, relevance: Float64Array, threshold: number): Int32Array {
+export function nearDuplicate(a: PoolSentence, b: PoolSentence, cosineValue: number, settings: { readonly duplicateThreshold: number; readonly duplicateDice: number }): boolean {
+  if (NEGATION.test(a.text) !== NEGATION.test(b.text)) return false;
+  const numbers = (text: string) => [...new Set(text.match(NUMBER) ?? [])].sort().join(' ');
+  if (numbers(a.text) !== numbers(b.text)) return false;
+  if (cosineValue >= settings.duplicateThreshold) return true;
+  const x = new Set(a.terms);
+  const y = new Set(b.terms);
+  if (x.size === 0 || y.size === 0) return false;
+  let shared = 0;
+  for (const t of x) if (y.has(t)) shared++;
+  return (2 * shared) / (x.size + y.size) >= settings.duplicateDice;
+}
+
+/**
+ * Near-duplicate groups across documents, formed greedily by relevance (star clusters): the most
+ * relevant sentence not yet in a group takes every near-duplicate of it from another document that
+ * is not in a group yet. Unlike connected components, this never chains two distinct sentences
+ * through a middle one; no two representatives of different documents are near-duplicates.
+ */
+function duplicateGroups(pool: readonly PoolSentence[], graph: CsrGraph, relevance: Float64Array, settings: { readonly duplicateThreshold: number; readonly duplicateDice: number }): Int32Array {
   const n = pool.length;
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
-  const find = (x: number): number => {
-    while (parent[x] !== x) {
-      parent[x] = parent[parent[x]!]!;
-      x = parent[x]!;
-    }
-    return x;
-  };
-  for (let i = 0; i < n; i++) {
+  const representative = new Int32Array(n).fill(-1);
+  const order = Array.from({ length: n }, (_, i) => i).sort((x, y) => relevance[y]! - relevance[x]! || x - y);
+  for (const i of order) {
+    if (representative[i] !== -1) continue;
+    representative[i] = i;
     forEachLink(graph, i, (j, similarity) => {
-      if (j > i && similarity >= threshold && pool[i]!.document !== pool[j]!.document) parent[find(i)] = find(j);
+      if (representative[j] === -1 && pool[i]!.document !== pool[j]!.document && nearDuplicate(pool[i]!, pool[j]!, similarity, settings)) representative[j] = i;
     });
   }
-  const best = new Map<number, number>();
-  for (let i = 0; i < n; i++) {
-    const root = find(i);
-    const current = best.get(root);
-    if (current === undefined || relevance[i]! > relevance[current]!) best.set(root, i);
-  }
-  return Int32Array.from({ length: n }, (_, i) => best.get(find(i))!);
+  return representative;
 }

@@ -68,7 +68,7 @@ describe('Tersely in the editor', function () {
 
   it('registers every command', async () => {
     const commands = await vscode.commands.getCommands(true);
-    for (const id of ['summarizeDocument', 'summarizeSelection', 'insertSummary', 'copySummary', 'clearHighlights', 'toggleLive', 'checkAbstract']) {
+    for (const id of ['summarizeDocument', 'summarizeSelection', 'summarizeWithFocus', 'insertSummary', 'copySummary', 'clearHighlights', 'toggleLive', 'checkAbstract']) {
       assert.ok(commands.includes(`tersely.${id}`), id);
     }
   });
@@ -176,6 +176,67 @@ describe('Tersely in the editor', function () {
     const after = await until(() => api.inspect(editor.document.uri), (s) => s !== undefined && s.id !== first!.id && s.version === editor.document.version, 'the live summary of the edited text');
     assert.equal(after!.version, editor.document.version);
     assert.equal(after!.highlighted, true);
+  });
+
+  it('marks the picks a live edit brought in as new, and only those (the panel model the webview renders)', async () => {
+    const editor = await openDemo();
+    await vscode.commands.executeCommand('tersely.toggleLive');
+    const first = await until(() => api.inspect(editor.document.uri), (s) => s !== undefined && s.version === editor.document.version, 'the first live summary');
+    const before = api.panelSummary!;
+    assert.equal(before.id, first!.id);
+    const beforeTexts = new Set(before.groups.flatMap((g) => g.sentences.map((s) => s.text)));
+    assert.equal(before.changed, 0, 'a first summary marks nothing new');
+    // Deleting a picked sentence forces a different pick into its place.
+    const gone = first!.spans[0]!;
+    await editor.edit((builder) => builder.delete(new vscode.Range(editor.document.positionAt(gone.start), editor.document.positionAt(gone.end))));
+    await until(() => api.inspect(editor.document.uri), (s) => s !== undefined && s.id !== first!.id && s.version === editor.document.version, 'the live summary of the edited text');
+    const after = api.panelSummary!;
+    const picks = after.groups.flatMap((g) => g.sentences);
+    const expectedNew = picks.filter((s) => !beforeTexts.has(s.text)).map((s) => s.text);
+    assert.ok(expectedNew.length >= 1, 'the deleted pick was replaced by another sentence');
+    assert.deepEqual(picks.filter((s) => s.isNew).map((s) => s.text), expectedNew);
+    assert.equal(after.changed, expectedNew.length);
+  });
+
+  it('summarizes towards the selected words, shows the focus in the panel and remembers it', async () => {
+    const editor = await openDemo();
+    const text = editor.document.getText();
+    const at = text.indexOf('van routes');
+    assert.ok(at > 0, 'the demo mentions van routes');
+    editor.selection = new vscode.Selection(editor.document.positionAt(at), editor.document.positionAt(at + 'van routes'.length));
+    const result = (await vscode.commands.executeCommand('tersely.summarizeWithFocus')) as { kind: string; focus: string; id: number };
+    assert.equal(result.kind, 'shown');
+    assert.equal(result.focus, 'van routes');
+    const panel = api.panelSummary!;
+    assert.equal(panel.id, result.id);
+    assert.equal(panel.focus, 'van routes');
+    const picks = panel.groups.flatMap((g) => g.sentences.map((s) => s.text));
+    assert.ok(picks.length > 0);
+    // Only sentences that use a focus word may be picked (stems: "route", "routes", "van", "vans").
+    for (const pick of picks) assert.match(pick, /\bvans?\b|\broutes?\b|\brouting\b/i, pick);
+    assert.equal(api.panelControls!.focus, 'van routes');
+    assert.equal(api.panelControls!.recentFocuses[0], 'van routes');
+    // Back to a general summary (an empty focus passed in); the recent focus stays offered.
+    const general = (await vscode.commands.executeCommand('tersely.summarizeWithFocus', '')) as { kind: string };
+    assert.equal(general.kind, 'shown');
+    assert.equal(api.panelSummary!.focus, '');
+    assert.equal(api.panelControls!.recentFocuses[0], 'van routes');
+  });
+
+  it('says so instead of summarizing when Summarize Towards the Selected Words has no selection', async () => {
+    const editor = await openDemo();
+    editor.selection = new vscode.Selection(0, 0, 0, 0);
+    const result = (await vscode.commands.executeCommand('tersely.summarizeWithFocus')) as { kind: string };
+    assert.equal(result.kind, 'empty');
+  });
+
+  it('gives the panel webview only dist/webview/ and media/ to load from, and no command links', async () => {
+    await vscode.commands.executeCommand('tersely.showPanel');
+    const options = await until(() => api.panelWebview, (o) => o !== undefined, 'the panel to open');
+    const root = vscode.extensions.getExtension(EXTENSION_ID)!.extensionUri;
+    assert.deepEqual(options!.roots, [vscode.Uri.joinPath(root, 'dist', 'webview').toString(), vscode.Uri.joinPath(root, 'media').toString()]);
+    assert.equal(options!.enableCommandUris, false);
+    assert.equal(options!.enableScripts, true);
   });
 
   it('live mode follows the active editor when switching documents', async () => {
