@@ -474,7 +474,7 @@ async function report(args: readonly string[], printed: string[]): Promise<numbe
   }
 
   console.log('\nExtension footprint (as built in dist/; npm run build does not minify, the packaged build may):');
-  for (const file of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/webview.js', 'dist/cli.cjs']) console.log(`  ${file.padEnd(24)} ${fileSize(file)}`);
+  for (const file of ['dist/extension.cjs', 'dist/engine-worker.cjs', 'dist/webview/panel.js', 'dist/cli.cjs']) console.log(`  ${file.padEnd(25)} ${fileSize(file)}`);
   const packages = readdirSync('.').filter((name) => name.endsWith('.vsix'));
   if (packages.length === 0) console.log('  .vsix                    none in the repository root');
   for (const name of packages) console.log(`  ${name.padEnd(24)} ${fileSize(name)}`);
