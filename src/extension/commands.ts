@@ -50,8 +50,7 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
         return { kind: 'empty' };
       }
       void context.panel.show();
-      const used = await context.focus.set(words);
-      context.panel.post({ type: 'controls', controls: context.controls() });
+      const used = await context.useFocus(words);
       return { ...outcomeResult(await context.summarizer.summarize(editor, 'document', 'command')), focus: used };
     }),
   'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),

@@ -91,10 +91,16 @@ export class TerselyContext implements vscode.Disposable {
     };
   }
 
-  /** Sets the focus of the next summaries (empty: general), remembers it, and summarizes again. */
-  async setFocus(raw: string): Promise<string> {
+  /** Sets the focus of the next summaries (empty: general), remembers it and shows it in the panel's controls. */
+  async useFocus(raw: string): Promise<string> {
     const focus = await this.focus.set(raw);
     this.panel.post({ type: 'controls', controls: this.controls() });
+    return focus;
+  }
+
+  /** As `useFocus`, then summarizes the target editor again. */
+  async setFocus(raw: string): Promise<string> {
+    const focus = await this.useFocus(raw);
     const editor = this.targetEditor();
     if (editor) await this.summarizer.summarize(editor, 'document', 'refresh');
     return focus;

@@ -3,9 +3,10 @@
  * ours, every field of the right type and range, and no extra fields; anything else is rejected
  * with a reason (the caller logs it and does nothing else). Never throws. No editor API here.
  */
-import { METHOD_NAMES, parseLength, SUMMARY_OPTIONS } from '../core/index';
+import { METHOD_NAMES, parseLength } from '../core/index';
 import type { RankerName } from '../core/index';
 import type { FromPanel } from './messages';
+import { FOCUS_MAX_LENGTH } from './recent-focuses';
 
 export const PANEL_COMMANDS = ['summarizeDocument', 'copySummary', 'insertSummary', 'toggleLive', 'clearHighlights', 'checkAbstract'] as const;
 export type PanelCommand = (typeof PANEL_COMMANDS)[number];
@@ -14,8 +15,6 @@ export type ParseResult<T> = { readonly ok: true; readonly message: T } | { read
 
 const MAX_INDEX = 10_000_000;
 const MAX_LENGTH_TEXT = 40;
-/** The schema's bound for a focus (options/schema.ts: `focus`). */
-const MAX_FOCUS = (SUMMARY_OPTIONS.focus.kind.json as { maxLength?: number }).maxLength ?? 0;
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
@@ -74,7 +73,7 @@ export function parsePanelMessage(raw: unknown): ParseResult<FromPanel> {
     }
     case 'setFocus': {
       const { focus } = raw;
-      if (!shape(['focus']) || typeof focus !== 'string' || focus.length > MAX_FOCUS) return reject('malformed setFocus');
+      if (!shape(['focus']) || typeof focus !== 'string' || focus.length > FOCUS_MAX_LENGTH) return reject('malformed setFocus');
       return { ok: true, message: { type, focus } };
     }
     case 'command': {

@@ -8,10 +8,12 @@ import { SUMMARY_OPTIONS } from '../core/index';
 export const RECENT_FOCUS_LIMIT = 5;
 const STATE_KEY = 'tersely.recentFocuses';
 
+/** The schema's bound for a focus (options/schema.ts: `focus`). */
+export const FOCUS_MAX_LENGTH = SUMMARY_OPTIONS.focus.kind.json.maxLength ?? 0;
+
 /** The focus as the engine will take it: spaces collapsed, at most the schema's length. */
 export function cleanFocus(raw: string): string {
-  const max = (SUMMARY_OPTIONS.focus.kind.json as { maxLength?: number }).maxLength ?? 0;
-  return raw.replace(/\s+/g, ' ').trim().slice(0, max);
+  return raw.replace(/\s+/g, ' ').trim().slice(0, FOCUS_MAX_LENGTH);
 }
 
 /** `focus` first, without repeats (case-insensitive), at most `limit` entries; an empty focus changes nothing. */

