@@ -7,6 +7,7 @@ import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { extractKeyPhrases, prepareDocument, summarize, type PreparedDocument } from '../../src/core/index';
 import { LEXICON_NON_KEYWORDS } from '../../src/core/keyphrases/english-lexicon-words';
+import { stem } from '../../src/core/text/tokens';
 import { lexiconModule, lexiconNonKeywords } from '../../scripts/keyphrase-lexicon';
 
 function prepared(text: string, format: 'plaintext' | 'markdown' = 'plaintext'): PreparedDocument {
@@ -103,6 +104,17 @@ describe('key phrases (TextRank keywords, Mihalcea & Tarau 2004)', () => {
     const words = new Set(extractKeyPhrases(prepared(text).analyzed, { maxPhrases: 100, keepShare: 1 }).flatMap((k) => k.text.split(' ')));
     for (const piece of ['https', 'html', 'www', 'org', 'index']) assert.ok(!words.has(piece), [...words].join(' | '));
     assert.ok(words.has('depot'), [...words].join(' | '));
+  });
+
+  it('never lists a phrase whose words all belong to a phrase above it (ours)', () => {
+    const text = 'Riders earn small rewards for moving bikes. Small rewards keep riders moving. Rewards riders like are small. ' +
+      'The rider rewards scheme pays riders small rewards each week. Vans move bikes between docks.';
+    const phrases = extractKeyPhrases(prepared(text).analyzed, { maxPhrases: 100, keepShare: 1 });
+    const stems = phrases.map((k) => new Set(k.text.split(' ').map((w) => stem(w, 'en'))));
+    stems.forEach((words, i) =>
+      stems.slice(0, i).forEach((above, j) => assert.ok(![...words].every((w) => above.has(w)), `"${phrases[i]!.text}" repeats "${phrases[j]!.text}"`)),
+    );
+    assert.ok(phrases.length >= 2, phrases.map((k) => k.text).join(' | '));
   });
 
   it('is deterministic', () => {

@@ -16,7 +16,8 @@
  *     T is capped at `maxKeywords`.
  *  4. Collapse: kept words that are adjacent in the text become one multi-word phrase. Adjacent
  *     means next to each other within a clause: a stop word or punctuation ends a phrase.
- * Phrases are ordered by the sum of their words' scores (the paper leaves phrase order open; ours).
+ * Phrases are ordered by the sum of their words' scores (the paper leaves phrase order open; ours),
+ * and a phrase whose words all appear in a phrase above it is left out (ours).
  */
 import type { AnalyzedDocument, KeyPhrase, Span } from '../types';
 import { stem, stopWords, wordTokens } from '../text/tokens';
@@ -198,7 +199,18 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
     tally.sentences.add(sentenceIndex);
   }
 
-  const ranked = [...phrases.values()].sort((x, y) => y.score - x.score || x.firstSeen - y.firstSeen).slice(0, settings.maxPhrases);
+  // A phrase whose words all belong to a phrase ranked above it ("rewards riders", "rider
+  // rewards" or "riders" under "riders small rewards") says nothing new and is left out (ours).
+  // A superset scores higher (scores are positive sums), so the longer phrase is the one kept.
+  const ranked: Tally[] = [];
+  const keptWords: Set<number>[] = [];
+  for (const [key, tally] of [...phrases].sort(([, x], [, y]) => y.score - x.score || x.firstSeen - y.firstSeen)) {
+    if (ranked.length >= settings.maxPhrases) break;
+    const words = key.split(' ').map(Number);
+    if (keptWords.some((kept) => words.every((w) => kept.has(w)))) continue;
+    ranked.push(tally);
+    keptWords.push(new Set(words));
+  }
   return ranked.map((tally) => {
     const text = mostCommon(tally.forms);
     return { text, score: tally.score, count: tally.count, occurrences: occurrencesOf(a, text, tally.sentences, settings.maxOccurrences) };
