@@ -59,10 +59,18 @@ export function abstractView(report: AbstractReport, documentName: string, wordi
   for (const sentence of abstract.sentences) {
     if (!sentence.claim) continue;
     // A consistency finding is part of its claim's verdict: its body line joins the claim's links, not an item of its own.
-    const links = [
-      ...sentence.support.map((support) => lineLink(support.span, support.line)),
-      ...sentence.findings.filter((f) => f.body && !sentence.support.some((s) => s.sentence === f.body!.sentence)).map((f) => lineLink(f.body!.span, f.body!.line)),
-    ];
+    // Each body sentence once, however many findings cite it.
+    const cited = new Map<number, { span: Span; line: number }>();
+    for (const support of sentence.support) cited.set(support.sentence, support);
+    for (const finding of sentence.findings) if (finding.body && !cited.has(finding.body.sentence)) cited.set(finding.body.sentence, finding.body);
+    const bodies = [...cited.values()];
+    // Two sentences on one line (a table row, a list line) get numbered links, so the labels differ.
+    const onLine = (line: number) => bodies.filter((b) => b.line === line);
+    const links = bodies.map((body) => {
+      const same = onLine(body.line);
+      if (same.length === 1) return lineLink(body.span, body.line);
+      return { label: t('line {0} ({1})', count(body.line), count(same.indexOf(body) + 1)), target: place(body.span)! };
+    });
     const target = place(sentence.span);
     if (sentence.supported) {
       items.push({ severity: 'ok', text: t('“{0}” is supported by the body.', quote(sentence.text)), target, links });

@@ -24,6 +24,14 @@ describe('extension abstract view', () => {
     assert.ok(targets.every((t) => t! < view.places.length));
     const supported = view.panel.items.find((i) => i.severity === 'ok');
     if (supported) assert.ok(supported.links.length > 0 && supported.links.every((l) => /^line \d+$/.test(l.label)));
+    // No item links the same body sentence twice, and link labels tell apart two sentences on one
+    // line (the demo's changed-number claim cites two sentences of line 50).
+    for (const item of view.panel.items) {
+      const starts = item.links.map((l) => view.places[l.target]!.start);
+      assert.equal(new Set(starts).size, starts.length, `${item.text}: ${item.links.map((l) => l.label).join(', ')}`);
+      assert.equal(new Set(item.links.map((l) => l.label)).size, item.links.length, `${item.text}: ${item.links.map((l) => l.label).join(', ')}`);
+    }
+    assert.ok(view.panel.items.some((i) => i.links.some((l) => l.label === 'line 50 (2)')), 'the demo has two cited sentences on line 50');
     // Each uncovered section links to its heading's line.
     for (const section of report.sections.filter((s) => !s.covered)) {
       const item = view.panel.items.find((i) => i.text.includes(`“${section.heading}”`) && i.text.includes('leaves out'))!;
