@@ -58,6 +58,8 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
   'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
   'tersely.toggleLive': (context) => context.live.toggle(),
   'tersely.checkAbstract': (context, heading) => withEditor(context, (editor) => context.abstractCheck.run(editor, typeof heading === 'string' ? heading : undefined)),
+  'tersely.digestOpenDocuments': (context) => context.digester.digestOpenDocuments(),
+  'tersely.digestFiles': (context, clicked, selected) => context.digester.digestFiles(clicked, selected),
   'tersely.showPanel': (context) => context.panel.show(true),
   'tersely.applyRepair': (context, args) => {
     if (!isRepairArgs(args)) {

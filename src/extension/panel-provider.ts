@@ -132,7 +132,7 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
   private focusWhenReady = false;
 
   private replay(): void {
-    for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {
+    for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'digest', 'progress'] as const) {
       const message = this.remembered[type];
       if (message) void this.view?.webview.postMessage(message);
     }
