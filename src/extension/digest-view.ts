@@ -51,3 +51,13 @@ export function digestView(digest: Digest, wording: Wording = ENGLISH): DigestVi
   const headline = t('Digest of {0} documents: {1} sentences, {2} of {3} words.', count(s.documents), count(s.sentencesOut), count(s.wordsOut), count(s.wordsIn));
   return { panel: { headline, documents, notices: [...digest.notices] }, places };
 }
+
+/** Names as the digest shows them; a name seen twice (two untitled documents, two roots) gets a number. */
+export function uniqueNames(names: readonly string[]): string[] {
+  const seen = new Map<string, number>();
+  return names.map((name) => {
+    const k = (seen.get(name) ?? 0) + 1;
+    seen.set(name, k);
+    return k === 1 ? name : `${name} (${k})`;
+  });
+}

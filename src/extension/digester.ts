@@ -9,7 +9,7 @@ import * as vscode from 'vscode';
 import type { DigestRequest, DocumentFormat, Span } from '../core/index';
 import type { TerselyContext } from './context';
 import { collectDigestFiles, isDigestLanguage, type DigestFileSystem } from './digest-files';
-import { digestView } from './digest-view';
+import { digestView, uniqueNames } from './digest-view';
 import { rangeOf } from './editor-ranges';
 import type { EngineDigestDocument } from './engine-protocol';
 import type { PanelDigest } from './messages';
@@ -195,14 +195,4 @@ export class Digester {
   get shownPlaces(): readonly { readonly uri: string; readonly span: Span }[] {
     return (this.shown?.places ?? []).map((p) => ({ uri: p.uri.toString(), span: p.span }));
   }
-}
-
-/** Names as the digest shows them; a name seen twice (two untitled documents, two roots) gets a number. */
-export function uniqueNames(names: readonly string[]): string[] {
-  const seen = new Map<string, number>();
-  return names.map((name) => {
-    const k = (seen.get(name) ?? 0) + 1;
-    seen.set(name, k);
-    return k === 1 ? name : `${name} (${k})`;
-  });
 }
