@@ -276,7 +276,7 @@ export interface SectionLeftOut {
 }
 
 /** Why a sentence is never picked (select/sentence-kinds.ts). */
-export type BarredKind = 'placeholder' | 'boilerplate' | 'byline' | 'metadata' | 'template';
+export type BarredKind = 'placeholder' | 'boilerplate' | 'byline' | 'metadata' | 'template' | 'apiLine';
 
 export interface Summary {
   readonly document: ParsedDocument;

@@ -16,6 +16,24 @@ export const KEY_PHRASES_SHOWN = 8;
 
 export const UNTITLED_SECTION = '(before the first heading)';
 
+/** What `previousPicksFor` needs of a summary on screen. */
+export interface ShownPicks {
+  readonly scope: 'document' | 'selection';
+  readonly version: number;
+  readonly summary: Pick<Summary, 'sentences' | 'focus'>;
+}
+
+/**
+ * The picks to compare a new summary with, so the ones an edit brought in are marked "new"; none
+ * after a command, or when the document did not change, or when the focus changed: a new focus,
+ * like a new length, changes the picks on purpose, and marking them all would say nothing.
+ */
+export function previousPicksFor(before: ShownPicks | undefined, next: ShownPicks, byCommand: boolean): ReadonlySet<string> | undefined {
+  if (before === undefined || byCommand || before.scope !== next.scope || before.version === next.version) return undefined;
+  if ((before.summary.focus?.text ?? '') !== (next.summary.focus?.text ?? '')) return undefined;
+  return new Set(before.summary.sentences.map((p) => p.text));
+}
+
 export function repairLabel(repair: Repair, warning: StandAloneWarning, wording: Wording = ENGLISH): string {
   switch (repair.kind) {
     case 'addContext':

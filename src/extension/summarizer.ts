@@ -7,7 +7,7 @@ import * as vscode from 'vscode';
 import type { Span, Summary } from '../core/index';
 import type { TerselyContext } from './context';
 import type { EngineStage } from './engine-protocol';
-import { buildPanelSummary } from './panel-model';
+import { buildPanelSummary, previousPicksFor } from './panel-model';
 import { startProgress } from './progress';
 import { CONTEXT_KEYS } from './ids';
 import { checkedSpan } from './ranges';
@@ -109,8 +109,7 @@ export class Summarizer {
       log.debug(`Dropped a stale result for ${document.fileName} v${ticket.version}.`);
       return { kind: 'stale' };
     }
-    // Picks of the summary this one replaces (same document), so new ones can be marked.
-    const previousPicks = before && before.scope === scope && trigger !== 'command' ? new Set(before.summary.sentences.map((p) => p.text)) : undefined;
+    const previousPicks = previousPicksFor(before, { scope, version: ticket.version, summary }, trigger === 'command');
     const shown = store.add({
       key,
       uri: document.uri,

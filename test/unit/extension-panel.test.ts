@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Heading, List, Paragraph, RootContent } from 'mdast';
-import { buildPanelSummary, UNTITLED_SECTION } from '../../src/extension/panel-model';
+import { buildPanelSummary, previousPicksFor, UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { applyRepair, countWords } from '../../src/core/index';
 import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
 import { convergenceOf, describePick } from '../../src/extension/hover-text';
@@ -59,6 +59,19 @@ describe('extension panel model', () => {
       panel.groups.flatMap((g) => g.sentences.filter((s) => s.isNew).map((s) => s.sentence)),
       [summary.sentences[0]!.sentence],
     );
+  });
+
+  it('compares with the previous picks only after an edit with the same focus, never after a command', () => {
+    const summary = ferrySummary();
+    const before = { scope: 'document' as const, version: 3, summary };
+    const focused = { ...summary, focus: { text: 'night fares', terms: 2, termsFound: 2, matchingSentences: 2 } };
+    const picks = previousPicksFor(before, { scope: 'document', version: 4, summary }, false);
+    assert.deepEqual([...(picks ?? [])], summary.sentences.map((p) => p.text), 'an edit: compare');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary: focused }, false), undefined, 'a new focus');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 3, summary }, false), undefined, 'no edit (a new length, a refresh)');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary }, true), undefined, 'a command');
+    assert.equal(previousPicksFor(before, { scope: 'selection', version: 4, summary }, false), undefined, 'another scope');
+    assert.equal(previousPicksFor(undefined, { scope: 'document', version: 4, summary }, false), undefined, 'a first summary');
   });
 
   it('says why a sentence was picked in words, with the numbers apart', () => {

@@ -4,7 +4,10 @@
  * adjacent keywords collapsed into phrases).
  */
 import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
 import { extractKeyPhrases, prepareDocument, summarize, type PreparedDocument } from '../../src/core/index';
+import { LEXICON_NON_KEYWORDS } from '../../src/core/keyphrases/english-lexicon-words';
+import { lexiconModule, lexiconNonKeywords } from '../../scripts/keyphrase-lexicon';
 
 function prepared(text: string, format: 'plaintext' | 'markdown' = 'plaintext'): PreparedDocument {
   const p = prepareDocument(text, { format });
@@ -76,6 +79,30 @@ describe('key phrases (TextRank keywords, Mihalcea & Tarau 2004)', () => {
     const summary = summarize(PAPER_ABSTRACT, { format: 'plaintext' });
     assert.ok(summary.keyPhrases.length > 0);
     assert.ok(summary.keyPhrases.length <= 10);
+  });
+
+  it('keeps only words that can be nouns or adjectives, by the English lexicon of natural\'s Brill tagger', () => {
+    // The paper's filter keeps nouns and adjectives. "attach", "during" and "rarely" are never
+    // nouns or adjectives in the lexicon (natural, lexicon_from_posjs.json); "update" can be a noun.
+    const text = 'Couriers attach parcel labels during night shifts. Couriers rarely attach parcel labels. ' +
+      'The label update reaches night shifts. Parcel labels attach during the update.';
+    const words = new Set(extractKeyPhrases(prepared(text).analyzed, { maxPhrases: 100, keepShare: 1 }).flatMap((k) => k.text.split(' ')));
+    for (const verb of ['attach', 'during', 'rarely']) assert.ok(!words.has(verb), [...words].join(' | '));
+    for (const noun of ['parcel', 'labels', 'update', 'couriers']) assert.ok(words.has(noun), [...words].join(' | '));
+  });
+
+  it('matches the lexicon it was generated from (scripts/keyphrase-lexicon.ts; npm package natural)', () => {
+    const words = lexiconNonKeywords();
+    assert.ok(words.length > 1000, `${words.length} words`);
+    assert.deepEqual(LEXICON_NON_KEYWORDS.split(' '), words, 'english-lexicon-words.ts is out of date: npm run keyphrase-lexicon');
+    assert.equal(readFileSync(new URL('../../src/core/keyphrases/english-lexicon-words.ts', import.meta.url), 'utf8'), lexiconModule(words));
+  });
+
+  it('never takes a web address apart into key phrases', () => {
+    const text = 'Depot maps live at https://depot.example.org/maps/index.html today. Depot maps list every depot. See www.example.org/depot-maps for depot maps.';
+    const words = new Set(extractKeyPhrases(prepared(text).analyzed, { maxPhrases: 100, keepShare: 1 }).flatMap((k) => k.text.split(' ')));
+    for (const piece of ['https', 'html', 'www', 'org', 'index']) assert.ok(!words.has(piece), [...words].join(' | '));
+    assert.ok(words.has('depot'), [...words].join(' | '));
   });
 
   it('is deterministic', () => {

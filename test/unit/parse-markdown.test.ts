@@ -16,6 +16,21 @@ const sourceOf = (doc: ParsedDocument): string[] =>
 const texts = (doc: ParsedDocument): string[] => doc.sentences.map((s) => s.text);
 
 describe('parse: Markdown', () => {
+  describe('inline code', () => {
+    // CommonMark 0.30 §6.1: a code span's content is literal, so its "." and "?" are syntax, not
+    // sentence punctuation (common practice, no source, for the splitting rule itself).
+    it('never ends a sentence inside a code span', () => {
+      const doc = md('Both `${ .. }` and `a?.b` stay whole. The next sentence starts here.\n');
+      assert.deepEqual(texts(doc), ['Both ${ .. } and a?.b stay whole.', 'The next sentence starts here.']);
+      assert.deepEqual(sourceOf(doc), ['Both `${ .. }` and `a?.b` stay whole.', 'The next sentence starts here.']);
+    });
+
+    it('still ends a sentence right after a code span, and inside a code span spread over lines', () => {
+      const doc = md('Call `run`. Then call\n`stop. now`. Done.\n');
+      assert.deepEqual(texts(doc), ['Call run.', 'Then call stop. now.', 'Done.']);
+    });
+  });
+
   describe('public API', () => {
     it('returns an empty document for empty input, with the root section', () => {
       const doc = md('');

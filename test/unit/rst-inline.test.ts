@@ -51,6 +51,14 @@ describe('rst: inline markup', () => {
     assert.equal(shown('Use *this*, **that** and ``the_literal(x)`` here.'), 'Use this, that and the_literal(x) here.');
   });
 
+  it('never ends a sentence inside an inline literal (its "." and "?" are code)', () => {
+    assert.deepEqual(texts('Both ``${ .. }`` and ``a?.b`` stay whole. The next sentence starts here.\n'), [
+      'Both ${ .. } and a?.b stay whole.',
+      'The next sentence starts here.',
+    ]);
+    assert.deepEqual(texts('Call ``run``. Then stop.\n'), ['Call run.', 'Then stop.']);
+  });
+
   it('keeps backslashes inside inline literals and removes escaped whitespace elsewhere', () => {
     assert.equal(shown('Path ``C:\\temp\\new`` and joined\\ words.'), 'Path C:\\temp\\new and joinedwords.');
   });

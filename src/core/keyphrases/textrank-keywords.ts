@@ -22,6 +22,7 @@ import type { AnalyzedDocument, KeyPhrase, Span } from '../types';
 import { stem, stopWords, wordTokens } from '../text/tokens';
 import { pageRank } from '../rank/power-iteration';
 import type { CsrGraph } from '../rank/similarity-graph';
+import { isEnglishNonKeyword } from './english-shapes';
 
 export interface KeyPhraseSettings {
   readonly window: number;
@@ -58,28 +59,20 @@ export const KEYPHRASE_DEFAULTS: KeyPhraseSettings = {
   maxOccurrences: 200,
 };
 
-/** Punctuation that ends a clause (and so a phrase): a mark followed by space or the end, or a bracket or quote. */
-const CLAUSE_BREAK = /[,;:.!?](?=\s|$)|[()[\]{}"“”«»|]|\s[-–—]+\s/u;
+/**
+ * What ends a clause (and so a phrase): a web address (its pieces, "https", "www", "html", are not
+ * words of the text), a mark followed by space or the end, or a bracket or quote.
+ */
+const CLAUSE_BREAK = /\b(?:https?|ftp):\/\/\S+|\bwww\.\S+|[,;:.!?](?=\s|$)|[()[\]{}"“”«»|]|\s[-–—]+\s/u;
 const HAS_LETTER = /\p{L}/u;
 /** Relative difference below which two PageRank scores count as tied (power iteration stops at 1e-4). */
 const TIE_TOLERANCE = 1e-3;
 
 /**
- * Part-of-speech-free stand-ins for the paper's noun-and-adjective filter, per language: word
- * shapes that are almost always verb forms. English: past participles in -ed (not -eed: "speed")
- * and -ing forms of seven letters or more ("string" and "thing" stay; "solving" goes). Ours,
- * checked on the paper's worked example only; a language without an entry keeps every non-stop word.
+ * Part-of-speech-free stand-ins for the paper's noun-and-adjective filter, per language (see
+ * english-shapes.ts); a language without an entry keeps every non-stop word.
  */
-const VERB_SHAPES: Readonly<Record<string, (word: string) => boolean>> = {
-  en: (word) =>
-    (word.length >= 4 && word.endsWith('ed') && !word.endsWith('eed')) || (word.length >= 7 && word.endsWith('ing')) || ENGLISH_NON_KEYWORDS.has(word),
-};
-
-/** Frequent English verbs and number words that the stop-word list keeps but a key phrase never needs (ours). */
-const ENGLISH_NON_KEYWORDS: ReadonlySet<string> = new Set([
-  'use', 'uses', 'using', 'allow', 'allows', 'make', 'makes', 'making', 'get', 'gets', 'getting', 'take', 'takes',
-  'one', 'two', 'three', 'four', 'five', 'many', 'much', 'new', 'way', 'ways', 'like', 'want', 'wants', 'e.g', 'i.e', 'etc',
-]);
+const NON_KEYWORDS: Readonly<Record<string, (word: string) => boolean>> = { en: isEnglishNonKeyword };
 const NUMBER_LIKE = /^[\p{N}.,'-]+$/u;
 
 interface Clause {
@@ -104,9 +97,9 @@ function clausesOf(a: AnalyzedDocument): Clause[] {
 export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhraseSettings> = {}): KeyPhrase[] {
   const settings: KeyPhraseSettings = { ...KEYPHRASE_DEFAULTS, ...overrides };
   const stops = stopWords(a.language);
-  const verbShape = VERB_SHAPES[a.language];
+  const nonKeyword = NON_KEYWORDS[a.language];
   const isCandidate = (word: string) =>
-    word.length >= settings.minWordLength && word.length <= settings.maxWordLength && HAS_LETTER.test(word) && !NUMBER_LIKE.test(word) && !stops.has(word) && !verbShape?.(word);
+    word.length >= settings.minWordLength && word.length <= settings.maxWordLength && HAS_LETTER.test(word) && !NUMBER_LIKE.test(word) && !stops.has(word) && !nonKeyword?.(word);
 
   const clauses = clausesOf(a);
   const vertexOf = new Map<string, number>();

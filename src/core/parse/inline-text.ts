@@ -45,6 +45,9 @@ export class InlineTextBuilder {
   private readonly ends: number[] = [];
   /** Indices in `units` where a line ended (soft or hard break), for line-based checks. */
   private readonly lineBreaks: number[] = [];
+  /** [from, to) ranges of `units` that hold code: no sentence ends inside one. */
+  private readonly codeRanges: [number, number][] = [];
+  private codeFrom = -1;
 
   get length(): number {
     return this.units.length;
@@ -72,6 +75,16 @@ export class InlineTextBuilder {
     this.pushCode(LINE_FEED, offset, offset + 1);
   }
 
+  /** What is pushed until `endCode` is an inline code span, where no sentence ends ("`${ .. }`"). */
+  beginCode(): void {
+    this.codeFrom = this.units.length;
+  }
+
+  endCode(): void {
+    if (this.codeFrom >= 0 && this.units.length > this.codeFrom) this.codeRanges.push([this.codeFrom, this.units.length]);
+    this.codeFrom = -1;
+  }
+
   /** The raw (uncollapsed) text split at line breaks, trimmed; used by line-shaped checks. */
   lines(): string[] {
     const out: string[] = [];
@@ -92,6 +105,8 @@ export class InlineTextBuilder {
     const isSoftBreak = new Set(this.lineBreaks.filter((i) => this.units[i] === SPACE));
     let pendingBlank = -1; // index of the first blank of a run not yet written
     let pendingSoft = false; // that run holds a soft line break
+    /** Output index of each unit that was written, -1 for a unit collapsed away (code ranges only). */
+    const written = this.codeRanges.length > 0 ? new Int32Array(count).fill(-1) : null;
     for (let i = 0; i < count; i++) {
       const code = this.units[i]!;
       if (code === LINE_FEED) {
@@ -113,17 +128,28 @@ export class InlineTextBuilder {
         pendingBlank = -1;
         pendingSoft = false;
       }
+      if (written) written[i] = units.length;
       starts[units.length] = this.starts[i]!;
       ends[units.length] = this.ends[i]!;
       units.push(code);
     }
     while (units.length > 0 && units[units.length - 1] === LINE_FEED) units.pop();
     const length = units.length;
+    const unbreakable: Span[] = [];
+    if (written) {
+      for (const [from, to] of this.codeRanges) {
+        let first = from;
+        while (first < to && (written[first]! < 0 || written[first]! >= length)) first++;
+        let last = to - 1;
+        while (last >= first && (written[last]! < 0 || written[last]! >= length)) last--;
+        if (last > first) unbreakable.push({ start: written[first]!, end: written[last]! + 1 });
+      }
+    }
     return {
       text: codesToString(units, 0, length),
       starts: starts.slice(0, length),
       ends: ends.slice(0, length),
-      lines: { softBreaks, deliberate: this.options.deliberateLines ?? false },
+      lines: { softBreaks, deliberate: this.options.deliberateLines ?? false, ...(unbreakable.length > 0 ? { unbreakable } : {}) },
     };
   }
 

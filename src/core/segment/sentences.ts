@@ -28,6 +28,12 @@ export interface LineBreaks {
    * there the breaks are only used to cut runs longer than any sentence.
    */
   readonly deliberate: boolean;
+  /**
+   * Ascending, disjoint spans of the text that punctuation never ends a sentence inside: inline
+   * code, where "." and "?" are syntax (`${ .. }`, `a?.b`). Runs longer than any sentence are
+   * still cut there.
+   */
+  readonly unbreakable?: readonly Span[];
 }
 
 /**
@@ -35,6 +41,19 @@ export interface LineBreaks {
  * whitespace, in order and non-overlapping; together they cover every non-whitespace character.
  */
 export function splitSentences(text: string, lines: LineBreaks = { softBreaks: [], deliberate: false }): Span[] {
-  const spans = spansBetween(text, new BoundaryScanner(text).cuts());
+  const cuts = new BoundaryScanner(text).cuts();
+  const spans = spansBetween(text, lines.unbreakable ? cutsOutside(cuts, lines.unbreakable) : cuts);
   return refineSpans(text, spans, lines);
+}
+
+/** The ascending `cuts` that fall strictly inside none of the ascending, disjoint `spans`. */
+function cutsOutside(cuts: readonly number[], spans: readonly Span[]): number[] {
+  const kept: number[] = [];
+  let k = 0;
+  for (const cut of cuts) {
+    while (k < spans.length && spans[k]!.end <= cut) k++;
+    const span = spans[k];
+    if (span === undefined || cut <= span.start) kept.push(cut);
+  }
+  return kept;
 }

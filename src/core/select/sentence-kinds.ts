@@ -2,7 +2,8 @@
  * What kind of line a sentence is, before any ranker looks at it:
  *  - barred: never a summary line — placeholder answers ("N/A", "TBD", "None."), pull-request
  *    boilerplate (issue references, sign-off trailers, "cc @…", check-list items), bylines and
- *    metadata lines ("Start Date: …");
+ *    metadata lines ("Start Date: …"), and API lines: an HTTP request line or a bare URL path
+ *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
  *    fewer, a lead-in ending in a colon, link-only text, a bare reference ("RFC 1234.", "[3]").
  * Plain rules on the sentence's text and source; nothing here is learned or tuned.
@@ -48,6 +49,9 @@ const BYLINE = /^(?:prepared|written|authored|drafted|compiled|edited|submitted|
 /** Header fields of design documents and forms, "Key: value" on one short line. */
 const METADATA = /^(?:authors?|owners?|reviewers?|approvers?|assignees?|primary\s+assignee|other\s+contributors|contributors?|date|start\s+date|created|updated|last\s+updated|version|status|state|feature\s+name|rfc\s+pr|rust\s+issue|tracking\s+issue|blueprint|launchpad|shepherds?|champions?|team|teams|contact|email|discussion|pr|issue|target\s+release|milestone|labels?|category|type|priority)\s*:\s*\S/i;
 
+/** An HTTP request line (the methods of RFC 9110 §9, from memory) or a bare path, alone on its line. */
+const API_LINE = /^(?:(?:GET|HEAD|POST|PUT|PATCH|DELETE|OPTIONS|TRACE|CONNECT)\s+\S+(?:\s+HTTP\/[\d.]+)?|\/[\w{}\-.~:/%]*)\s*$/;
+
 const BARE_REFERENCE = new RegExp(
   String.raw`^(?:see\s+(?:also\s+)?)?(?:\[\d+\]|\(\d+\)|rfc\s*#?\d+|(?:${ISSUE_REF})|(?:section|chapter|figure|table|appendix)\s+[\d.]+[a-z]?)(?:\s*(?:,|and)\s*(?:\[\d+\]|rfc\s*#?\d+|(?:${ISSUE_REF})))*\s*[.;]?$`,
   'i',
@@ -72,6 +76,7 @@ export function barredKind(text: string, words: number, settings = SENTENCE_KIND
   if (ISSUE_LINE.test(trimmed) || TRAILER.test(trimmed) || MENTION_LINE.test(trimmed) || CHECKLIST.test(trimmed)) return 'boilerplate';
   if (words <= settings.bylineWords && BYLINE.test(trimmed)) return 'byline';
   if (words <= settings.bylineWords && METADATA.test(trimmed)) return 'metadata';
+  if (API_LINE.test(trimmed)) return 'apiLine';
   return null;
 }
 

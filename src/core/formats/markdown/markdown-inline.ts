@@ -92,5 +92,7 @@ function appendInlineCode(value: string, start: number, end: number, out: Inline
   let to = end;
   while (from < to && source.text[from] === '`') from++;
   while (to > from && source.text[to - 1] === '`') to--;
+  out.beginCode();
   appendAligned(value, from, to, true, out, source);
+  out.endCode();
 }

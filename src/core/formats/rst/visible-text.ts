@@ -49,6 +49,9 @@ export function writePieces(visible: VisibleText, out = new InlineTextBuilder())
   const escaped = escapeToPlaceholder(text);
   for (const piece of visible.pieces) {
     if (piece.spaceBefore && piece.from < offsets.length) out.push(' ', offsets[piece.from]!, offsets[piece.from]! + 1);
+    // An inline literal (``a.b``) is code: no sentence ends inside it.
+    const code = piece.kind === 'literal';
+    if (code) out.beginCode();
     for (let k = piece.from; k < piece.to; k++) {
       if (!piece.literal && escaped[k] === ESCAPE) {
         k++; // the backslash goes; the escaped unit stays, unless it is whitespace
@@ -58,6 +61,7 @@ export function writePieces(visible: VisibleText, out = new InlineTextBuilder())
       if (text[k] === '\n') out.softBreak(offset);
       else out.push(text[k]!, offset, offset + 1);
     }
+    if (code) out.endCode();
   }
   return out;
 }
