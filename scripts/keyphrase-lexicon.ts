@@ -1,13 +1,14 @@
 /**
- * Writes src/core/keyphrases/english-lexicon-words.ts: `npm run keyphrase-lexicon` (`-- --check`
- * fails instead when the file is out of date).
+ * Writes src/core/keyphrases/english-lexicon-words.ts: `npm run keyphrase-lexicon`
+ * (test/unit/keyphrases.test.ts fails when the file is out of date).
  *
  * Source: the English lexicon of natural's Brill part-of-speech tagger
  * (natural/lib/natural/brill_pos_tagger/data/English/lexicon_from_posjs.json, derived from pos-js),
  * which lists each word's Penn Treebank tags. A word goes on the list when none of its tags is a
  * noun or an adjective (the TextRank paper's filter keeps only those; a word that is sometimes a
- * noun, "build", "update", "merge", stays a candidate), it is lower case, three letters or more, not an English stop word and not already caught
- * by the verb shapes. The 4 MB lexicon stays out of the bundles; about 5,000 words go in.
+ * noun, "build", "update", "merge", stays a candidate), it is lower case, three letters or more,
+ * not an English stop word and not already caught by the verb shapes. The 4 MB lexicon stays out
+ * of the bundles; about 5,000 words go in.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -49,16 +50,7 @@ export function lexiconModule(words: readonly string[]): string {
 
 const isMain = process.argv[1] !== undefined && import.meta.url.endsWith(process.argv[1].split('/').pop()!);
 if (isMain) {
-  const target = new URL('../src/core/keyphrases/english-lexicon-words.ts', import.meta.url);
   const words = lexiconNonKeywords();
-  const text = lexiconModule(words);
-  if (process.argv.includes('--check')) {
-    if (readFileSync(target, 'utf8') !== text) {
-      console.error('english-lexicon-words.ts is out of date: npm run keyphrase-lexicon');
-      process.exit(1);
-    }
-  } else {
-    writeFileSync(target, text);
-  }
+  writeFileSync(new URL('../src/core/keyphrases/english-lexicon-words.ts', import.meta.url), lexiconModule(words));
   console.log(`${words.length} words`);
 }

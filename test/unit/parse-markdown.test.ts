@@ -25,7 +25,7 @@ describe('parse: Markdown', () => {
       assert.deepEqual(sourceOf(doc), ['Both `${ .. }` and `a?.b` stay whole.', 'The next sentence starts here.']);
     });
 
-    it('still ends a sentence right after a code span, and inside a code span spread over lines', () => {
+    it('still ends a sentence right after a code span, and never inside one spread over lines', () => {
       const doc = md('Call `run`. Then call\n`stop. now`. Done.\n');
       assert.deepEqual(texts(doc), ['Call run.', 'Then call stop. now.', 'Done.']);
     });
