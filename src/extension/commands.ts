@@ -55,7 +55,10 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
     }),
   'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
-  'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
+  'tersely.clearHighlights': (context) => {
+    context.summarizer.clearHighlights();
+    context.digester.clearHighlights();
+  },
   'tersely.toggleLive': (context) => context.live.toggle(),
   'tersely.checkAbstract': (context, heading) => withEditor(context, (editor) => context.abstractCheck.run(editor, typeof heading === 'string' ? heading : undefined)),
   'tersely.digestOpenDocuments': (context) => context.digester.digestOpenDocuments(),

@@ -27,7 +27,8 @@ export interface DigestTarget<U> {
 
 export interface Skipped<U> {
   readonly uri: U;
-  readonly reason: 'tooLarge' | 'notFound' | 'unknownFormat';
+  /** notFound: a picked path that is not there; unreadable: a folder or file inside one that could not be listed or read. */
+  readonly reason: 'tooLarge' | 'notFound' | 'unreadable' | 'unknownFormat';
   readonly size?: number;
 }
 
@@ -60,15 +61,30 @@ export async function collectDigestFiles<U>(fs: DigestFileSystem<U>, picked: rea
     else if (files.length >= maxFiles) truncated = true;
     else files.push({ uri, format });
   };
+  // One folder that cannot be listed (permissions, a file removed meanwhile) is reported, not fatal.
   const walk = async (folder: U): Promise<void> => {
-    const entries = [...(await fs.list(folder))].sort(byName);
+    let entries: DigestEntry<U>[];
+    try {
+      entries = [...(await fs.list(folder))].sort(byName);
+    } catch {
+      skipped.push({ uri: folder, reason: 'unreadable' });
+      return;
+    }
     for (const entry of entries) {
       if (truncated) return;
       if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
       if (entry.kind === 'folder') await walk(entry.uri);
       else if (entry.kind === 'file') {
         const format = formatForFileName(entry.name);
-        if (format) addFile(entry.uri, (await fs.stat(entry.uri)).size, format.id);
+        if (!format) continue;
+        let size: number;
+        try {
+          size = (await fs.stat(entry.uri)).size;
+        } catch {
+          skipped.push({ uri: entry.uri, reason: 'unreadable' });
+          continue;
+        }
+        addFile(entry.uri, size, format.id);
       }
     }
   };

@@ -224,6 +224,8 @@ export type FromPanel =
   | { readonly type: 'reveal'; readonly summaryId: number; readonly sentence: number }
   | { readonly type: 'revealCheck'; readonly checkId: number; readonly target: number }
   | { readonly type: 'revealDigest'; readonly digestId: number; readonly target: number }
+  /** The digest's dismiss button: the extension forgets the digest and its highlights. */
+  | { readonly type: 'dismissDigest' }
   | { readonly type: 'applyRepair'; readonly summaryId: number; readonly warning: number; readonly repair: number }
   | { readonly type: 'setLength'; readonly length: string }
   | { readonly type: 'setMethod'; readonly method: RankerName }

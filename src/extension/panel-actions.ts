@@ -18,6 +18,9 @@ export async function handlePanelMessage(context: TerselyContext, message: FromP
     case 'revealDigest':
       await context.digester.reveal(message.digestId, message.target);
       return;
+    case 'dismissDigest':
+      context.digester.dismiss();
+      return;
     case 'applyRepair':
       await actions.repair({ summaryId: message.summaryId, warning: message.warning, repair: message.repair });
       return;

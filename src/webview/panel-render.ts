@@ -244,6 +244,8 @@ export function renderDigest(digest: PanelDigest, text: PanelText, actions: Rend
   const element = el('section', { className: 'check digest', attrs: { 'aria-label': `${text.digestHeading}. ${text.digestList}`, 'data-digest-id': String(digest.id) } }, [
     el('h2', { className: 'check-title' }, [el('span', {}, [text.digestHeading]), dismiss]),
     el('p', { className: 'check-headline' }, [digest.headline]),
+    // The same caution as the single summary: quoted sentences can lose their context.
+    el('p', { className: 'note' }, [text.note]),
     ...digest.notices.map((notice) => el('p', { className: 'digest-notice', attrs: { role: 'note' } }, [notice])),
     ...documents,
   ]);

@@ -50,6 +50,7 @@ const actions: RenderActions = {
   dismissDigest: () => {
     digest = null;
     renderDigestPart();
+    post({ type: 'dismissDigest' });
   },
   toggled: (name, isOpen) => {
     if (isOpen) open.add(name);

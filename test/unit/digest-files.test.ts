@@ -3,7 +3,7 @@ import assert from 'node:assert/strict';
 import { collectDigestFiles, isDigestLanguage, type DigestEntry, type DigestFileSystem } from '../../src/extension/digest-files';
 
 /** A file system from a list of paths ('/w/a.md' → size); folders are implied by the paths. */
-function fakeFs(files: Record<string, number>): DigestFileSystem<string> & { listed: string[] } {
+function fakeFs(files: Record<string, number>, broken: ReadonlySet<string> = new Set()): DigestFileSystem<string> & { listed: string[] } {
   const folders = new Set<string>();
   for (const path of Object.keys(files)) {
     const parts = path.split('/');
@@ -13,11 +13,13 @@ function fakeFs(files: Record<string, number>): DigestFileSystem<string> & { lis
   return {
     listed,
     async stat(uri) {
+      if (broken.has(uri) && uri in files) throw new Error(`EACCES ${uri}`);
       if (uri in files) return { kind: 'file', size: files[uri]! };
       if (folders.has(uri)) return { kind: 'folder', size: 0 };
       throw new Error(`ENOENT ${uri}`);
     },
     async list(uri) {
+      if (broken.has(uri)) throw new Error(`EACCES ${uri}`);
       listed.push(uri);
       const children = new Map<string, DigestEntry<string>>();
       for (const path of [...Object.keys(files), ...folders]) {
@@ -95,6 +97,16 @@ describe('editor digest: which files are read', () => {
     const { files, skipped } = await collectDigestFiles(fs, ['/w/gone.md', '/w/a.md'], MAX);
     assert.deepEqual(files.map((f) => f.uri), ['/w/a.md']);
     assert.deepEqual(skipped, [{ uri: '/w/gone.md', reason: 'notFound' }]);
+  });
+
+  it('reports a folder it cannot list and a file it cannot stat, and goes on with the rest', async () => {
+    const fs = fakeFs({ '/w/a.md': 5, '/w/locked/b.md': 5, '/w/c.md': 5, '/w/d.md': 5 }, new Set(['/w/locked', '/w/c.md']));
+    const { files, skipped } = await collectDigestFiles(fs, ['/w'], MAX);
+    assert.deepEqual(files.map((f) => f.uri), ['/w/a.md', '/w/d.md']);
+    assert.deepEqual(skipped, [
+      { uri: '/w/c.md', reason: 'unreadable' },
+      { uri: '/w/locked', reason: 'unreadable' },
+    ]);
   });
 
   it('takes each file once: a file picked and also inside a picked folder, or picked twice', async () => {

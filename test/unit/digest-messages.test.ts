@@ -71,7 +71,12 @@ describe('panel messages: the digest (extension → panel)', () => {
   });
 });
 
-describe('panel messages: revealing a digest line (panel → extension)', () => {
+describe('panel messages: revealing and dismissing a digest (panel → extension)', () => {
+  it('accepts dismissDigest with no other field, and nothing more', () => {
+    assert.deepEqual(parsePanelMessage({ type: 'dismissDigest' }), { ok: true, message: { type: 'dismissDigest' } });
+    assert.deepEqual(parsePanelMessage({ type: 'dismissDigest', digestId: 1 }), { ok: false, reason: 'unexpected fields on dismissDigest' });
+  });
+
   it('accepts a well-formed revealDigest unchanged', () => {
     const message = { type: 'revealDigest', digestId: 4, target: 0 };
     assert.deepEqual(parsePanelMessage(message), { ok: true, message });

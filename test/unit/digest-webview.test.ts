@@ -10,6 +10,7 @@ import { chromium, type Browser, type Page } from 'playwright-core';
 import { digestDocuments } from '../../src/core/index';
 import { digestView } from '../../src/extension/digest-view';
 import type { PanelDigest } from '../../src/extension/messages';
+import { PANEL_TEXT } from '../../src/extension/panel-text';
 import { CHROMIUM } from '../e2e/browser';
 
 // Invented: a sentence that looks like markup must reach the panel as text; the second note repeats one sentence.
@@ -75,6 +76,13 @@ describe('panel: the digest part in a real DOM', function () {
     assert.equal(seen.text, HOSTILE);
     assert.equal(seen.images, 0);
     assert.equal(seen.raw, false, 'the angle brackets are escaped in the serialized DOM');
+  });
+
+  it('carries the single summary’s caution: extractive, can lose context (the one panel string)', async () => {
+    const note = await page.locator('.digest .note').textContent();
+    assert.equal(note, PANEL_TEXT.note);
+    assert.match(note ?? '', /Extractive summary/);
+    assert.match(note ?? '', /lose the context/);
   });
 
   it('shows each document with its figures, its sections and its lines, in the order sent', async () => {
