@@ -3,7 +3,7 @@ import type { Span } from '../core/index';
 import type { TerselyContext } from './context';
 import type { RuntimeReport } from './engine-hosts';
 import type { Scope } from './summaries';
-import type { Digester } from './digester';
+import type { ShownDigestView } from './digester';
 import type { PanelControls, PanelDigest, PanelSummary } from './messages';
 
 export interface TerselyApi {
@@ -24,11 +24,13 @@ export interface TerselyApi {
   readonly panelSummary: PanelSummary | undefined;
   readonly panelControls: PanelControls | undefined;
   /** The digest shown: its places (lines and "also in" links, by `target`) and the picked ones the editor highlights. */
-  readonly digest: Digester['shownDigest'];
+  readonly digest: ShownDigestView | undefined;
   /** What the panel was last sent as the digest (null once dismissed). */
   readonly panelDigest: PanelDigest | null | undefined;
   /** What clicking a digest line or link in the panel does. */
   revealDigest(digestId: number, target: number): Promise<boolean>;
+  /** What the digest's dismiss button in the panel does. */
+  dismissDigest(): void;
 }
 
 export function testApi(context: TerselyContext, runtime: RuntimeReport, activationMs: number): TerselyApi {
@@ -80,5 +82,6 @@ export function testApi(context: TerselyContext, runtime: RuntimeReport, activat
       return context.panel.shownDigest;
     },
     revealDigest: (digestId, target) => context.digester.reveal(digestId, target),
+    dismissDigest: () => context.digester.dismiss(),
   };
 }

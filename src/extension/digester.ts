@@ -33,6 +33,14 @@ interface ShownPlace {
   readonly expected: string;
 }
 
+/** The digest shown, as the in-editor tests see it (URIs as strings). */
+export interface ShownDigestView {
+  readonly id: number;
+  readonly highlighted: boolean;
+  readonly places: readonly { readonly uri: string; readonly span: Span | null }[];
+  readonly picked: readonly { readonly uri: string; readonly span: Span | null }[];
+}
+
 export interface DigestOutcome {
   readonly kind: 'shown' | 'empty' | 'cancelled' | 'failed';
   readonly id?: number;
@@ -270,7 +278,7 @@ export class Digester {
   }
 
   /** The digest shown (the in-editor tests check reveals and highlights against it). */
-  get shownDigest(): { readonly id: number; readonly highlighted: boolean; readonly places: readonly { readonly uri: string; readonly span: Span | null }[]; readonly picked: readonly { readonly uri: string; readonly span: Span | null }[] } | undefined {
+  get shownDigest(): ShownDigestView | undefined {
     const shown = this.shown;
     if (!shown) return undefined;
     const plain = (p: ShownPlace) => ({ uri: p.uri.toString(), span: p.span });
