@@ -49,6 +49,7 @@ const actions: RenderActions = {
   revealDigest: (digestId, target) => post({ type: 'revealDigest', digestId, target }),
   dismissDigest: () => {
     digest = null;
+    renderContent();
     renderDigestPart();
     post({ type: 'dismissDigest' });
   },
@@ -178,7 +179,8 @@ function renderContent(): void {
   const at = summaryList?.current ?? 0;
   if (!summary) {
     summaryList = null;
-    content.replaceChildren(renderEmpty(text));
+    // With a digest on show, "No summary yet" (and a second copy of the caution) would only push it down.
+    content.replaceChildren(...(digest ? [] : [renderEmpty(text)]));
     return;
   }
   const current = summary;
@@ -267,6 +269,7 @@ function handle(message: import('../extension/messages').ToPanel): void {
     case 'digest': {
       const isNewDigest = message.digest !== null && digest?.id !== message.digest.id;
       digest = message.digest;
+      renderContent();
       renderDigestPart();
       if (isNewDigest) digestPart.scrollIntoView({ block: 'start' });
       break;
