@@ -8,9 +8,12 @@ export const DIGEST_NOTE = 'Extractive digest: every line is quoted from one of 
 
 const count = (n: number) => n.toLocaleString('en-US');
 
-/** "also in: b.md line 40, c.md line 12" */
+/** "also in: b.md line 40, c.md lines 12, 30": each file named once, its lines in the order given. */
 export function alsoInLabel(occurrences: readonly DigestOccurrence[]): string {
-  return `also in: ${occurrences.map((o) => `${o.file} line ${o.line}`).join(', ')}`;
+  const lines = new Map<string, number[]>();
+  for (const o of occurrences) lines.set(o.file, [...(lines.get(o.file) ?? []), o.line]);
+  const places = [...lines].map(([file, at]) => `${file} ${at.length === 1 ? 'line' : 'lines'} ${at.join(', ')}`);
+  return `also in: ${places.join('; ')}`;
 }
 
 function byDocument(digest: Digest): Map<number, DigestSentence[]> {

@@ -3,6 +3,7 @@ import assert from 'node:assert/strict';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { alsoInLabel } from '../../src/cli/render-digest';
 import { builtCli, tersely } from './helpers/built-cli';
 
 describe('command line: digest', function () {
@@ -43,6 +44,12 @@ describe('command line: digest', function () {
     assert.equal(markdown.code, 0, markdown.stderr);
     assert.match(markdown.stdout, /^\*\*Digest\*\*/);
     assert.match(markdown.stdout, /### .*a\.md/);
+  });
+
+  it('names each other file once in the also-in label, with all its lines', () => {
+    const at = (file: string, line: number) => ({ file, line, span: { start: 0, end: 1 } });
+    assert.equal(alsoInLabel([at('b.md', 13), at('c.md', 4), at('b.md', 27)]), 'also in: b.md lines 13, 27; c.md line 4');
+    assert.equal(alsoInLabel([at('b.md', 40)]), 'also in: b.md line 40');
   });
 
   it('keeps going after a missing file, says why, and exits 1; refuses standard input', () => {

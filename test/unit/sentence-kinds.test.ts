@@ -40,7 +40,7 @@ describe('sentence kinds: barred outright', () => {
 
   it('bars an HTTP request line or a bare path alone: it names an endpoint but says nothing about it', () => {
     // Request methods from RFC 9110 §9 (from memory).
-    for (const line of ['GET /docks/{dock_id}', 'POST /v2/ferries/{ferry_id}/action', 'DELETE /berths/7 HTTP/1.1', '/docks/{dock_id}/schedule']) {
+    for (const line of ['GET /docks/{dock_id}', 'POST /v2/ferries/{ferry_id}/action', 'DELETE /berths/7 HTTP/1.1', '/docks/{dock_id}/schedule', 'GET /docks/{dock_id}/detail (Show Dock Details)', 'POST /ferries/{ferry_id}/action (Dock Ferry (dock Action))']) {
       assert.equal(barred(line), 'apiLine', line);
     }
   });
@@ -49,6 +49,7 @@ describe('sentence kinds: barred outright', () => {
     for (const line of [
       'A GET /docks/{dock_id} request now returns the berth count as well.',
       'GET requests are cached for a minute.',
+      'GET /docks (List Docks) now takes a region filter.',
       'This change fixes the retry storm described in #774 by capping retries per queue.',
       'The schedule was prepared by hand until the planner took over in May.',
       'Status pages will show the new dock hours from the first of the month.',

@@ -49,8 +49,12 @@ const BYLINE = /^(?:prepared|written|authored|drafted|compiled|edited|submitted|
 /** Header fields of design documents and forms, "Key: value" on one short line. */
 const METADATA = /^(?:authors?|owners?|reviewers?|approvers?|assignees?|primary\s+assignee|other\s+contributors|contributors?|date|start\s+date|created|updated|last\s+updated|version|status|state|feature\s+name|rfc\s+pr|rust\s+issue|tracking\s+issue|blueprint|launchpad|shepherds?|champions?|team|teams|contact|email|discussion|pr|issue|target\s+release|milestone|labels?|category|type|priority)\s*:\s*\S/i;
 
-/** An HTTP request line (the methods of RFC 9110 §9, from memory) or a bare path, alone on its line. */
-const API_LINE = /^(?:(?:GET|HEAD|POST|PUT|PATCH|DELETE|OPTIONS|TRACE|CONNECT)\s+\S+(?:\s+HTTP\/[\d.]+)?|\/[\w{}\-.~:/%]*)\s*$/;
+/**
+ * An HTTP request line (the methods of RFC 9110 §9, from memory) or a bare path, alone on its line,
+ * optionally followed by the endpoint's name in brackets, as API lists in specs give it
+ * ("GET /servers/{server_id} (Show Server Details)").
+ */
+const API_LINE = /^(?:(?:GET|HEAD|POST|PUT|PATCH|DELETE|OPTIONS|TRACE|CONNECT)\s+\S+(?:\s+HTTP\/[\d.]+)?|\/[\w{}\-.~:/%]*)(?:\s+\((?:[^()]|\([^()]*\))*\))?\s*$/;
 
 const BARE_REFERENCE = new RegExp(
   String.raw`^(?:see\s+(?:also\s+)?)?(?:\[\d+\]|\(\d+\)|rfc\s*#?\d+|(?:${ISSUE_REF})|(?:section|chapter|figure|table|appendix)\s+[\d.]+[a-z]?)(?:\s*(?:,|and)\s*(?:\[\d+\]|rfc\s*#?\d+|(?:${ISSUE_REF})))*\s*[.;]?$`,
