@@ -8,6 +8,8 @@
 #      Chromium: palette command, panel, highlights, click-to-reveal, live mode, payload document;
 #   2. starts a second fresh editor and runs the in-editor mocha suite with the real vscode API
 #      (test/e2e/run-in-editor.ts; E2E_RUNNER=electron uses @vscode/test-electron instead);
+#   2b. installs the .vsix into a fresh editor and runs the digest UI script (test/e2e/digest-ui.e2e.ts):
+#      three invented files (test/e2e/fixtures/digest/) digested, a line clicked, dismissed;
 #   3. installs the .vsix into a third editor whose user settings put Tersely in the web worker
 #      extension host (`remote.extensionKind`), so the `browser` bundle runs, and drives it
 #      (test/e2e/web-host.e2e.ts).
@@ -80,8 +82,12 @@ RUN=$(mktemp -d "$ROOT/.e2e/run.XXXXXX")
 mkdir -p "$RUN/tmp" "$RUN/xdg-config" "$RUN/xdg-data" "$RUN/xdg-cache"
 export XDG_CONFIG_HOME="$RUN/xdg-config" XDG_DATA_HOME="$RUN/xdg-data" XDG_CACHE_HOME="$RUN/xdg-cache"
 export EXTENSIONS_GALLERY='{}' # no marketplace
-for ws in workspace-ui workspace-suite workspace-web; do
+for ws in workspace-ui workspace-suite workspace-web workspace-digest; do
   mkdir -p "$RUN/$ws" && cp "$ROOT"/media/demo/*.md "$RUN/$ws/"
+done
+# The digest's three invented files, in a folder of their own (the in-editor suite digests it too).
+for ws in workspace-suite workspace-digest; do
+  cp -r "$ROOT/test/e2e/fixtures/digest" "$RUN/$ws/digest"
 done
 
 SERVER_PID=""
@@ -127,7 +133,7 @@ JSON
   fi
   printf 'bind-addr: 127.0.0.1:%s\nauth: none\ncert: false\n' "$port" > "$RUN/$name/config.yaml"
   COMMON=(--config "$RUN/$name/config.yaml" --user-data-dir "$RUN/$name/user-data" --extensions-dir "$RUN/$name/extensions")
-  if [ "$name" = ui ] || [ "$name" = web ]; then
+  if [ "$name" = ui ] || [ "$name" = web ] || [ "$name" = digest ]; then
     "$CS" "${COMMON[@]}" --install-extension "$ROOT/.e2e/tersely.vsix" > "$RUN/$name/install.log" 2>&1 || { cat "$RUN/$name/install.log"; exit 1; }
   fi
   TMPDIR="$RUN/tmp" setsid "$CS" "${COMMON[@]}" --bind-addr "127.0.0.1:$port" --auth none --disable-telemetry --disable-update-check \
@@ -140,8 +146,11 @@ JSON
   BASE="http://127.0.0.1:$port"
 }
 
-ONLY=${E2E_ONLY:-all} # ui | suite | web | all (for working on one part)
+ONLY=${E2E_ONLY:-all} # ui | suite | digest | web | all (for working on one part)
+# E2E_GREP=PATTERN runs only the in-editor tests whose titles match (the editor's extension host inherits it).
+export E2E_GREP=${E2E_GREP:-}
 UI_RC=0
+DIGEST_RC=0
 SUITE_RC=0
 WEB_RC=0
 
@@ -163,6 +172,15 @@ stop_server
 step "in-editor suite: exit code $SUITE_RC"
 fi
 
+# ---------- 2b. the digest UI script against the installed VSIX ----------
+if [ "$ONLY" = all ] || [ "$ONLY" = digest ]; then
+start_server digest
+step "editor up for the digest UI script ($BASE)"
+npx --no-install tsx test/e2e/digest-ui.e2e.ts "$BASE" "$RUN/workspace-digest" "$ARTIFACTS" 2>&1 | tee "$ARTIFACTS/digest-ui.log" || DIGEST_RC=$?
+stop_server
+step "digest UI script: exit code $DIGEST_RC"
+fi
+
 # ---------- 3. the browser bundle in the web worker extension host ----------
 if [ "$ONLY" = all ] || [ "$ONLY" = web ]; then
 start_server web
@@ -172,8 +190,8 @@ stop_server
 step "web worker host: exit code $WEB_RC"
 fi
 
-for name in ui suite web; do cp "$RUN/$name/server.log" "$ARTIFACTS/server-$name.log" 2>/dev/null || true; done
+for name in ui suite digest web; do cp "$RUN/$name/server.log" "$ARTIFACTS/server-$name.log" 2>/dev/null || true; done
 rm -rf "$RUN"
 [ -f "$ARTIFACTS/editor-timings.json" ] && { step "editor timings (test-artifacts/editor-timings.json):"; cat "$ARTIFACTS/editor-timings.json"; }
 step "done (screenshots and logs in test-artifacts/)"
-[ "$UI_RC" = 0 ] && [ "$SUITE_RC" = 0 ] && [ "$WEB_RC" = 0 ]
+[ "$UI_RC" = 0 ] && [ "$SUITE_RC" = 0 ] && [ "$DIGEST_RC" = 0 ] && [ "$WEB_RC" = 0 ]

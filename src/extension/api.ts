@@ -3,7 +3,8 @@ import type { Span } from '../core/index';
 import type { TerselyContext } from './context';
 import type { RuntimeReport } from './engine-hosts';
 import type { Scope } from './summaries';
-import type { PanelControls, PanelSummary } from './messages';
+import type { ShownDigestView } from './digester';
+import type { PanelControls, PanelDigest, PanelSummary } from './messages';
 
 export interface TerselyApi {
   inspect(uri: { toString(): string }): { id: number; version: number; scope: Scope; spans: Span[]; highlighted: boolean; warnings: number } | undefined;
@@ -22,6 +23,14 @@ export interface TerselyApi {
   /** What the panel was last sent to show. */
   readonly panelSummary: PanelSummary | undefined;
   readonly panelControls: PanelControls | undefined;
+  /** The digest shown: its places (lines and "also in" links, by `target`) and the picked ones the editor highlights. */
+  readonly digest: ShownDigestView | undefined;
+  /** What the panel was last sent as the digest (null once dismissed). */
+  readonly panelDigest: PanelDigest | null | undefined;
+  /** What clicking a digest line or link in the panel does. */
+  revealDigest(digestId: number, target: number): Promise<boolean>;
+  /** What the digest's dismiss button in the panel does. */
+  dismissDigest(): void;
 }
 
 export function testApi(context: TerselyContext, runtime: RuntimeReport, activationMs: number): TerselyApi {
@@ -66,5 +75,13 @@ export function testApi(context: TerselyContext, runtime: RuntimeReport, activat
     get panelControls() {
       return context.controls();
     },
+    get digest() {
+      return context.digester.shownDigest;
+    },
+    get panelDigest() {
+      return context.panel.shownDigest;
+    },
+    revealDigest: (digestId, target) => context.digester.reveal(digestId, target),
+    dismissDigest: () => context.digester.dismiss(),
   };
 }

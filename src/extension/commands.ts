@@ -55,9 +55,14 @@ const COMMANDS: Readonly<Record<CommandId, CommandHandler>> = {
     }),
   'tersely.insertSummary': (context, where) => withEditor(context, (editor) => context.actions.insertSummary(editor, typeof where === 'string' ? where : undefined)),
   'tersely.copySummary': (context) => context.actions.copySummary(context.targetEditor()),
-  'tersely.clearHighlights': (context) => context.summarizer.clearHighlights(),
+  'tersely.clearHighlights': (context) => {
+    context.summarizer.clearHighlights();
+    context.digester.clearHighlights();
+  },
   'tersely.toggleLive': (context) => context.live.toggle(),
   'tersely.checkAbstract': (context, heading) => withEditor(context, (editor) => context.abstractCheck.run(editor, typeof heading === 'string' ? heading : undefined)),
+  'tersely.digestOpenDocuments': (context) => context.digester.digestOpenDocuments(),
+  'tersely.digestFiles': (context, clicked, selected) => context.digester.digestFiles(clicked, selected),
   'tersely.showPanel': (context) => context.panel.show(true),
   'tersely.applyRepair': (context, args) => {
     if (!isRepairArgs(args)) {

@@ -6,6 +6,7 @@
 import * as vscode from 'vscode';
 import { formatLength, METHOD_INFO } from '../core/index';
 import { AbstractCheck } from './abstract-check';
+import { Digester } from './digester';
 import { watchEditors } from './editor-events';
 import { EditorView } from './editor-view';
 import type { EngineHosts } from './engine-hosts';
@@ -41,6 +42,7 @@ export class TerselyContext implements vscode.Disposable {
   readonly summarizer: Summarizer;
   readonly actions: SummaryActions;
   readonly abstractCheck: AbstractCheck;
+  readonly digester: Digester;
   readonly focus: FocusState;
   /** Every user-visible string goes through this (the editor's localization API). */
   readonly wording = editorWording();
@@ -60,6 +62,7 @@ export class TerselyContext implements vscode.Disposable {
     this.summarizer = new Summarizer(this);
     this.actions = new SummaryActions(this);
     this.abstractCheck = new AbstractCheck(this, this.ownEngine(hosts));
+    this.digester = new Digester(this, this.ownEngine(hosts));
     this.own(vscode.window.registerWebviewViewProvider(VIEW_ID, this.panel));
     watchEditors(this);
     this.panel.post({ type: 'text', text: localizedPanelText() });

@@ -7,7 +7,7 @@
  * size), the host validates and keeps it, and each job names the key it expects. Document text
  * and settings travel with every job.
  */
-import type { AbstractReport, CheckAbstractRequest, DocumentFormat, Summary, SummaryStage as SummarizeStage } from '../core/index';
+import type { AbstractReport, CheckAbstractRequest, Digest, DigestRequest, DocumentFormat, Summary, SummaryStage as SummarizeStage } from '../core/index';
 import type { EngineRequestOptions } from './settings';
 
 export type EngineStage = SummarizeStage;
@@ -22,7 +22,16 @@ export type EngineTask =
   | { readonly kind: 'summarize'; readonly text: string; readonly options: Omit<EngineRequestOptions, 'model'> }
   | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: Omit<CheckAbstractRequest, 'thresholds' | 'model'> }
   /** The document's headings in order (the abstract check's picker): read in the host, so the extension bundle carries no parser. */
-  | { readonly kind: 'headings'; readonly text: string; readonly format: DocumentFormat };
+  | { readonly kind: 'headings'; readonly text: string; readonly format: DocumentFormat }
+  /** Several documents in one digest; the host reports each document as it is read (`progress`). */
+  | { readonly kind: 'digest'; readonly documents: readonly EngineDigestDocument[]; readonly options: DigestRequest };
+
+/** One document of a digest job; `file` is the name the digest shows and reports back. */
+export interface EngineDigestDocument {
+  readonly file: string;
+  readonly text: string;
+  readonly format: DocumentFormat;
+}
 
 /** One heading of a `headings` job: its text and nesting depth (1 = top level). */
 export interface EngineHeading {
@@ -46,10 +55,13 @@ export type EngineResult =
       readonly elapsedMs: number;
     }
   | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
-  | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number };
+  | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number }
+  | { readonly kind: 'digest'; readonly digest: Digest; readonly elapsedMs: number };
 
 /** Host → extension. */
 export type FromEngine =
   | { readonly type: 'stage'; readonly id: number; readonly stage: EngineStage }
+  /** A digest job has read `done` of its `total` documents. */
+  | { readonly type: 'progress'; readonly id: number; readonly done: number; readonly total: number }
   | { readonly type: 'done'; readonly id: number; readonly result: EngineResult }
   | { readonly type: 'failed'; readonly id: number; readonly error: string };

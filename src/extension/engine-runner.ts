@@ -6,7 +6,7 @@
  */
 import { checkAbstract } from '../core/index';
 import { loadModel } from '../core/index';
-import { parseDocument, summarize } from '../core/index';
+import { parseDocument, startDigest, summarize } from '../core/index';
 import type { FromEngine, ToEngine } from './engine-protocol';
 
 interface CachedModel {
@@ -54,6 +54,13 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
           .sections.filter((s) => s.heading.length > 0)
           .map((s) => ({ heading: s.heading, depth: s.depth }));
         post({ type: 'done', id, result: { kind: 'headings', headings, elapsedMs: performance.now() - started } });
+      } else if (task.kind === 'digest') {
+        const builder = startDigest(task.options);
+        for (const [k, document] of task.documents.entries()) {
+          builder.add(document.file, document.text, document.format);
+          post({ type: 'progress', id, done: k + 1, total: task.documents.length });
+        }
+        post({ type: 'done', id, result: { kind: 'digest', digest: builder.finish(), elapsedMs: performance.now() - started } });
       } else {
         const report = checkAbstract(task.text, task.options);
         post({ type: 'done', id, result: { kind: 'checkAbstract', report, elapsedMs: performance.now() - started } });

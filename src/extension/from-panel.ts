@@ -47,6 +47,13 @@ export function parsePanelMessage(raw: unknown): ParseResult<FromPanel> {
       if (!shape(['checkId', 'target']) || !isIndex(checkId) || !isIndex(target)) return reject('malformed revealCheck');
       return { ok: true, message: { type, checkId, target } };
     }
+    case 'revealDigest': {
+      const { digestId, target } = raw;
+      if (!shape(['digestId', 'target']) || !isIndex(digestId) || !isIndex(target)) return reject('malformed revealDigest');
+      return { ok: true, message: { type, digestId, target } };
+    }
+    case 'dismissDigest':
+      return shape([]) ? { ok: true, message: { type } } : reject('unexpected fields on dismissDigest');
     case 'applyRepair': {
       const { summaryId, warning, repair } = raw;
       if (!shape(['summaryId', 'warning', 'repair']) || !isIndex(summaryId) || !isIndex(warning) || !isIndex(repair) || repair > 10) {

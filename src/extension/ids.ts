@@ -30,6 +30,8 @@ export const COMMAND_IDS = [
   'tersely.clearHighlights',
   'tersely.toggleLive',
   'tersely.checkAbstract',
+  'tersely.digestOpenDocuments',
+  'tersely.digestFiles',
   'tersely.showPanel',
   'tersely.applyRepair',
 ] as const;

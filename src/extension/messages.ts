@@ -120,6 +120,38 @@ export interface PanelAbstractCheck {
   readonly items: readonly PanelCheckItem[];
 }
 
+/** A sentence of a digest: its text and line, clickable; `alsoIn` are its near-duplicates in other documents. */
+export interface PanelDigestLine {
+  readonly text: string;
+  /** "line 12", worded. */
+  readonly line: string;
+  /** Index into the digest's own list of places (what `revealDigest` sends back). */
+  readonly target: number;
+  /** "also in: b.md line 4", each a place of its own. */
+  readonly alsoIn: readonly PanelLink[];
+}
+
+export interface PanelDigestSection {
+  /** The section's headings joined; empty before the first heading. */
+  readonly heading: string;
+  readonly lines: readonly PanelDigestLine[];
+}
+
+export interface PanelDigestDocument {
+  readonly file: string;
+  /** "2 of 40 sentences", worded; or why the document was left out. */
+  readonly figures: string;
+  readonly sections: readonly PanelDigestSection[];
+}
+
+export interface PanelDigest {
+  readonly id: number;
+  /** "Digest of 3 documents: 6 sentences, 120 of 2,400 words", worded. */
+  readonly headline: string;
+  readonly documents: readonly PanelDigestDocument[];
+  readonly notices: readonly string[];
+}
+
 export interface PanelMethodChoice {
   readonly value: RankerName;
   readonly label: string;
@@ -178,6 +210,7 @@ export type ToPanel =
   | { readonly type: 'progress'; readonly progress: PanelProgress | null }
   | { readonly type: 'notice'; readonly kind: NoticeKind; readonly text: string }
   | { readonly type: 'abstractCheck'; readonly check: PanelAbstractCheck | null }
+  | { readonly type: 'digest'; readonly digest: PanelDigest | null }
   /** An announcement for screen readers ("Summary ready: 6 sentences"). */
   | { readonly type: 'announce'; readonly text: string }
   /** Move the keyboard focus to the summary list (the panel was shown on purpose). */
@@ -190,6 +223,9 @@ export type FromPanel =
   | { readonly type: 'ready' }
   | { readonly type: 'reveal'; readonly summaryId: number; readonly sentence: number }
   | { readonly type: 'revealCheck'; readonly checkId: number; readonly target: number }
+  | { readonly type: 'revealDigest'; readonly digestId: number; readonly target: number }
+  /** The digest's dismiss button: the extension forgets the digest and its highlights. */
+  | { readonly type: 'dismissDigest' }
   | { readonly type: 'applyRepair'; readonly summaryId: number; readonly warning: number; readonly repair: number }
   | { readonly type: 'setLength'; readonly length: string }
   | { readonly type: 'setMethod'; readonly method: RankerName }

@@ -15,6 +15,12 @@ export async function handlePanelMessage(context: TerselyContext, message: FromP
     case 'revealCheck':
       await context.abstractCheck.reveal(message.checkId, message.target);
       return;
+    case 'revealDigest':
+      await context.digester.reveal(message.digestId, message.target);
+      return;
+    case 'dismissDigest':
+      context.digester.dismiss();
+      return;
     case 'applyRepair':
       await actions.repair({ summaryId: message.summaryId, warning: message.warning, repair: message.repair });
       return;

@@ -35,6 +35,11 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     const message = this.remembered.summary;
     return message?.type === 'summary' ? message.summary : undefined;
   }
+  /** The last digest the panel was sent: null once dismissed, undefined before any. */
+  get shownDigest(): import('./messages').PanelDigest | null | undefined {
+    const message = this.remembered.digest;
+    return message?.type === 'digest' ? message.digest : undefined;
+  }
   /** Messages rejected so far (tests read it through the extension's API). */
   rejectedMessages = 0;
 
@@ -132,7 +137,7 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
   private focusWhenReady = false;
 
   private replay(): void {
-    for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'progress'] as const) {
+    for (const type of ['text', 'controls', 'summary', 'notice', 'abstractCheck', 'digest', 'progress'] as const) {
       const message = this.remembered[type];
       if (message) void this.view?.webview.postMessage(message);
     }

@@ -41,6 +41,8 @@ export const PANEL_TEXT = {
   checkRun: 'Check abstract…',
   checkRunTitle: 'Compare the document’s abstract (or the selected text) with its body',
   dismiss: 'Dismiss',
+  digestHeading: 'Digest',
+  digestList: 'Digest sentences by document. Arrow keys move between them, Enter opens one in its file.',
   focus: 'Focus',
   focusPlaceholder: 'A question or a few words',
   focusHelp: 'Only sentences that use these words are picked. Enter to apply; empty for a general summary.',

@@ -69,6 +69,18 @@ const check = shape({
   headline: text,
   items: list(shape({ severity: oneOf('ok', 'warning', 'information'), text, target: nullable(whole), links: list(link) })),
 });
+const digest = shape({
+  id: whole,
+  headline: text,
+  documents: list(
+    shape({
+      file: text,
+      figures: text,
+      sections: list(shape({ heading: text, lines: list(shape({ text, line: text, target: whole, alsoIn: list(link) })) })),
+    }),
+  ),
+  notices: list(text),
+});
 const controls = shape({
   length: text,
   method: text,
@@ -88,6 +100,7 @@ const MESSAGES: Record<ToPanel['type'], Check> = {
   progress: shape({ type: text, progress: nullable(progress) }),
   notice: shape({ type: text, kind: oneOf('info', 'stale', 'tooLarge', 'error'), text }),
   abstractCheck: shape({ type: text, check: nullable(check) }),
+  digest: shape({ type: text, digest: nullable(digest) }),
   announce: shape({ type: text, text }),
   focus: shape({ type: text }),
   clear: shape({ type: text }),

@@ -32,6 +32,8 @@ export type StartHost = (listener: HostListener) => HostConnection;
 export interface RunOptions {
   readonly signal?: AbortSignal;
   readonly onStage?: (stage: EngineStage) => void;
+  /** A digest job's documents read so far. */
+  readonly onProgress?: (done: number, total: number) => void;
 }
 
 interface RunningJob {
@@ -39,6 +41,7 @@ interface RunningJob {
   readonly resolve: (result: EngineResult) => void;
   readonly reject: (error: Error) => void;
   readonly onStage: ((stage: EngineStage) => void) | undefined;
+  readonly onProgress: ((done: number, total: number) => void) | undefined;
   readonly detach: () => void;
 }
 
@@ -63,7 +66,7 @@ export class EngineClient {
   ) {}
 
   run(task: EngineTask, options: RunOptions = {}): Promise<EngineResult> {
-    const { signal, onStage } = options;
+    const { signal, onStage, onProgress } = options;
     if (this.disposed) return Promise.reject(new Error('The engine has been shut down.'));
     if (signal?.aborted) return Promise.reject(new CancelledError());
     this.cancel();
@@ -79,7 +82,7 @@ export class EngineClient {
         if (this.running?.id === id) this.cancel();
       };
       signal?.addEventListener('abort', onAbort, { once: true });
-      this.running = { id, resolve, reject, onStage, detach: () => signal?.removeEventListener('abort', onAbort) };
+      this.running = { id, resolve, reject, onStage, onProgress, detach: () => signal?.removeEventListener('abort', onAbort) };
       const modelKey = task.kind === 'summarize' ? this.model?.key : undefined;
       host.connection.post(modelKey !== undefined ? { type: 'job', id, task, modelKey } : { type: 'job', id, task });
     });
@@ -163,6 +166,10 @@ export class EngineClient {
     }
     if (message.type === 'stage') {
       running.onStage?.(message.stage);
+      return;
+    }
+    if (message.type === 'progress') {
+      running.onProgress?.(message.done, message.total);
       return;
     }
     this.running = null;

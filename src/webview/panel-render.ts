@@ -4,7 +4,7 @@
  * bars in a collapsible part, and the abstract check in a place of its own, bound to its
  * document. Document text only ever goes in through `textContent` (el() children), never as HTML.
  */
-import type { PanelAbstractCheck, PanelGroup, PanelSentence, PanelShare, PanelSummary } from '../extension/messages';
+import type { PanelAbstractCheck, PanelDigest, PanelGroup, PanelSentence, PanelShare, PanelSummary } from '../extension/messages';
 import type { PanelText } from '../extension/panel-text';
 import { el, type Child } from './dom';
 
@@ -13,6 +13,8 @@ export interface RenderActions {
   repair(summaryId: number, warning: number, repair: number): void;
   revealCheck(checkId: number, target: number): void;
   dismissCheck(): void;
+  revealDigest(digestId: number, target: number): void;
+  dismissDigest(): void;
   /** Remembers which collapsible parts are open. */
   toggled(name: string, open: boolean): void;
 }
@@ -201,4 +203,51 @@ export function renderCheck(check: PanelAbstractCheck, text: PanelText, actions:
     list,
   ]);
   return { element, items: items.filter((item) => item.dataset['target'] !== undefined || item.querySelector('button')) };
+}
+
+/**
+ * The digest in its own place: one part per document, its sections, each sentence a line that
+ * opens its file at the sentence; "also in" links lead to the near-duplicates in other documents.
+ */
+export function renderDigest(digest: PanelDigest, text: PanelText, actions: RenderActions): { element: HTMLElement; items: HTMLElement[] } {
+  const items: HTMLElement[] = [];
+  const documents = digest.documents.map((doc) => {
+    const sections = doc.sections.map((section) => {
+      const lines = section.lines.map((line) => {
+        const links = line.alsoIn.map((link) => {
+          const button = el('button', { className: 'link', attrs: { type: 'button', 'data-target': String(link.target) } }, [link.label]);
+          button.addEventListener('click', () => actions.revealDigest(digest.id, link.target));
+          return button;
+        });
+        const li = el('li', { className: 'digest-line', attrs: { 'data-target': String(line.target), 'aria-label': `${line.text} (${line.line})` } }, [
+          el('span', { className: 'digest-text' }, [line.text]),
+          ' ',
+          el('span', { className: 'digest-where' }, [line.line]),
+          links.length > 0 ? el('span', { className: 'check-links digest-also' }, links) : null,
+        ]);
+        li.addEventListener('click', (event) => {
+          if ((event.target as HTMLElement).closest('button')) return;
+          actions.revealDigest(digest.id, line.target);
+        });
+        items.push(li);
+        return li;
+      });
+      return el('div', { className: 'digest-section' }, [section.heading ? el('h4', { className: 'digest-heading' }, [section.heading]) : null, el('ol', { className: 'check-list' }, lines)]);
+    });
+    return el('section', { className: 'digest-document', attrs: { 'aria-label': doc.file } }, [
+      el('h3', { className: 'digest-file' }, [el('span', {}, [doc.file]), ' ', el('span', { className: 'digest-figures' }, [doc.figures])]),
+      ...sections,
+    ]);
+  });
+  const dismiss = el('button', { className: 'secondary dismiss', attrs: { type: 'button', title: text.dismiss, 'aria-label': `${text.dismiss}: ${text.digestHeading}` } }, ['×']);
+  dismiss.addEventListener('click', () => actions.dismissDigest());
+  const element = el('section', { className: 'check digest', attrs: { 'aria-label': `${text.digestHeading}. ${text.digestList}`, 'data-digest-id': String(digest.id) } }, [
+    el('h2', { className: 'check-title' }, [el('span', {}, [text.digestHeading]), dismiss]),
+    el('p', { className: 'check-headline' }, [digest.headline]),
+    // The same caution as the single summary: quoted sentences can lose their context.
+    el('p', { className: 'note' }, [text.note]),
+    ...digest.notices.map((notice) => el('p', { className: 'digest-notice', attrs: { role: 'note' } }, [notice])),
+    ...documents,
+  ]);
+  return { element, items };
 }

@@ -4,11 +4,11 @@
  * `textContent` only. The saved webview state holds only what restoring needs (scroll position,
  * open parts, the summary id): the content itself is sent again by the extension on `ready`.
  */
-import type { FromPanel, NoticeKind, PanelAbstractCheck, PanelControls, PanelProgress, PanelSummary } from '../extension/messages';
+import type { FromPanel, NoticeKind, PanelAbstractCheck, PanelControls, PanelDigest, PanelProgress, PanelSummary } from '../extension/messages';
 import { PANEL_TEXT, type PanelText } from '../extension/panel-text';
 import { isToPanel } from '../extension/to-panel';
 import { el } from './dom';
-import { renderCheck, renderEmpty, renderSummary, collapsible, type RenderActions } from './panel-render';
+import { renderCheck, renderDigest, renderEmpty, renderSummary, collapsible, type RenderActions } from './panel-render';
 import { restoreState, stateToSave, type SavedState } from './panel-state';
 import { progressView } from './progress-view';
 import { rovingList, type RovingList } from './roving-list';
@@ -26,6 +26,7 @@ let text: PanelText = PANEL_TEXT;
 let summary: PanelSummary | null = null;
 let controls: PanelControls | null = null;
 let check: PanelAbstractCheck | null = null;
+let digest: PanelDigest | null = null;
 let notice: { kind: NoticeKind; text: string } | null = null;
 let busy: PanelProgress | null = null;
 const open = new Set<string>(saved.open);
@@ -45,6 +46,13 @@ const actions: RenderActions = {
     check = null;
     renderCheckPart();
   },
+  revealDigest: (digestId, target) => post({ type: 'revealDigest', digestId, target }),
+  dismissDigest: () => {
+    digest = null;
+    renderContent();
+    renderDigestPart();
+    post({ type: 'dismissDigest' });
+  },
   toggled: (name, isOpen) => {
     if (isOpen) open.add(name);
     else open.delete(name);
@@ -62,8 +70,9 @@ const content = el('div', { className: 'content', attrs: { id: 'content' } });
 const settingsPart = el('div', { className: 'settings-slot' });
 const focusPart = el('div', { className: 'focus-slot' });
 const checkPart = el('div', { className: 'check-slot' });
+const digestPart = el('div', { className: 'digest-slot' });
 const announcer = el('div', { className: 'visually-hidden', attrs: { role: 'status', 'aria-live': 'polite', id: 'announcer' } });
-app.append(toolbar, focusPart, progress.element, noticeBox, content, checkPart, settingsPart, announcer);
+app.append(toolbar, focusPart, progress.element, noticeBox, content, checkPart, digestPart, settingsPart, announcer);
 
 function commandButton(label: string, title: string, command: Extract<FromPanel, { type: 'command' }>['command'], primary: boolean, disabled = false): HTMLButtonElement {
   const button = el('button', { className: primary ? 'primary' : 'secondary', attrs: { type: 'button', title, 'aria-label': title, 'data-command': command } }, [label]);
@@ -170,7 +179,8 @@ function renderContent(): void {
   const at = summaryList?.current ?? 0;
   if (!summary) {
     summaryList = null;
-    content.replaceChildren(renderEmpty(text));
+    // With a digest on show, "No summary yet" (and a second copy of the caution) would only push it down.
+    content.replaceChildren(...(digest ? [] : [renderEmpty(text)]));
     return;
   }
   const current = summary;
@@ -194,6 +204,17 @@ function renderCheckPart(): void {
   });
 }
 
+function renderDigestPart(): void {
+  if (!digest) {
+    digestPart.replaceChildren();
+    return;
+  }
+  const current = digest;
+  const { element, items } = renderDigest(current, text, actions);
+  digestPart.replaceChildren(element);
+  rovingList(element, items, (index) => actions.revealDigest(current.id, Number(items[index]!.dataset['target'])));
+}
+
 function renderAll(): void {
   document.documentElement.lang = text === PANEL_TEXT ? 'en' : document.documentElement.lang;
   renderToolbar();
@@ -202,6 +223,7 @@ function renderAll(): void {
   renderNotice();
   renderContent();
   renderCheckPart();
+  renderDigestPart();
 }
 
 function handle(message: import('../extension/messages').ToPanel): void {
@@ -242,6 +264,14 @@ function handle(message: import('../extension/messages').ToPanel): void {
       check = message.check;
       renderCheckPart();
       if (isNewCheck) checkPart.scrollIntoView({ block: 'start' });
+      break;
+    }
+    case 'digest': {
+      const isNewDigest = message.digest !== null && digest?.id !== message.digest.id;
+      digest = message.digest;
+      renderContent();
+      renderDigestPart();
+      if (isNewDigest) digestPart.scrollIntoView({ block: 'start' });
       break;
     }
     case 'announce':

@@ -17,6 +17,9 @@ export interface Session {
   close(): Promise<void>;
 }
 
+/** The panel's own script and stylesheet: the webview loads them through a name the route also sees. */
+export const isPanelResource = (url: string): boolean => /\.vscode-resource\.vscode-cdn\.net\/.*\/(media\/panel\.css|dist\/webview\/panel\.js)$/.test(url);
+
 export const CHROMIUM = process.env['CHROMIUM_PATH'] ?? '/usr/bin/chromium';
 
 export async function openSession(base: string, viewport = { width: 1600, height: 1000 }): Promise<Session> {

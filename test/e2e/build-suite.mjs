@@ -3,7 +3,7 @@
 import { build } from 'esbuild';
 
 await build({
-  entryPoints: { index: 'test/e2e/suite/index.ts', 'commands.test': 'test/e2e/suite/commands.test.ts' },
+  entryPoints: { index: 'test/e2e/suite/index.ts', 'commands.test': 'test/e2e/suite/commands.test.ts', 'digest.test': 'test/e2e/suite/digest.test.ts' },
   outdir: 'out/e2e-suite',
   outExtension: { '.js': '.cjs' },
   bundle: true,

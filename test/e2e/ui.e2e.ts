@@ -15,7 +15,7 @@ import { abstractView } from '../../src/extension/abstract-view';
 import { LineIndex } from '../../src/extension/ranges';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
-import { openSession, timer } from './browser';
+import { isPanelResource, openSession, timer } from './browser';
 import { firstSummaryBreakdown, parseTerselyLog, recordTimings } from './timings';
 import { countDecorations, cursorStatus, openFile, outputChannelText, panelFrame, panelLocator, poll, runCommand, waitForWorkbench } from './workbench';
 
@@ -309,8 +309,7 @@ async function main(): Promise<void> {
     const dirtyTabs = await page.locator('.tabs-container .tab.dirty').allInnerTexts();
     assert.deepEqual(dirtyTabs, [], 'no document is modified (the demo was reverted above)');
     assert.equal(readFileSync(join(workspace, XSS), 'utf8'), xssOnDisk, 'the payload document on disk is unchanged');
-    const ownResource = (url: string) => /\.vscode-resource\.vscode-cdn\.net\/.*\/(media\/panel\.css|dist\/webview\/panel\.js)$/.test(url);
-    const fromPanel = blocked.slice(blockedBefore).filter((request) => (request.frameUrl.includes('webview') && !ownResource(request.url)) || /example\.invalid/.test(request.url));
+    const fromPanel = blocked.slice(blockedBefore).filter((request) => (request.frameUrl.includes('webview') && !isPanelResource(request.url)) || /example\.invalid/.test(request.url));
     assert.deepEqual(fromPanel, [], 'no network request was attempted from the panel');
     checks['xss'] = { ...inside, text: `${inside.text.length} characters`, topGlobal, dirtyTabs, blockedSincePayloads: blocked.slice(blockedBefore) };
     mark('payload document rendered as inert text; no request attempted');
