@@ -16,7 +16,7 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import {
   barredKind,
-  defaultModel,
+  defaultMaxentModel,
   finishSummary,
   fragmentKind,
   learnTemplateText,
@@ -77,11 +77,14 @@ interface HalfAudit {
 }
 
 function summarizeAt(doc: CorpusDocument, format: DocumentFormat, budget: unknown, templateText: readonly string[]): Summary {
-  const model = { ...defaultModel(), templateText };
+  const model = { ...defaultMaxentModel(), templateText };
   const preparation = prepareDocument(doc.bodyText, { format, budget, model });
   if (!preparation.ok) throw new Error(`${doc.file}: ${preparation.refused.refused}`);
   return finishSummary(preparation.prepared, rankPrepared(preparation.prepared));
 }
+
+/** Summaries per corpus written to the reading sample (50 in all). */
+const SAMPLE_PER_CORPUS = 25;
 
 const percent = (part: number, whole: number) => (whole > 0 ? `${((100 * part) / whole).toFixed(1)}%` : '—');
 
@@ -99,12 +102,15 @@ export async function run(argv: readonly string[]): Promise<number> {
     const templateKeys = new Set(templateText.map(normalizeSentence));
     const documents = half.load.documents.filter((d) => d.half === 'test').slice(0, limit);
     const tallies = { benchmark: newTally(), default: newTally() };
+    let sampled = 0;
     documents.forEach((doc, k) => {
       const atReference = summarizeAt(doc, half.format, { unit: 'words', value: doc.referenceWords }, templateText);
       auditSummary(atReference, templateKeys, tallies.benchmark);
       const atDefault = summarizeAt(doc, half.format, undefined, templateText);
       auditSummary(atDefault, templateKeys, tallies.default);
-      if (k % Math.max(1, Math.floor(documents.length / 25)) === 0 && sample.length < 2 + 50 * 6) {
+      // 25 summaries per corpus, spread evenly over its test half.
+      if (k % Math.max(1, Math.floor(documents.length / SAMPLE_PER_CORPUS)) === 0 && sampled < SAMPLE_PER_CORPUS) {
+        sampled++;
         sample.push(`## ${half.name}: ${doc.file} (default length, ${atDefault.stats.wordsOut} words)`, '');
         for (const pick of atDefault.sentences) sample.push(`- ${pick.text}`);
         if (atDefault.leftOut && atDefault.leftOut.length > 0) sample.push('', `Left out: ${atDefault.leftOut.map((l) => `${l.heading || '(top)'} (${l.reason})`).join('; ')}`);

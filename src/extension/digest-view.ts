@@ -36,9 +36,14 @@ export function digestView(digest: Digest, wording: Wording = ENGLISH): DigestVi
         section = { heading, lines: [] };
         sections.push(section);
       }
+      // Each other file named once, as the command line does: "also in: b.md line 13", then "line 27".
+      const named = new Set<string>();
       const alsoIn = sentence.alsoIn.flatMap((other) => {
         const at = documentOf.get(other.file);
-        return at === undefined ? [] : [{ label: t('also in: {0} line {1}', other.file, count(other.line)), target: place(at, other.span) }];
+        if (at === undefined) return [];
+        const label = named.has(other.file) ? t('line {0}', count(other.line)) : t('also in: {0} line {1}', other.file, count(other.line));
+        named.add(other.file);
+        return [{ label, target: place(at, other.span) }];
       });
       const line: PanelDigestLine = { text: sentence.text, line: t('line {0}', count(sentence.line)), target: place(index, sentence.span), alsoIn };
       (section.lines as PanelDigestLine[]).push(line);

@@ -113,6 +113,21 @@ describe('editor digest: the panel view', () => {
     assert.notEqual(link!.target, line!.target);
   });
 
+  it('names another file once when it holds several copies: "also in: FILE line N", then "line M"', () => {
+    const builder = startDigest({ budget: { unit: 'sentences', value: 6 } });
+    // Both notes give the oil sentence twice, so whichever copy is picked, the other file holds two.
+    builder.add('keeping.md', KEEPING.replace('Every passing ship', `${SHARED} Every passing ship`), 'markdown');
+    builder.add('supplies.rst', SUPPLIES.replace('Barrels are stored', `${SHARED} Barrels are stored`), 'restructuredtext');
+    const twice = digestView(builder.finish());
+    const links = twice.panel.documents.flatMap((d) => d.sections.flatMap((s) => s.lines.flatMap((l) => l.alsoIn)));
+    const labels = links.map((l) => l.label);
+    assert.ok(labels.length >= 2, labels.join(' | '));
+    const files = labels.filter((l) => l.startsWith('also in: '));
+    assert.equal(new Set(files.map((l) => l.replace(/ line \d+$/, ''))).size, files.length, `each file named once: ${labels.join(' | ')}`);
+    assert.ok(labels.some((l) => /^line \d+$/.test(l)), labels.join(' | '));
+    assert.equal(new Set(links.map((l) => l.target)).size, links.length, 'each link its own place');
+  });
+
   it('words the headline and each document’s figures from the digest’s own counts', () => {
     const { stats } = digest;
     assert.equal(stats.documents, 3);

@@ -97,6 +97,9 @@ describe('sentence kinds: fragments', () => {
     assert.equal(fragmentKind('The ferry leaves at nine.', 5), 'short');
     assert.equal(fragmentKind('The ferry leaves the north pier at nine sharp.', 9), null);
     assert.equal(fragmentKind('The crew checks three things every morning before the first crossing:', 11), 'leadIn');
+    assert.equal(fragmentKind('Rename the dock table to berth_slots in the schedule service, and', 11), 'unfinished');
+    assert.equal(fragmentKind('Move the winter timetable to the shared calendar before the first storm;', 12), 'unfinished');
+    assert.equal(fragmentKind('The ferry and the bus now share one ticket and one timetable.', 12), null);
     assert.equal(fragmentKind('RFC 1234.', 2), 'bareReference');
     assert.equal(fragmentKind('[3]', 1), 'bareReference');
     assert.equal(fragmentKind('the full timetable for the winter season', 7, '[the full timetable for the winter season](https://ferry.example/t)'), 'linkOnly');

@@ -5,13 +5,14 @@
  *    metadata lines ("Start Date: …"), and API lines: an HTTP request line or a bare URL path
  *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
- *    fewer, a lead-in ending in a colon, link-only text, a bare reference ("RFC 1234.", "[3]").
+ *    fewer, a lead-in ending in a colon, an unfinished clause (ending in ", and"), link-only text, a
+ *    bare reference ("RFC 1234.", "[3]").
  * Plain rules on the sentence's text and source; nothing here is learned or tuned.
  */
 import type { BarredKind, ParsedDocument } from '../types';
 
 export type { BarredKind };
-export type FragmentKind = 'short' | 'leadIn' | 'linkOnly' | 'bareReference';
+export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference';
 
 export const SENTENCE_KIND_DEFAULTS = {
   /** At most this many words is a fragment (issue 11: "≤ 6 words"). */
@@ -85,9 +86,16 @@ export function barredKind(text: string, words: number, settings = SENTENCE_KIND
 }
 
 /** Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known. */
+/**
+ * A list item or clause that the next one finishes ("Rename the dock table, and"): it ends in a
+ * comma, a semicolon or a coordinating conjunction (English).
+ */
+const UNFINISHED = /(?:[,;]|\b(?:and|or|nor|but))$/i;
+
 export function fragmentKind(text: string, words: number, source = text, settings = SENTENCE_KIND_DEFAULTS): FragmentKind | null {
   const trimmed = text.trim();
   if (/:\s*$/.test(trimmed)) return 'leadIn';
+  if (UNFINISHED.test(trimmed)) return 'unfinished';
   if (BARE_REFERENCE.test(trimmed)) return 'bareReference';
   if (isLinkOnly(source)) return 'linkOnly';
   if (words <= settings.fragmentWords) return 'short';
