@@ -24,6 +24,7 @@ export function l10nKeys(): string[] {
   for (const method of METHOD_INFO) {
     keys.add(method.label);
     keys.add(method.detail);
+    keys.add(method.numbers);
   }
   return [...keys].sort();
 }

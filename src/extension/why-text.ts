@@ -3,7 +3,7 @@
  * Motivation; shares the key terms lifetime, borrow with the title; among the most central
  * sentences"), with the numbers kept apart for a toggle. Pure.
  */
-import { wordTokens } from '../core/index';
+import { METHOD_INFO, wordTokens } from '../core/index';
 import type { PickedSentence, Summary } from '../core/index';
 import { ordinal, type Wording } from './wording';
 
@@ -69,6 +69,8 @@ function formatNumber(value: number): string {
 export function whyNumbers(pick: PickedSentence, summary: Summary, wording: Wording): string[] {
   if (pick.rank === 0) return [];
   const lines = [wording.t('rank {0} of {1}, score {2} ({3})', wording.count(pick.rank), wording.count(summary.stats.sentencesIn), formatNumber(pick.score), summary.method)];
+  const meaning = METHOD_INFO.find((m) => m.name === summary.method)?.numbers;
+  if (meaning) lines.push(wording.t(meaning));
   for (const [name, value] of Object.entries(pick.features).filter(([, v]) => Number.isFinite(v)).sort((a, b) => Math.abs(b[1]) - Math.abs(a[1]))) {
     lines.push(`${name}: ${formatNumber(value)}`);
   }

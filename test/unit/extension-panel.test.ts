@@ -80,6 +80,7 @@ describe('extension panel model', () => {
     assert.match(first.why, /^Opening sentence of “Night Ferry Timetable”; shares the key terms “ferry” with the title; ranked 1st of 6 sentences\.$/);
     assert.match(first.whyNumbers[0]!, /^rank 1 of 6, score 1\.000 \(blend\)$/);
     assert.ok(first.whyNumbers.some((line) => line.startsWith('position: ')));
+    assert.equal(first.whyNumbers[1], 'Each line below: a score or count the method works from (higher counts more).', 'the numbers say what they are');
   });
 
   it('labels text before the first heading and puts a refusal first among the notices', () => {
