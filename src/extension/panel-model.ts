@@ -24,12 +24,13 @@ export interface ShownPicks {
 }
 
 /**
- * The picks to compare a new summary with, so the ones an edit brought in are marked "new"; none
- * after a command, or when the document did not change, or when the focus changed: a new focus,
- * like a new length, changes the picks on purpose, and marking them all would say nothing.
+ * The picks to compare a new summary with, so the ones a live edit brought in are marked "new";
+ * none after a command, a settings change or a switch of editor (`byLiveEdit` false), when the
+ * document did not change, or when the focus changed: a new focus, like a new length, changes the
+ * picks on purpose, and marking them all would say nothing.
  */
-export function previousPicksFor(before: ShownPicks | undefined, next: ShownPicks, byCommand: boolean): ReadonlySet<string> | undefined {
-  if (before === undefined || byCommand || before.scope !== next.scope || before.version === next.version) return undefined;
+export function previousPicksFor(before: ShownPicks | undefined, next: ShownPicks, byLiveEdit: boolean): ReadonlySet<string> | undefined {
+  if (before === undefined || !byLiveEdit || before.scope !== next.scope || before.version === next.version) return undefined;
   if ((before.summary.focus?.text ?? '') !== (next.summary.focus?.text ?? '')) return undefined;
   return new Set(before.summary.sentences.map((p) => p.text));
 }

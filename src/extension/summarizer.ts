@@ -109,7 +109,7 @@ export class Summarizer {
       log.debug(`Dropped a stale result for ${document.fileName} v${ticket.version}.`);
       return { kind: 'stale' };
     }
-    const previousPicks = previousPicksFor(before, { scope, version: ticket.version, summary }, trigger === 'command');
+    const previousPicks = previousPicksFor(before, { scope, version: ticket.version, summary }, trigger === 'live');
     const shown = store.add({
       key,
       uri: document.uri,

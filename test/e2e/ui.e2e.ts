@@ -258,6 +258,7 @@ async function main(): Promise<void> {
     const warnings = panel.locator('.summary .warning');
     await poll(() => panel.locator('.summary-list li.pick').count(), (n) => n === flagged!.length, 20_000, `a ${flagged.length}-sentence summary`);
     await poll(() => warnings.count(), (n) => n === flagged!.warnings, 10_000, 'the inline warnings');
+    assert.equal(await panel.locator('li.pick.new').count(), 0, 'a new length (after a revert) marks no pick new');
     const repairs = warnings.first().locator('.repairs button');
     assert.equal(await repairs.count(), flagged.repairs, 'a button per repair');
     await warnings.first().scrollIntoViewIfNeeded();

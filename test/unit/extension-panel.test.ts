@@ -61,17 +61,17 @@ describe('extension panel model', () => {
     );
   });
 
-  it('compares with the previous picks only after an edit with the same focus, never after a command', () => {
+  it('compares with the previous picks only after a live edit with the same focus, never after a command or a settings change', () => {
     const summary = ferrySummary();
     const before = { scope: 'document' as const, version: 3, summary };
     const focused = { ...summary, focus: { text: 'night fares', terms: 2, termsFound: 2, matchingSentences: 2 } };
-    const picks = previousPicksFor(before, { scope: 'document', version: 4, summary }, false);
+    const picks = previousPicksFor(before, { scope: 'document', version: 4, summary }, true);
     assert.deepEqual([...(picks ?? [])], summary.sentences.map((p) => p.text), 'an edit: compare');
-    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary: focused }, false), undefined, 'a new focus');
-    assert.equal(previousPicksFor(before, { scope: 'document', version: 3, summary }, false), undefined, 'no edit (a new length, a refresh)');
-    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary }, true), undefined, 'a command');
-    assert.equal(previousPicksFor(before, { scope: 'selection', version: 4, summary }, false), undefined, 'another scope');
-    assert.equal(previousPicksFor(undefined, { scope: 'document', version: 4, summary }, false), undefined, 'a first summary');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary: focused }, true), undefined, 'a new focus');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 3, summary }, true), undefined, 'no edit');
+    assert.equal(previousPicksFor(before, { scope: 'document', version: 4, summary }, false), undefined, 'a command or a settings change after an edit (a revert, then a new length)');
+    assert.equal(previousPicksFor(before, { scope: 'selection', version: 4, summary }, true), undefined, 'another scope');
+    assert.equal(previousPicksFor(undefined, { scope: 'document', version: 4, summary }, true), undefined, 'a first summary');
   });
 
   it('says why a sentence was picked in words, with the numbers apart', () => {
