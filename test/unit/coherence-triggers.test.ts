@@ -120,6 +120,8 @@ describe('coherence: back-references', () => {
     assert.equal(first('As noted earlier, the dome shuts in wind.'), 'backReference:As noted earlier');
     assert.equal(first('The aforementioned valve is replaced yearly.'), 'backReference:aforementioned');
     assert.equal(first('Entries follow the previous step.'), 'backReference:the previous step');
+    assert.equal(first('The following example shows a dock schedule in the new format.'), 'backReference:The following example');
+    assert.equal(first('Operators paste the following snippet into the ferry config.'), 'backReference:the following snippet');
   });
 
   it('does not flag "the former" as "ex-", "above" as a preposition, or a named source', () => {
@@ -129,6 +131,7 @@ describe('coherence: back-references', () => {
     assert.equal(first('Above all, return tools clean.'), null);
     assert.equal(first('Temperatures below zero stop the pump.'), null);
     assert.equal(first('As described in the style guide, units stay.'), null);
+    assert.equal(first('The following day the ferry sails at noon.'), null);
   });
 });
 

@@ -1,6 +1,6 @@
 /**
  * Explicit pointers to other parts of the text ("the former", "the latter", "the steps above",
- * "as mentioned", "see below", "the previous section") and additive back-references ("also",
+ * "as mentioned", "see below", "the previous section", forward: "the following example") and additive back-references ("also",
  * "too", "as well", "either", "Another option ..."): the sentence presupposes something said
  * elsewhere. Halliday and Hasan (1976, "Cohesion in English") call the second kind additive
  * conjunction and comparative reference — from memory.
@@ -33,6 +33,9 @@ const FORMER_ANAPHORIC = set('one two option approach method case variant choice
 const DOCUMENT_PARTS = set(`
   section sections chapter chapters step steps paragraph paragraphs example examples point points
   sentence list table figure one two page part parts item items question answer`);
+
+/** Blocks a forward pointer names besides the document parts: "the following snippet". */
+const FORWARD_PARTS = set('snippet snippets code diagram diagrams configuration listing listings output excerpt sample samples');
 
 /** After "as mentioned in ...": words that still point inside this document. */
 const INTERNAL_PLACES = set('previous preceding last earlier above first introduction overview prior same this');
@@ -110,6 +113,8 @@ function backReferenceAt(tokens: readonly Token[], i: number): FoundTrigger | nu
   }
 
   if ((word === 'previous' || word === 'preceding') && prevWord === 'the' && DOCUMENT_PARTS.has(next)) return span(prev, nextIndex + 1);
+  // Forward: "The following example shows ..." points at a block the summary leaves out.
+  if (word === 'following' && prevWord === 'the' && (DOCUMENT_PARTS.has(next) || FORWARD_PARTS.has(next))) return span(prev, nextIndex + 1);
 
   if (word === 'earlier' && POINTING_PARTICIPLES.has(prevWord)) return span(prev, i + 1);
   if (word === 'see' && (next === 'above' || next === 'below')) return span(i, nextIndex + 1);
