@@ -1,7 +1,7 @@
 /**
  * Digest benchmark: quality on groups of related documents, and speed on a whole folder.
  *
- *   node dist/bench.cjs digest [--split test|train] [--limit N] [--speed-only] [--write]
+ *   node dist/bench.cjs digest [--split test|train] [--limit N] [--speed-only | --quality-only] [--write]
  *
  * Groups of related documents, from both corpora, each member with its author's summary withheld:
  *  - nova-specs: a spec re-proposed in several release folders (same file name after the last
@@ -251,6 +251,7 @@ export async function run(args: string[]): Promise<number> {
     );
     console.log(lines.join('\n'));
   }
+  if (args.includes('--quality-only')) return 0;
   const speedLines = [
     '### Speed (every file of the folder, streamed one at a time; machine shared, 2 cores)',
     '',
