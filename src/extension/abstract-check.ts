@@ -182,6 +182,14 @@ export class AbstractCheck {
     this.context.panel.post({ type: 'abstractCheck', check: shown.panel });
   }
 
+  /** The user closed the check's part of the panel: it stays closed (no replay) and its Problems entries go. */
+  dismiss(): void {
+    if (!this.shown) return;
+    this.diagnostics.delete(this.shown.uri);
+    this.shown = undefined;
+    this.context.panel.post({ type: 'abstractCheck', check: null });
+  }
+
   /** The checked document closed: the check goes with it. */
   forget(document: vscode.TextDocument): void {
     if (this.shown?.key !== document.uri.toString()) return;

@@ -4,7 +4,7 @@ import type { TerselyContext } from './context';
 import type { RuntimeReport } from './engine-hosts';
 import type { Scope } from './summaries';
 import type { ShownDigestView } from './digester';
-import type { PanelControls, PanelDigest, PanelSummary } from './messages';
+import type { PanelAbstractCheck, PanelControls, PanelDigest, PanelSummary } from './messages';
 
 export interface TerselyApi {
   inspect(uri: { toString(): string }): { id: number; version: number; scope: Scope; spans: Span[]; highlighted: boolean; warnings: number } | undefined;
@@ -31,6 +31,10 @@ export interface TerselyApi {
   revealDigest(digestId: number, target: number): Promise<boolean>;
   /** What the digest's dismiss button in the panel does. */
   dismissDigest(): void;
+  /** What the panel was last sent as the abstract check (null once dismissed). */
+  readonly panelCheck: PanelAbstractCheck | null | undefined;
+  /** What the abstract check's dismiss button in the panel does. */
+  dismissCheck(): void;
 }
 
 export function testApi(context: TerselyContext, runtime: RuntimeReport, activationMs: number): TerselyApi {
@@ -83,5 +87,9 @@ export function testApi(context: TerselyContext, runtime: RuntimeReport, activat
     },
     revealDigest: (digestId, target) => context.digester.reveal(digestId, target),
     dismissDigest: () => context.digester.dismiss(),
+    get panelCheck() {
+      return context.panel.shownCheck;
+    },
+    dismissCheck: () => context.abstractCheck.dismiss(),
   };
 }

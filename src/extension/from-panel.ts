@@ -52,6 +52,8 @@ export function parsePanelMessage(raw: unknown): ParseResult<FromPanel> {
       if (!shape(['digestId', 'target']) || !isIndex(digestId) || !isIndex(target)) return reject('malformed revealDigest');
       return { ok: true, message: { type, digestId, target } };
     }
+    case 'dismissCheck':
+      return shape([]) ? { ok: true, message: { type } } : reject('unexpected fields on dismissCheck');
     case 'dismissDigest':
       return shape([]) ? { ok: true, message: { type } } : reject('unexpected fields on dismissDigest');
     case 'applyRepair': {

@@ -223,6 +223,7 @@ export type FromPanel =
   | { readonly type: 'ready' }
   | { readonly type: 'reveal'; readonly summaryId: number; readonly sentence: number }
   | { readonly type: 'revealCheck'; readonly checkId: number; readonly target: number }
+  | { readonly type: 'dismissCheck' }
   | { readonly type: 'revealDigest'; readonly digestId: number; readonly target: number }
   /** The digest's dismiss button: the extension forgets the digest and its highlights. */
   | { readonly type: 'dismissDigest' }

@@ -18,6 +18,9 @@ export async function handlePanelMessage(context: TerselyContext, message: FromP
     case 'revealDigest':
       await context.digester.reveal(message.digestId, message.target);
       return;
+    case 'dismissCheck':
+      context.abstractCheck.dismiss();
+      return;
     case 'dismissDigest':
       context.digester.dismiss();
       return;

@@ -40,6 +40,11 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     const message = this.remembered.digest;
     return message?.type === 'digest' ? message.digest : undefined;
   }
+  /** The last abstract check the panel was sent: null once dismissed or closed, undefined before any. */
+  get shownCheck(): import('./messages').PanelAbstractCheck | null | undefined {
+    const message = this.remembered.abstractCheck;
+    return message?.type === 'abstractCheck' ? message.check : undefined;
+  }
   /** Messages rejected so far (tests read it through the extension's API). */
   rejectedMessages = 0;
 

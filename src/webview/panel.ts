@@ -45,6 +45,7 @@ const actions: RenderActions = {
   dismissCheck: () => {
     check = null;
     renderCheckPart();
+    post({ type: 'dismissCheck' });
   },
   revealDigest: (digestId, target) => post({ type: 'revealDigest', digestId, target }),
   dismissDigest: () => {

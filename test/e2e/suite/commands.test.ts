@@ -301,6 +301,22 @@ describe('Tersely in the editor', function () {
     }
   });
 
+  it('forgets a dismissed abstract check: the panel is sent none, and its Problems entries go', async () => {
+    await setting('problemsView', true);
+    try {
+      const editor = await openDemo('abstract-check.md');
+      const result = (await vscode.commands.executeCommand('tersely.checkAbstract')) as { ok: boolean; findings: number };
+      assert.equal(result.ok, true);
+      assert.ok(api.panelCheck, 'the check is in the panel');
+      assert.ok(vscode.languages.getDiagnostics(editor.document.uri).some((d) => d.code === 'abstract-check'));
+      api.dismissCheck();
+      assert.equal(api.panelCheck, null, 'nothing left to replay when the panel is shown again');
+      assert.deepEqual(vscode.languages.getDiagnostics(editor.document.uri).filter((d) => d.code === 'abstract-check'), []);
+    } finally {
+      await setting('problemsView', undefined);
+    }
+  });
+
   it('checks the selected text as the abstract, and a heading passed by the picker', async () => {
     const editor = await openDemo('abstract-check.md');
     const text = editor.document.getText();
