@@ -1,9 +1,9 @@
 /**
  * Explicit pointers to other parts of the text ("the former", "the latter", "the steps above",
- * "as mentioned", "see below", "the previous section", forward: "the following example") and additive back-references ("also",
- * "too", "as well", "either", "Another option ..."): the sentence presupposes something said
- * elsewhere. Halliday and Hasan (1976, "Cohesion in English") call the second kind additive
- * conjunction and comparative reference — from memory.
+ * "as mentioned", "see below", "the previous section", forward: "the following example") and
+ * additive back-references ("also", "too", "as well", "either", "Another option ..."): the
+ * sentence presupposes something said elsewhere. Halliday and Hasan (1976, "Cohesion in
+ * English") call the second kind additive conjunction and comparative reference — from memory.
  */
 import type { ClauseLayout } from './clause';
 import type { FoundTrigger } from './pronouns';

@@ -85,13 +85,13 @@ export function barredKind(text: string, words: number, settings = SENTENCE_KIND
   return null;
 }
 
-/** Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known. */
 /**
  * A list item or clause that the next one finishes ("Rename the dock table, and"): it ends in a
  * comma, a semicolon or a coordinating conjunction (English).
  */
 const UNFINISHED = /(?:[,;]|\b(?:and|or|nor|but))$/i;
 
+/** Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known. */
 export function fragmentKind(text: string, words: number, source = text, settings = SENTENCE_KIND_DEFAULTS): FragmentKind | null {
   const trimmed = text.trim();
   if (/:\s*$/.test(trimmed)) return 'leadIn';
