@@ -12,12 +12,15 @@
  * file name, even → train.
  */
 import { readdir, readFile } from 'node:fs/promises';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { parseDocument, splitReference, wordTokens, type DocumentFormat } from '../src/core/index';
-import { documentNumber, halfOf, MIN_BODY_SENTENCES, MIN_REFERENCE_WORDS, REFERENCE_HEADING, type Half } from './corpus';
+import { CorpusMissing, documentNumber, halfOf, MIN_BODY_SENTENCES, MIN_REFERENCE_WORDS, REFERENCE_HEADING, type Half } from './corpus';
 
-export const RFC_CORPUS = '../shared/corpus/rust-rfcs/docs';
-export const NOVA_CORPUS = '../shared/corpus/nova-specs/docs';
+/** The two folders read, as the other benchmarks find them (--corpus / $TERSELY_CORPUS, --nova-corpus / $TERSELY_NOVA_CORPUS). */
+export interface CheckCorpusFolders {
+  readonly rfcs: string;
+  readonly nova: string;
+}
 
 export type CorpusName = 'rust-rfcs' | 'nova-specs';
 
@@ -87,17 +90,21 @@ export interface CheckCorpusLoad {
  * first ones), or with `sample`, that many spread evenly over the half (for quick iteration: old
  * and new documents alike, the same ones on every run).
  */
-export async function loadCheckCorpus(half: Half, limit: number, root = '.', sample = Infinity): Promise<CheckCorpusLoad> {
+export async function loadCheckCorpus(half: Half, limit: number, folders: CheckCorpusFolders, sample = Infinity): Promise<CheckCorpusLoad> {
   const documents: AbstractDocument[] = [];
   const files: Record<CorpusName, number> = { 'rust-rfcs': 0, 'nova-specs': 0 };
   const skipped: Record<CorpusName, number> = { 'rust-rfcs': 0, 'nova-specs': 0 };
   const sources: readonly [CorpusName, string, string, (file: string, text: string) => AbstractDocument | null][] = [
-    ['rust-rfcs', RFC_CORPUS, '.md', splitRfc],
-    ['nova-specs', NOVA_CORPUS, '.rst', splitNova],
+    ['rust-rfcs', folders.rfcs, '.md', splitRfc],
+    ['nova-specs', folders.nova, '.rst', splitNova],
   ];
-  for (const [name, folder, extension, split] of sources) {
-    const directory = resolve(root, folder);
-    const names = (await readdir(directory)).filter((f) => f.endsWith(extension)).sort();
+  for (const [name, directory, extension, split] of sources) {
+    let names: string[];
+    try {
+      names = (await readdir(directory)).filter((f) => f.endsWith(extension)).sort();
+    } catch {
+      throw new CorpusMissing(`corpus folder not found: ${directory}\nPoint the check benchmark elsewhere with --corpus PATH / TERSELY_CORPUS (Rust RFCs) and --nova-corpus PATH / TERSELY_NOVA_CORPUS (Nova specs).`);
+    }
     let taken = 0;
     const usable: AbstractDocument[] = [];
     for (const file of names) {

@@ -3,6 +3,7 @@
  * sentence perturbed by rule (bench/perturb.ts).
  *
  *   node dist/bench.cjs check [--split test|train] [--limit N | --sample N] [--examples FILE] [--save-baseline FILE --label TEXT]
+ *                             [--corpus RFC-FOLDER] [--nova-corpus NOVA-FOLDER]  (or $TERSELY_CORPUS, $TERSELY_NOVA_CORPUS)
  *
  * --sample N takes N documents per corpus spread evenly over the half (quick iteration); --limit N
  * the first N. Only the full test-half run writes bench/RESULTS.md.
@@ -21,7 +22,9 @@
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { abstractChecker, parseDocument, type AbstractReport } from '../src/core/index';
-import { loadCheckCorpus, type AbstractDocument, type CorpusName } from './check-corpus';
+import { loadCheckCorpus, type AbstractDocument, type CheckCorpusFolders, type CorpusName } from './check-corpus';
+import { corpusDirectory, CorpusMissing } from './corpus';
+import { novaCorpusDirectory } from './nova-corpus';
 import { BodyFacts, PERTURBATION_KINDS, perturbAbstract, type PerturbationKind } from './perturb';
 import { RESULTS_FILE, writeResultsBlock } from './results-file';
 import { seededRandom } from './seeded-random';
@@ -109,8 +112,8 @@ function findingKinds(check: Check, sentence: number): string[] {
   return (s?.findings ?? []).map((f) => f.kind);
 }
 
-export async function measure(split: Half, limit: number, engine: string, onProgress?: (line: string) => void, onExample?: (line: string) => void, sample = Infinity): Promise<CheckFigures & { files: object; skipped: object }> {
-  const load = await loadCheckCorpus(split, limit, '.', sample);
+export async function measure(split: Half, limit: number, engine: string, folders: CheckCorpusFolders, onProgress?: (line: string) => void, onExample?: (line: string) => void, sample = Infinity): Promise<CheckFigures & { files: object; skipped: object }> {
+  const load = await loadCheckCorpus(split, limit, folders, sample);
   const byCorpus: Record<CorpusName, Tally> = { 'rust-rfcs': emptyTally(), 'nova-specs': emptyTally() };
   const random = seededRandom(SEED);
   load.documents.forEach((document, index) => {
@@ -232,7 +235,17 @@ export async function run(args: readonly string[]): Promise<number> {
   const sample = Number(value('--sample') ?? Infinity);
   const examples = value('--examples');
   const exampleLines: string[] = [];
-  const figures = await measure(split, limit, value('--label') ?? 'this build', (line) => process.stderr.write(`${line}\n`), examples ? (line) => exampleLines.push(line) : undefined, sample);
+  const folders = { rfcs: corpusDirectory(args), nova: novaCorpusDirectory(args) };
+  let figures: Awaited<ReturnType<typeof measure>>;
+  try {
+    figures = await measure(split, limit, value('--label') ?? 'this build', folders, (line) => process.stderr.write(`${line}\n`), examples ? (line) => exampleLines.push(line) : undefined, sample);
+  } catch (error) {
+    if (error instanceof CorpusMissing) {
+      console.error(error.message);
+      return 2;
+    }
+    throw error;
+  }
   if (examples) writeFileSync(examples, exampleLines.join('\n') + '\n');
   const saveBaseline = value('--save-baseline');
   if (saveBaseline) writeFileSync(saveBaseline, JSON.stringify({ engine: figures.engine, split: figures.split, byCorpus: figures.byCorpus }, null, 2) + '\n');

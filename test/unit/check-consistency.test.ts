@@ -72,6 +72,22 @@ describe('check consistency: numbers', () => {
     assert.deepEqual(checkNumbers(input('Riders joined early, see https://example.org/report/2019.', ['Riders joined in large numbers.'])), []);
   });
 
+  it('does not read a number shown only in code or an inline target as a count', () => {
+    assert.deepEqual(checkNumbers(input('Riders pay with `fare(2)` at the dock.', ['Riders pay at the dock.'])), []);
+    assert.deepEqual(checkNumbers(input('_`Goal 3`: riders pay at the dock.', ['Riders pay at the dock.'])), []);
+    // Written outside the code span as well: still a count.
+    const outside = checkNumbers(input('Riders pay 2 fares with `fare(2)`.', ['Riders pay fares at the dock.']));
+    assert.ok(outside.some((f) => f.abstractSays === '2 fares'), JSON.stringify(outside));
+  });
+
+  it('does not report a document reference the body never mentions, but does report a different one', () => {
+    assert.deepEqual(checkNumbers(input('This follows proposal RFC 1728 for docks.', ['This follows the dock proposal.'])), []);
+    assert.deepEqual(checkNumbers(input('Riders asked for it in issue #961.', ['Riders asked for it.'])), []);
+    const changed = checkNumbers(input('This follows RFC 1728 for docks.', ['This follows RFC 1182 for docks.']));
+    assert.equal(changed.length, 1);
+    assert.equal(changed[0]!.bodySays, '1182');
+  });
+
   it('reads a number joined to its word ("6-dock stations")', () => {
     const findings = checkNumbers(input('The city opened 8-dock stations.', ['The city opened 6-dock stations.']));
     assert.equal(findings.length, 1);

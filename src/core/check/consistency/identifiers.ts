@@ -27,7 +27,7 @@ export interface Identifier {
 }
 
 /** A code span; its content neither starts nor ends with a space, so the text between two spans is never taken for one. */
-const CODE_SPAN = /(`{1,2})([^`\s](?:[^`\n]{0,78}[^`\s])?)\1(?!_)/gu;
+export const CODE_SPAN = /(`{1,2})([^`\s](?:[^`\n]{0,78}[^`\s])?)\1(?!_)/gu;
 const PATTERNS: readonly (readonly [IdentifierKind, RegExp])[] = [
   ['option', /(?<![\w-])--[a-z][a-z0-9-]+/gu],
   ['file', /(?<![\w/.-])[\w-]+\.(?:rs|toml|md|json|ya?ml|py|js|ts|c|h|cfg|conf|ini|txt|lock|sh|rst)\b/gu],

@@ -8,8 +8,13 @@
  *     in the document cannot be checked against it, so it is reported.
  * Ratio words ("half", "twice") only take part in contradictions: "halved" is often said of a fall
  * the body gives as two figures.
+ * Not claims: numbers written only inside code spans (`[0; 4]`, reStructuredText ``x``) and
+ * inline targets (_`Requirement 3`), which name or show code rather than count. A number naming
+ * another document ("RFC 1728", "issue #961") is a reference: a different one in the body is a
+ * contradiction, but one the body never mentions is not reported (common practice, no source).
  */
 import type { Detector, Evidence, RawFinding } from './detector';
+import { CODE_SPAN } from './identifiers';
 import { comparable, quantitiesIn, sameQuantity, type Quantity } from './quantities';
 
 const KIND_OF: Readonly<Record<Quantity['kind'], RawFinding['kind']>> = {
@@ -35,6 +40,29 @@ function quantitiesOf(evidence: Evidence): Quantity[] {
   return found;
 }
 
+/** Words before a number that make it the name of another document, not a count. */
+const REFERENCE_WORDS = new Set(['rfc', 'rfcs', 'issue', 'issues', 'pr', 'prs', 'bug', 'bugs', 'ticket', 'pep']);
+
+function isReference(claim: Parameters<Detector>[0]['claim'], token: number): boolean {
+  const at = claim.tokens[token]!;
+  if (claim.text[at.start - 1] === '#') return true;
+  const before = claim.tokens[token - 1];
+  return before !== undefined && REFERENCE_WORDS.has(before.lower);
+}
+
+/** Words of the source written only inside code spans or inline targets (none of their kind outside). */
+function codeOnlyWords(source: string): Set<string> {
+  const words = (text: string) => text.toLowerCase().match(/[\p{L}\p{N}.,%]+/gu) ?? [];
+  const inside = new Set<string>();
+  let outside = source;
+  for (const m of source.matchAll(CODE_SPAN)) {
+    for (const w of words(m[2]!)) inside.add(w);
+    outside = outside.replace(m[0], ' ');
+  }
+  for (const w of words(outside)) inside.delete(w);
+  return inside;
+}
+
 function valueText(q: Quantity): string {
   if (q.kind === 'percent') return `${q.value}%`;
   return String(q.value);
@@ -44,12 +72,14 @@ export const checkNumbers: Detector = (input) => {
   const findings: RawFinding[] = [];
   const claimQuantities = quantitiesIn(input.claim);
   if (claimQuantities.length === 0) return findings;
+  const inCode = codeOnlyWords(input.claimSource);
   const primary = input.frame ? [input.frame, ...input.support.filter((s) => s !== input.frame)] : input.support;
   for (const claimed of claimQuantities) {
     // Numbers inside a link target or a reference ("[3]") are not claims.
     const token = input.claim.tokens[claimed.token]!;
     if (/[/#:=]\S*$/u.test(input.claim.text.slice(0, token.start))) continue;
     if (input.claim.text[token.start - 1] === '[' && input.claim.text[token.end] === ']') continue;
+    if (inCode.has(token.lower)) continue;
     const agrees = input.pool.some((e) => quantitiesOf(e).some((q) => sameQuantity(claimed, q)));
     if (agrees) continue;
     let conflict: { evidence: Evidence; quantity: Quantity } | null = null;
@@ -64,7 +94,7 @@ export const checkNumbers: Detector = (input) => {
       findings.push({ kind: KIND_OF[claimed.kind], abstractSays: claimed.phrase, bodySays: conflict.quantity.phrase, evidence: conflict.evidence });
       continue;
     }
-    if (claimed.kind === 'ratio') continue;
+    if (claimed.kind === 'ratio' || isReference(input.claim, claimed.token)) continue;
     if (stated(claimed, input.body.textNumbers ?? input.body.numbers, input.body.sentences)) continue;
     // The body never gives the value: cite the first place that counts the same thing, if any.
     let elsewhere: { evidence: Evidence; quantity: Quantity } | null = null;
