@@ -7,6 +7,7 @@ import { readdir, stat } from 'node:fs/promises';
 import { join } from 'node:path';
 import { formatForFileName, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
 import { choiceFlag, UsageError } from './args';
+import { engineRequest } from './engine-request';
 import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
 import { digestToJson, digestToMarkdown, renderDigestText } from './render-digest';
@@ -64,7 +65,7 @@ export async function runDigest(args: string[]): Promise<number> {
 
   const files = await expandPaths(positionals);
   if (files.length === 0) throw new UsageError('no Markdown, reStructuredText or text files found in the folders given');
-  const builder = startDigest(options as DigestRequest);
+  const builder = startDigest((await engineRequest(options)) as DigestRequest);
   let failures = 0;
   for (const [k, path] of files.entries()) {
     const counter = `[${k + 1}/${files.length}]`;

@@ -1,8 +1,7 @@
 /** `tersely summarize FILE...` */
 import { FORMAT_IDS, SUMMARY_OPTIONS, summarize, summaryToMarkdown, type DocumentFormat, type Summary, type SummarizeRequest } from '../core/index';
 import { choiceFlag, UsageError } from './args';
-import { loadModelFile } from './model-file';
-import { readTemplates } from './template-files';
+import { engineRequest } from './engine-request';
 import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
 import { renderText, summaryToJson } from './render-summary';
@@ -33,11 +32,7 @@ export async function runSummarize(args: string[]): Promise<number> {
   const inputFormat = forcedFormat(extra, notes);
   for (const note of notes) warn(`tersely: ${note}`);
 
-  const { modelFile, templateFiles, ...summaryOptions } = options;
-  const request: Record<string, unknown> = { ...summaryOptions };
-  if (typeof modelFile === 'string' && modelFile !== '') request.model = await loadModelFile(modelFile);
-  const templates = await readTemplates(templateFiles as readonly string[] | undefined);
-  if (templates.length > 0) request.templates = templates;
+  const request = await engineRequest(options);
   const maxChars = (options.maxChars as number | undefined) ?? SUMMARY_OPTIONS.maxChars.default;
 
   const style = styleFor(process.stdout);

@@ -17,6 +17,7 @@ import type { PanelDigest } from './messages';
 import { checkedSpan } from './ranges';
 import { formatFor, settingKeyOf } from './settings';
 import { isSummarizable } from './summaries';
+import { readTemplateFiles } from './template-files';
 import { CancelledError, type EngineClient } from './worker-client';
 
 interface Source {
@@ -192,9 +193,13 @@ export class Digester {
     const { t } = wording;
     const names = uniqueNames(sources.map((s) => vscode.workspace.asRelativePath(s.uri, false)));
     const documents: EngineDigestDocument[] = sources.map((s, k) => ({ file: names[k]!, text: s.text, format: s.format }));
-    const summary = settings.read().summary;
+    const { summary, host } = settings.read();
+    // The team's model and templates apply as they do to one document's summary.
+    this.engine.useModel(await this.context.models.load(host.modelFile));
+    const { templates, problems } = await readTemplateFiles(host.templateFiles, sources[0]!.uri);
+    for (const problem of problems) void vscode.window.showWarningMessage(t('Tersely: {0} (tersely.templateFiles)', problem));
     // The digest's own length (a few sentences per document) rather than the single-document length setting.
-    const options: DigestRequest = { method: summary.method, language: summary.language, maxChars: summary.maxChars };
+    const options: DigestRequest = { method: summary.method, language: summary.language, maxChars: summary.maxChars, ...(templates.length > 0 ? { templates } : {}) };
     let result;
     try {
       result = await vscode.window.withProgress(
@@ -228,6 +233,7 @@ export class Digester {
       void vscode.window.showErrorMessage(t('Tersely could not make the digest: {0}', `the engine answered a ${result.kind} job`));
       return { kind: 'failed' };
     }
+    if (result.modelProblem) this.context.models.reportProblem(host.modelFile, result.modelProblem);
     const view = digestView(result.digest, wording);
     const places = view.places.map((p): ShownPlace => {
       const text = sources[p.document]!.text;

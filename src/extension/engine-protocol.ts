@@ -56,7 +56,7 @@ export type EngineResult =
     }
   | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
   | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number }
-  | { readonly kind: 'digest'; readonly digest: Digest; readonly elapsedMs: number };
+  | { readonly kind: 'digest'; readonly digest: Digest; readonly elapsedMs: number; readonly modelProblem?: string };
 
 /** Host → extension. */
 export type FromEngine =

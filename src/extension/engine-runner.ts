@@ -55,12 +55,13 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
           .map((s) => ({ heading: s.heading, depth: s.depth }));
         post({ type: 'done', id, result: { kind: 'headings', headings, elapsedMs: performance.now() - started } });
       } else if (task.kind === 'digest') {
-        const builder = startDigest(task.options);
+        const { model, problem } = modelFor(message.modelKey);
+        const builder = startDigest({ ...task.options, ...(model !== undefined ? { model } : {}) });
         for (const [k, document] of task.documents.entries()) {
           builder.add(document.file, document.text, document.format);
           post({ type: 'progress', id, done: k + 1, total: task.documents.length });
         }
-        post({ type: 'done', id, result: { kind: 'digest', digest: builder.finish(), elapsedMs: performance.now() - started } });
+        post({ type: 'done', id, result: { kind: 'digest', digest: builder.finish(), elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}) } });
       } else {
         const report = checkAbstract(task.text, task.options);
         post({ type: 'done', id, result: { kind: 'checkAbstract', report, elapsedMs: performance.now() - started } });

@@ -83,12 +83,12 @@ export class EngineClient {
       };
       signal?.addEventListener('abort', onAbort, { once: true });
       this.running = { id, resolve, reject, onStage, onProgress, detach: () => signal?.removeEventListener('abort', onAbort) };
-      const modelKey = task.kind === 'summarize' ? this.model?.key : undefined;
+      const modelKey = task.kind === 'summarize' || task.kind === 'digest' ? this.model?.key : undefined;
       host.connection.post(modelKey !== undefined ? { type: 'job', id, task, modelKey } : { type: 'job', id, task });
     });
   }
 
-  /** The model summarize jobs use from now on (undefined: the built-in one). Sent to the host only when it changes. */
+  /** The model summarize and digest jobs use from now on (undefined: the built-in one). Sent to the host only when it changes. */
   useModel(model: EngineModel | undefined): void {
     this.model = model;
     if (this.host) this.sendModel(this.host);

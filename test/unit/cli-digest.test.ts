@@ -52,6 +52,21 @@ describe('command line: digest', function () {
     assert.equal(alsoInLabel([at('b.md', 40)]), 'also in: b.md line 40');
   });
 
+  it('never picks a sentence of a --template, and refuses a --model that cannot be read, as summarize does', () => {
+    const template = join(dir, 'template.txt');
+    writeFileSync(template, 'Tickets are sold on board by the purser.\n');
+    const without = tersely(['digest', a, '--length', '20s', '--quiet']);
+    assert.match(without.stdout, /sold on board by the purser/);
+    const run = tersely(['digest', a, '--length', '20s', '--quiet', '--template', template]);
+    assert.equal(run.code, 0, run.stderr);
+    assert.doesNotMatch(run.stdout, /sold on board by the purser/);
+    assert.match(run.stdout, /Bicycles ride free/);
+    const model = tersely(['digest', a, '--quiet', '--model', join(dir, 'no-such-model.json')]);
+    assert.notEqual(model.code, 0);
+    assert.match(model.stderr, /model file .*no-such-model\.json cannot be read/);
+    assert.equal(model.stdout, '');
+  });
+
   it('keeps going after a missing file, says why, and exits 1; refuses standard input', () => {
     const run = tersely(['digest', a, join(dir, 'missing.md'), '--quiet']);
     assert.equal(run.code, 1);

@@ -40,6 +40,30 @@ describe('engine runner: a digest job', () => {
     assert.equal(done.result.digest.stats.sentencesOut, 4);
   });
 
+  it('digests with the model it was sent, and says why a model was refused', () => {
+    const out: FromEngine[] = [];
+    const runner = engineRunner((m) => out.push(m));
+    runner({ type: 'model', key: 'bad@1', model: { format: 'something else' } });
+    runner({ type: 'job', id: 3, task: digestTask(), modelKey: 'bad@1' });
+    const done = out.at(-1)!;
+    assert.ok(done.type === 'done' && done.result.kind === 'digest', JSON.stringify(done));
+    assert.match(done.result.modelProblem ?? '', /invalid sentence model/);
+    runner({ type: 'job', id: 4, task: digestTask(), modelKey: 'never-sent' });
+    assert.deepEqual(out.at(-1), { type: 'failed', id: 4, error: 'the engine host was not sent model never-sent' });
+  });
+
+  it('never picks a sentence of the team templates it is given', () => {
+    const template = { text: 'TOOLS\n\nThe tool shed is locked at dusk.\n', format: 'plaintext' as const };
+    const plain = digestDocuments(DOCUMENTS, { budget: { unit: 'sentences', value: 6 } });
+    assert.ok(plain.sentences.some((s) => s.text === 'The tool shed is locked at dusk.'), 'picked without the template');
+    const out = run({ type: 'job', id: 5, task: digestTask({ budget: { unit: 'sentences', value: 6 }, templates: [template] }) });
+    const done = out.at(-1)!;
+    assert.ok(done.type === 'done' && done.result.kind === 'digest');
+    const texts = done.result.digest.sentences.map((s) => s.text);
+    assert.ok(!texts.includes('The tool shed is locked at dusk.'), texts.join(' | '));
+    assert.ok(texts.includes('Borrowed tools go back clean and dry.'), texts.join(' | '));
+  });
+
   it('fails the job, before reading any document, on options the engine refuses', () => {
     const out = run({ type: 'job', id: 2, task: digestTask({ focus: 'water' }) });
     assert.equal(out.length, 1);
@@ -99,6 +123,16 @@ describe('engine client: progress of a digest job', () => {
     listener.message({ type: 'progress', id: jobId(), done: 1, total: 3 });
     controller.abort();
     await assert.rejects(job, CancelledError);
+  });
+
+  it('names the model in a digest job once one is in use, as for summaries', async () => {
+    client.useModel({ key: 'team.json@1', model: { counts: 1 } });
+    const job = client.run(digestTask());
+    const sentJob = sent.filter((m) => m.type === 'job').at(-1);
+    assert.ok(sentJob && sentJob.type === 'job');
+    assert.equal(sentJob.modelKey, 'team.json@1');
+    listener.message({ type: 'done', id: sentJob.id, result: result() });
+    await job;
   });
 
   it('sends the documents and options as given, with no model key', async () => {

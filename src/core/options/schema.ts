@@ -220,7 +220,7 @@ export const HOST_OPTIONS = {
     default: '',
     description: 'A trained sentence model (JSON from `tersely train`) for the trained method; empty for the built-in one. Relative paths start at the first workspace folder.',
     setting: { key: 'modelFile', order: 16, restricted: true, scope: 'machine-overridable' },
-    cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
+    cli: { flag: 'model', placeholder: 'FILE', commands: ['summarize', 'digest'], help: 'A trained sentence model (JSON from `tersely train`) for the trained and balanced methods, instead of the built-in one.' },
   }),
   problemsView: define({
     kind: booleanKind,
@@ -234,7 +234,7 @@ export const HOST_OPTIONS = {
     description:
       'The team’s document templates: sentences that occur in one are never picked. Files, or folders (ending in /) whose Markdown, reStructuredText and text files are all templates; relative paths start at the workspace folder (the current folder on the command line). Locations that do not exist are passed over.',
     setting: { key: 'templateFiles', order: 18, restricted: true, scope: 'machine-overridable' },
-    cli: { flag: 'template', placeholder: 'FILE', repeatable: true, commands: ['summarize'], help: 'A document template (file, or folder ending in /) whose sentences are never picked; repeat for several. Without it, the conventional pull-request and issue template locations are read when present.' },
+    cli: { flag: 'template', placeholder: 'FILE', repeatable: true, commands: ['summarize', 'digest'], help: 'A document template (file, or folder ending in /) whose sentences are never picked; repeat for several. Without it, the conventional pull-request and issue template locations are read when present.' },
   }),
 } as const;
 
