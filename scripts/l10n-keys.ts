@@ -1,13 +1,14 @@
 /**
  * Every English string the extension sends through `vscode.l10n.t`: the literals in
- * src/extension, the panel's labels, the stage names, the feature words and the method
+ * src/extension, the panel's labels, the stage names, the feature words and labels and the method
  * descriptions. test/unit/extension-l10n.test.ts checks each translation bundle holds them all.
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { METHOD_INFO } from '../src/core/index';
+import { MAXENT_FEATURES } from '../src/core/rank/trained/maxent-features';
 import { SUMMARY_STAGES } from '../src/extension/messages';
 import { PANEL_TEXT } from '../src/extension/panel-text';
-import { FEATURE_WORDS } from '../src/extension/why-text';
+import { FEATURE_LABELS, FEATURE_WORDS } from '../src/extension/why-text';
 
 const LITERAL = /\bt\(\s*'((?:[^'\\]|\\.)*)'/g;
 
@@ -21,6 +22,9 @@ export function l10nKeys(): string[] {
   for (const value of Object.values(PANEL_TEXT)) keys.add(value);
   for (const stage of SUMMARY_STAGES) keys.add(stage.label);
   for (const value of Object.values(FEATURE_WORDS)) keys.add(value);
+  for (const value of Object.values(FEATURE_LABELS)) keys.add(value);
+  // The values of the trained models' discrete features (the naive Bayes features are among them).
+  for (const feature of MAXENT_FEATURES) if (feature.arity > 1) for (const value of feature.values) keys.add(value);
   for (const method of METHOD_INFO) {
     keys.add(method.label);
     keys.add(method.detail);

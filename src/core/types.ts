@@ -135,10 +135,18 @@ export type RankerName =
   | 'blend';
 
 /** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
+/** Per discrete feature: each sentence's value (an index into `labels[feature]`) and what each value means. */
+export interface FeatureValues {
+  readonly bins: Readonly<Record<string, ArrayLike<number>>>;
+  readonly labels: Readonly<Record<string, readonly string[]>>;
+}
+
 export interface RankResult {
   readonly scores: Float64Array;
   /** Optional per-feature values (same length as scores) that explain the score. */
   readonly features?: Readonly<Record<string, Float64Array>>;
+  /** Discrete features of a trained model: which value each sentence has, to say what a contribution is for. */
+  readonly featureValues?: FeatureValues;
   /** Iterative rankers report whether they converged. */
   readonly converged?: boolean;
   readonly iterations?: number;
@@ -202,6 +210,8 @@ export interface PickedSentence {
   readonly rank: number;
   /** Named feature values behind the score (for "why this sentence"). */
   readonly features: Readonly<Record<string, number>>;
+  /** For a trained model's discrete features, the sentence's value in words ("13-25" for length). */
+  readonly featureValues?: Readonly<Record<string, string>>;
   /** Set when the displayed text was edited by a repair (e.g. a leading connective removed). */
   readonly edited?: { readonly reason: string };
 }

@@ -25,6 +25,58 @@ export const FEATURE_WORDS: Readonly<Record<string, string>> = {
   edmundson: 'carries signal phrases, title or heading words',
 };
 
+/**
+ * What each number behind a pick measures, for "Show the numbers": every feature any method
+ * reports (the method's published name stays in the method line above them).
+ */
+export const FEATURE_LABELS: Readonly<Record<string, string>> = {
+  length: 'sentence length',
+  cue: 'cue phrase',
+  paragraphPosition: 'place in its paragraph',
+  documentZone: 'place in the document (paragraphs)',
+  sectionPosition: 'place in its section',
+  thematic: 'thematic words',
+  properNoun: 'capitalised words inside it',
+  headingPrior: 'how summary-worthy its heading is',
+  blockKind: 'kind of block (paragraph, list, quote, table)',
+  sectionDepth: 'heading level',
+  titleOverlap: 'title words',
+  ending: 'how it ends (full stop, colon, question mark)',
+  centroidRank: 'rank by the centroid method',
+  lexrankRank: 'rank by LexRank',
+  sectionClass: 'kind of section (from its heading)',
+  intentCue: 'says what is proposed',
+  headingOverlap: 'words of its heading',
+  titleShare: 'share of its words from the title',
+  documentShare: 'place in the document (sentences)',
+  firstContentSection: 'first section with content',
+  placeholder: 'placeholder answer (None, N/A, TBD…)',
+  linkOnly: 'only a link or a pointer',
+  fragment: 'fragment (few words)',
+  textrankRank: 'rank by TextRank',
+  luhnRank: 'rank by Luhn’s method',
+  edmundsonRank: 'rank by Edmundson’s method',
+  lexrankScore: 'LexRank score',
+  centroidScore: 'centroid score',
+  textrankScore: 'TextRank score',
+  bayesScore: 'naive Bayes score',
+  bayes: 'naive Bayes model',
+  lexrank: 'LexRank centrality',
+  centroid: 'closeness to the centroid',
+  paragraphStart: 'opens a paragraph',
+  paragraphEnd: 'closes a paragraph',
+  sectionStart: 'opens a section',
+  sectionEnd: 'closes a section',
+  documentLead: 'in the document’s opening',
+  luhn: 'Luhn significance',
+  significantWords: 'significant words',
+  key: 'key words (Edmundson)',
+  title: 'title and heading words (Edmundson)',
+  location: 'location (Edmundson)',
+  links: 'similar sentences linked',
+  textrank: 'TextRank score',
+};
+
 function terms(text: string): Set<string> {
   return new Set(wordTokens(text).filter((w) => w.length >= MIN_TERM_LENGTH && !COMMON.has(w)));
 }
@@ -56,9 +108,10 @@ export function whyInWords(pick: PickedSentence, summary: Summary, wording: Word
     .map(([name]) => wording.t(FEATURE_WORDS[name]!));
   parts.push(...strong);
   parts.push(wording.t('ranked {0} of {1} sentences', ordinal(wording, pick.rank), wording.count(summary.stats.sentencesIn)));
-  const text = parts.join('; ');
-  return text.charAt(0).toUpperCase() + text.slice(1) + '.';
+  return capitalized(parts.join('; ')) + '.';
 }
+
+const capitalized = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
 function formatNumber(value: number): string {
   if (!Number.isFinite(value)) return String(value);
@@ -72,7 +125,12 @@ export function whyNumbers(pick: PickedSentence, summary: Summary, wording: Word
   const meaning = METHOD_INFO.find((m) => m.name === summary.method)?.numbers;
   if (meaning) lines.push(wording.t(meaning));
   for (const [name, value] of Object.entries(pick.features).filter(([, v]) => Number.isFinite(v)).sort((a, b) => Math.abs(b[1]) - Math.abs(a[1]))) {
-    lines.push(`${name}: ${formatNumber(value)}`);
+    const label = FEATURE_LABELS[name];
+    // A name without a label (none today; extension-panel.test.ts tries every method) is shown as it is.
+    const shown = label ? capitalized(wording.t(label)) : name;
+    // A trained model's discrete feature: the sentence's value, since the number is that value's weight.
+    const of = pick.featureValues?.[name];
+    lines.push(of === undefined ? `${shown}: ${formatNumber(value)}` : `${shown} — ${wording.t(of)}: ${formatNumber(value)}`);
   }
   return lines;
 }

@@ -3,7 +3,8 @@ import { readFileSync } from 'node:fs';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Heading, List, Paragraph, RootContent } from 'mdast';
 import { buildPanelSummary, previousPicksFor, UNTITLED_SECTION } from '../../src/extension/panel-model';
-import { applyRepair, countWords } from '../../src/core/index';
+import { applyRepair, countWords, METHOD_INFO, summarize } from '../../src/core/index';
+import { FEATURE_LABELS, whyNumbers } from '../../src/extension/why-text';
 import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
 import { convergenceOf, describePick } from '../../src/extension/hover-text';
 import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';
@@ -79,8 +80,30 @@ describe('extension panel model', () => {
     const first = panel.groups[0]!.sentences[0]!;
     assert.match(first.why, /^Opening sentence of “Night Ferry Timetable”; shares the key terms “ferry” with the title; ranked 1st of 6 sentences\.$/);
     assert.match(first.whyNumbers[0]!, /^rank 1 of 6, score 1\.000 \(blend\)$/);
-    assert.ok(first.whyNumbers.some((line) => line.startsWith('position: ')));
+    assert.ok(first.whyNumbers.some((line) => line.startsWith('position: ')), 'a feature name without a label is shown as it is');
     assert.equal(first.whyNumbers[1], 'Each line below: a score or count the method works from (higher counts more).', 'the numbers say what they are');
+  });
+
+  it('names every number of every method in words (no raw feature identifiers)', () => {
+    const demo = readFileSync(new URL('../../media/demo/bike-share-rebalancing.md', import.meta.url), 'utf8');
+    const wording = wordingFor('en');
+    for (const method of METHOD_INFO) {
+      const summary = summarize(demo, { method: method.name });
+      const pick = summary.sentences.find((p) => p.rank > 0)!;
+      const names = Object.keys(pick.features);
+      assert.ok(names.length > 0, method.name);
+      for (const name of names) assert.ok(FEATURE_LABELS[name], `${method.name}: no label for ${name}`);
+      const lines = whyNumbers(pick, summary, wording).slice(2);
+      assert.equal(lines.length, names.filter((n) => Number.isFinite(pick.features[n])).length, method.name);
+      for (const line of lines) {
+        assert.match(line, /^[A-Z][^:]*: -?\d/u, `${method.name}: ${line}`);
+        assert.doesNotMatch(line.split(':')[0]!, /\b[a-z]+[A-Z]\w*/u, `${method.name}: no camelCase identifier in ${line}`);
+      }
+    }
+    const maxent = whyNumbers(summarize(demo, { method: 'maxent' }).sentences[0]!, summarize(demo, { method: 'maxent' }), wording);
+    // A discrete feature's number is the weight of the sentence's value, so the value is named.
+    assert.ok(maxent.some((line) => /^Placeholder answer \(None, N\/A, TBD…\) — no: -?\d/u.test(line)), maxent.join(' | '));
+    assert.ok(maxent.some((line) => /^Sentence length — (?:1-5 words|6-12|13-25|26-40|over 40): -?\d/u.test(line)), maxent.join(' | '));
   });
 
   it('labels text before the first heading and puts a refusal first among the notices', () => {

@@ -13,6 +13,7 @@ import type {
   LeftOutReason,
   SectionLeftOut,
   PickedSentence,
+  FeatureValues,
   RankResult,
   SectionShare,
   StandAloneWarning,
@@ -62,6 +63,7 @@ export function describeSummary(input: ReportInput): Summary {
       score: ranked.scores[i] ?? 0,
       rank: ranks[i] ?? 0,
       features: featuresOf(ranked, i),
+      ...(ranked.featureValues ? { featureValues: valuesOf(ranked.featureValues, i) } : {}),
       ...(editedText !== undefined ? { edited: { reason: 'leading connective removed' } } : {}),
     };
   });
@@ -164,6 +166,15 @@ function rankOrder(scores: Float64Array, unitOf: Int32Array): Int32Array {
     ranks[sentence] = k + 1;
   });
   return ranks;
+}
+
+function valuesOf(values: FeatureValues, i: number): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [name, bins] of Object.entries(values.bins)) {
+    const label = values.labels[name]?.[bins[i]!];
+    if (label !== undefined) out[name] = label;
+  }
+  return out;
 }
 
 function featuresOf(ranked: RankResult, i: number): Record<string, number> {

@@ -27,7 +27,7 @@ import { firstContentSection, intentCue, isLinkOnly, isPlaceholder } from './sen
 const SECTION_CLASSES: readonly HeadingClass[] = ['abstract', 'introduction', 'proposal', 'detail', 'discussion', 'aside', 'backMatter'];
 
 const EXTRA_FEATURES = [
-  { name: 'sectionClass', arity: 8, values: ['no known heading', ...SECTION_CLASSES] },
+  { name: 'sectionClass', arity: 8, values: ['no known heading', ...SECTION_CLASSES.map((c) => (c === 'backMatter' ? 'back matter' : c))] },
   { name: 'intentCue', arity: 3, values: ['none', 'in the first words', 'later in the sentence'] },
   { name: 'headingOverlap', arity: 3, values: ['0 terms of its heading', '1', '2 or more'] },
   { name: 'titleShare', arity: 4, values: ['no title terms', 'under a quarter of its terms', 'a quarter to a half', 'over a half'] },

@@ -88,12 +88,15 @@ export function defaultMaxentModel(): MaxentModel {
   return cachedDefault;
 }
 
+const MAXENT_VALUE_LABELS: Readonly<Record<string, readonly string[]>> = Object.fromEntries(MAXENT_FEATURES.map((f) => [f.name, f.values]));
+
 /** Ranks by the model's log-odds; `features` holds each feature's contribution (its weight for the sentence's value). */
 export function rankMaxent(a: AnalyzedDocument, model: MaxentModel = defaultMaxentModel(), matrix?: MaxentFeatureMatrix): RankResult {
   const n = a.doc.sentences.length;
   const values = matrix ?? maxentFeatures(a);
   const scores = new Float64Array(n).fill(model.bias);
   const features: Record<string, Float64Array> = {};
+  const bins: Record<string, ArrayLike<number>> = {};
   for (const [name, table] of Object.entries(model.weights)) {
     const column = values[name];
     if (!column) continue;
@@ -104,8 +107,9 @@ export function rankMaxent(a: AnalyzedDocument, model: MaxentModel = defaultMaxe
       scores[i]! += contribution[i]!;
     }
     features[name] = contribution;
+    if (!continuous) bins[name] = column;
   }
-  return { scores, features };
+  return { scores, features, featureValues: { bins, labels: MAXENT_VALUE_LABELS } };
 }
 
 /** Every feature value of a model with its weight, for people reading what was learned. */

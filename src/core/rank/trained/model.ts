@@ -157,11 +157,14 @@ function modelCounts(model: BayesModel): NaiveBayesCounts {
   return { positive: model.classes.positive, negative: model.classes.negative, features: model.features };
 }
 
+const VALUE_LABELS: Readonly<Record<string, readonly string[]>> = Object.fromEntries(FEATURES.map((f) => [f.name, f.values]));
+
 /** Ranks by the model's log-odds; `features` holds each feature's contribution. */
 export function rankBayes(a: AnalyzedDocument, model: BayesModel = defaultModel(), matrix?: FeatureMatrix): RankResult {
   const n = a.doc.sentences.length;
-  const { scores, contributions } = scoreNaiveBayes(modelCounts(model), model.smoothing, matrix ?? sentenceFeatures(a), n);
-  return { scores, features: contributions };
+  const values = matrix ?? sentenceFeatures(a);
+  const { scores, contributions } = scoreNaiveBayes(modelCounts(model), model.smoothing, values, n);
+  return { scores, features: contributions, featureValues: { bins: values, labels: VALUE_LABELS } };
 }
 
 /** Every feature value of a model with its log-odds contribution, for people reading what was learned. */
