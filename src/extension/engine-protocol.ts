@@ -19,7 +19,16 @@ export interface EngineModel {
 }
 
 export type EngineTask =
-  | { readonly kind: 'summarize'; readonly text: string; readonly options: Omit<EngineRequestOptions, 'model'> }
+  | {
+      readonly kind: 'summarize';
+      readonly text: string;
+      readonly options: Omit<EngineRequestOptions, 'model'>;
+      /**
+       * Names the document and scope: the host keeps what it read of the last text under this name
+       * and, for the next one, reads again only the pieces an edit touched (core/session.ts).
+       */
+      readonly session?: string;
+    }
   | { readonly kind: 'checkAbstract'; readonly text: string; readonly options: Omit<CheckAbstractRequest, 'thresholds' | 'model'> }
   /** The document's headings in order (the abstract check's picker): read in the host, so the extension bundle carries no parser. */
   | { readonly kind: 'headings'; readonly text: string; readonly format: DocumentFormat }
@@ -53,6 +62,8 @@ export type EngineResult =
       /** Set when the model was rejected and the built-in model was used instead. */
       readonly modelProblem?: string;
       readonly elapsedMs: number;
+      /** For a job with a session: how much of the text was read again (for the log). */
+      readonly reading?: { readonly read: 'unchanged' | 'pieces' | 'whole'; readonly pieces: number; readonly piecesRead: number };
     }
   | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
   | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number }

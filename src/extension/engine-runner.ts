@@ -6,8 +6,8 @@
  */
 import { checkAbstract } from '../core/index';
 import { loadModel } from '../core/index';
-import { parseDocument, startDigest, summarize } from '../core/index';
-import type { FromEngine, ToEngine } from './engine-protocol';
+import { createSummarySession, parseDocument, startDigest, summarize, type SummarySession } from '../core/index';
+import type { EngineStage, FromEngine, ToEngine } from './engine-protocol';
 
 interface CachedModel {
   readonly key: string;
@@ -15,9 +15,26 @@ interface CachedModel {
   readonly problem?: string;
 }
 
+/**
+ * Sessions kept, the most recently used first: each holds one text and its parsed pieces (a few
+ * times the text's size), so a handful of open documents re-read only what an edit touched.
+ */
+export const ENGINE_SESSIONS = 4;
+
 /** Returns the host's message handler; `post` sends a reply to the extension. */
 export function engineRunner(post: (message: FromEngine) => void): (message: ToEngine) => void {
   let cached: CachedModel | undefined;
+  const sessions = new Map<string, SummarySession>();
+  const sessionFor = (name: string): SummarySession => {
+    const session = sessions.get(name) ?? createSummarySession();
+    sessions.delete(name);
+    sessions.set(name, session);
+    for (const oldest of sessions.keys()) {
+      if (sessions.size <= ENGINE_SESSIONS) break;
+      sessions.delete(oldest);
+    }
+    return session;
+  };
 
   const modelFor = (key: string | undefined): { model?: unknown; problem?: string } => {
     if (key === undefined) return {};
@@ -41,14 +58,15 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
     try {
       if (task.kind === 'summarize') {
         const { model, problem } = modelFor(message.modelKey);
-        const summary = summarize(task.text, {
-          ...task.options,
-          ...(model !== undefined ? { model } : {}),
-          onStage: (stage) => post({ type: 'stage', id, stage }),
-        });
+        const request = { ...task.options, ...(model !== undefined ? { model } : {}), onStage: (stage: EngineStage) => post({ type: 'stage', id, stage }) };
+        const session = task.session === undefined ? undefined : sessionFor(task.session);
+        // A session gives the same summary as summarize() (test/unit/session.test.ts), reading less.
+        const summary = session ? session.summarize(task.text, request) : summarize(task.text, request);
+        const update = session?.lastUpdate;
+        const reading = update ? { read: update.read, pieces: update.pieces, piecesRead: update.piecesRead } : undefined;
         // The extension has the text already; sending it back would only double the copy.
         const slim = { ...summary, document: { ...summary.document, text: '' } };
-        post({ type: 'done', id, result: { kind: 'summarize', summary: slim, elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}) } });
+        post({ type: 'done', id, result: { kind: 'summarize', summary: slim, elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}), ...(reading ? { reading } : {}) } });
       } else if (task.kind === 'headings') {
         const headings = parseDocument(task.text, { format: task.format })
           .sections.filter((s) => s.heading.length > 0)

@@ -86,13 +86,14 @@ export class Summarizer {
     };
     let summary: Summary;
     try {
-      const result = await engine.run({ kind: 'summarize', text, options: { ...toEngineOptions(settings, format, baseOffset), focus: this.context.focus.current, ...(templates.length > 0 ? { templates } : {}), ...(previous ? { previous } : {}) } }, { onStage });
+      const result = await engine.run({ kind: 'summarize', text, session: `${key}#${scope}`, options: { ...toEngineOptions(settings, format, baseOffset), focus: this.context.focus.current, ...(templates.length > 0 ? { templates } : {}), ...(previous ? { previous } : {}) } }, { onStage });
       if (result.kind !== 'summarize') return { kind: 'failed' };
       summary = result.summary;
       if (result.modelProblem) models.reportProblem(settings.host.modelFile, result.modelProblem);
       const waited = begun === undefined ? '' : `; the engine host began after ${(begun - requested).toFixed(0)} ms`;
+      const read = result.reading ? `; read ${result.reading.read === 'pieces' ? `${result.reading.piecesRead} of ${result.reading.pieces} pieces` : result.reading.read}` : '';
       log.info(
-        `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}.`,
+        `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}${read}.`,
       );
     } catch (error) {
       if (error instanceof CancelledError) return { kind: 'cancelled' };

@@ -14,7 +14,7 @@ import { summarize } from '../../src/core/summarize';
 import { nodeWorkerHost } from '../../src/extension/engine-host-node';
 import { BlobScript, webWorkerHost, type DomWorker } from '../../src/extension/engine-host-web';
 import type { EngineResult, EngineStage, FromEngine, ToEngine } from '../../src/extension/engine-protocol';
-import { engineRunner } from '../../src/extension/engine-runner';
+import { ENGINE_SESSIONS, engineRunner } from '../../src/extension/engine-runner';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
 import { CancelledError, EngineClient } from '../../src/extension/worker-client';
 
@@ -116,6 +116,33 @@ describe('engine hosts', function () {
       assert.ok(done.type === 'done' && done.result.kind === 'summarize');
       assert.equal(done.result.summary.document.text, '');
       assert.equal(spans(done.result), expected);
+    });
+
+    it('keeps a session per document: after an edit it reads only the touched pieces, and the summary is the one summarize() gives', () => {
+      const edited = DEMO.replace('## Risks\n', '## Risks\n\nA late paragraph says the depot crew can move forty bikes an hour when the vans are full.\n');
+      assert.notEqual(edited, DEMO);
+      const job = (id: number, text: string, session: string): ToEngine => ({ type: 'job', id, task: { kind: 'summarize', text, options: OPTIONS, session } });
+      const out = run([job(1, DEMO, 'demo#document'), job(2, edited, 'demo#document'), job(3, edited, 'demo#document'), job(4, edited, 'other#document')]).filter((m) => m.type === 'done');
+      const readings = out.map((m) => (m.type === 'done' && m.result.kind === 'summarize' ? m.result.reading : undefined));
+      assert.equal(readings[0]!.read, 'whole');
+      assert.equal(readings[1]!.read, 'pieces');
+      assert.ok(readings[1]!.piecesRead < readings[1]!.pieces, JSON.stringify(readings[1]));
+      assert.equal(readings[2]!.read, 'unchanged');
+      assert.equal(readings[3]!.read, 'whole', 'another document has its own session');
+      const editedSpans = JSON.stringify(summarize(edited, OPTIONS).sentences.map((p) => p.span));
+      assert.equal(spans((out[0] as Extract<FromEngine, { type: 'done' }>).result), expected);
+      for (const message of out.slice(1)) assert.ok(message.type === 'done' && spans(message.result) === editedSpans);
+    });
+
+    it('keeps at most ENGINE_SESSIONS sessions, forgetting the least recently used', () => {
+      const job = (id: number, session: string): ToEngine => ({ type: 'job', id, task: { kind: 'summarize', text: DEMO, options: OPTIONS, session } });
+      const names = Array.from({ length: ENGINE_SESSIONS + 1 }, (_, k) => `doc${k}`);
+      // doc0 is used again before the others fill the cache, so doc1 is the one forgotten.
+      const order = ['doc0', 'doc1', 'doc0', ...names.slice(2), 'doc0', 'doc1'];
+      const out = run(order.map((name, id) => job(id, name))).filter((m) => m.type === 'done');
+      const read = out.map((m) => (m.type === 'done' && m.result.kind === 'summarize' ? m.result.reading?.read : undefined));
+      assert.equal(read.at(-2), 'unchanged', 'the most recently used is kept');
+      assert.equal(read.at(-1), 'whole', 'the least recently used was forgotten');
     });
 
     it('keeps the model it was sent and uses it for every job that names its key', () => {
