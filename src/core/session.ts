@@ -9,7 +9,8 @@
  * offset or a reading option changed; the edit changed the set of link or footnote labels the
  * document defines; or the format is not Markdown (other readers are not piece-wise yet).
  * Document-wide figures (term statistics, the similarity graph, ranking and selection) are
- * computed from the cached sentence analyses on every call.
+ * computed from the cached sentence analyses on every call, except that the same text under the
+ * same request gets the previous summary back.
  */
 import { assemblePieces } from './formats/markdown/assemble-pieces';
 import type { MarkdownOptions } from './formats/markdown/markdown-walker';
@@ -33,6 +34,8 @@ export interface SessionUpdate {
   readonly piecesRead: number;
   /** Sentences whose words and terms were computed in this call (the rest came from the cache). */
   readonly sentencesAnalyzed: number;
+  /** Set when summarize() returned the previous summary: the same text under the same request. */
+  readonly reused?: true;
 }
 
 export interface SummarySession {
@@ -67,19 +70,35 @@ interface Cached {
   readonly starts: readonly number[];
 }
 
+/** A request as a key: everything but the stage callback; the model is compared by identity. */
+function requestKey(request: SummarizeRequest): string {
+  return JSON.stringify(request, (key, value: unknown) => (key === 'onStage' || key === 'model' ? undefined : value));
+}
+
 class Session implements SummarySession {
   private cached: Cached | null = null;
+  /** The last summary, returned again for the same text and request (the engine is deterministic). */
+  private last: { readonly text: string; readonly key: string; readonly model: unknown; readonly summary: Summary } | null = null;
   private detected: { readonly sample: string; readonly language: string } | null = null;
   private readonly analyses = new WeakMap<MarkdownPiece, PieceAnalysis>();
   lastUpdate: SessionUpdate | null = null;
 
   clear(): void {
     this.cached = null;
+    this.last = null;
   }
 
   summarize(text: string, request: SummarizeRequest = {}): Summary {
+    const key = requestKey(request);
+    const last = this.last;
+    if (last && last.text === text && last.key === key && last.model === request.model) {
+      this.lastUpdate = { read: 'unchanged', pieces: this.cached?.pieces.length ?? 1, piecesRead: 0, sentencesAnalyzed: 0, reused: true };
+      return last.summary;
+    }
     const preparation = this.prepare(text, request);
-    return preparation.ok ? summarizePrepared(preparation.prepared, request) : preparation.refused;
+    const summary = preparation.ok ? summarizePrepared(preparation.prepared, request) : preparation.refused;
+    this.last = { text, key, model: request.model, summary };
+    return summary;
   }
 
   prepare(text: string, request: SummarizeRequest = {}): Preparation {

@@ -63,7 +63,7 @@ export type EngineResult =
       readonly modelProblem?: string;
       readonly elapsedMs: number;
       /** For a job with a session: how much of the text was read again (for the log). */
-      readonly reading?: { readonly read: 'unchanged' | 'pieces' | 'whole'; readonly pieces: number; readonly piecesRead: number };
+      readonly reading?: { readonly read: 'unchanged' | 'pieces' | 'whole'; readonly pieces: number; readonly piecesRead: number; readonly reused?: true };
     }
   | { readonly kind: 'checkAbstract'; readonly report: AbstractReport; readonly elapsedMs: number }
   | { readonly kind: 'headings'; readonly headings: readonly EngineHeading[]; readonly elapsedMs: number }

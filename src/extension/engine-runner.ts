@@ -63,7 +63,7 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
         // A session gives the same summary as summarize() (test/unit/session.test.ts), reading less.
         const summary = session ? session.summarize(task.text, request) : summarize(task.text, request);
         const update = session?.lastUpdate;
-        const reading = update ? { read: update.read, pieces: update.pieces, piecesRead: update.piecesRead } : undefined;
+        const reading = update ? { read: update.read, pieces: update.pieces, piecesRead: update.piecesRead, ...(update.reused ? { reused: true as const } : {}) } : undefined;
         // The extension has the text already; sending it back would only double the copy.
         const slim = { ...summary, document: { ...summary.document, text: '' } };
         post({ type: 'done', id, result: { kind: 'summarize', summary: slim, elapsedMs: performance.now() - started, ...(problem ? { modelProblem: problem } : {}), ...(reading ? { reading } : {}) } });

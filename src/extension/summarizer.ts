@@ -91,7 +91,8 @@ export class Summarizer {
       summary = result.summary;
       if (result.modelProblem) models.reportProblem(settings.host.modelFile, result.modelProblem);
       const waited = begun === undefined ? '' : `; the engine host began after ${(begun - requested).toFixed(0)} ms`;
-      const read = result.reading ? `; read ${result.reading.read === 'pieces' ? `${result.reading.piecesRead} of ${result.reading.pieces} pieces` : result.reading.read}` : '';
+      const reading = result.reading;
+      const read = !reading ? '' : reading.reused ? '; read unchanged, summary reused' : `; read ${reading.read === 'pieces' ? `${reading.piecesRead} of ${reading.pieces} pieces` : reading.read}`;
       log.info(
         `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}${read}.`,
       );

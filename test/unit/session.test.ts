@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
-import { createSummarySession, prepareDocument, summarize, type Preparation, type SummarizeRequest } from '../../src/core/index';
+import { createSummarySession, loadModel, prepareDocument, summarize, type Preparation, type SummarizeRequest } from '../../src/core/index';
 import { corpusFiles } from './helpers/corpus';
 import { markdownDocument, propertyRuns } from './helpers/arbitraries';
 
@@ -127,6 +127,33 @@ describe('summary sessions (incremental re-summary)', () => {
     assert.equal(session.lastUpdate?.piecesRead, 1);
     // A refused text is refused the same way.
     assert.deepEqual(session.summarize('x'.repeat(2000), { maxChars: 1000 }), summarize('x'.repeat(2000), { maxChars: 1000 }));
+  });
+
+  it('gives the previous summary back for the same text and request, and summarizes again when either changes', () => {
+    const session = createSummarySession();
+    const first = session.summarize(DOCUMENT, { budget: '3s' });
+    assert.equal(session.lastUpdate?.reused, undefined);
+    const stages: string[] = [];
+    assert.equal(session.summarize(DOCUMENT, { budget: '3s', onStage: (s) => stages.push(s) }), first, 'the same object: nothing recomputed');
+    assert.equal(session.lastUpdate?.reused, true);
+    assert.deepEqual(first, summarize(DOCUMENT, { budget: '3s' }));
+    const longer = session.summarize(DOCUMENT, { budget: '4s' });
+    assert.equal(session.lastUpdate?.reused, undefined);
+    assert.deepEqual(longer, summarize(DOCUMENT, { budget: '4s' }));
+    assert.notDeepEqual(longer.sentences.length, first.sentences.length);
+    // The model is compared by identity: the same object again is reused, another one is not.
+    const json: unknown = JSON.parse(readFileSync(new URL('../../media/models/maxent-model.json', import.meta.url), 'utf8'));
+    const [a, b] = [loadModel(json), loadModel(json)];
+    assert.ok(a.ok && b.ok);
+    session.summarize(DOCUMENT, { budget: '4s', model: a.model });
+    assert.equal(session.lastUpdate?.reused, undefined);
+    session.summarize(DOCUMENT, { budget: '4s', model: a.model });
+    assert.equal(session.lastUpdate?.reused, true);
+    session.summarize(DOCUMENT, { budget: '4s', model: b.model });
+    assert.equal(session.lastUpdate?.reused, undefined);
+    session.clear();
+    session.summarize(DOCUMENT, { budget: '4s' });
+    assert.equal(session.lastUpdate?.reused, undefined, 'clear() forgets the summary too');
   });
 
   it('equals reading from scratch after random edits of generated Markdown (property)', () => {
