@@ -1,4 +1,5 @@
 /** Entry point of the `tersely` binary. */
+import { serveAsReaderThread } from './digest-threads';
 import { main } from './main';
 
 // `tersely summarize … | head -1`: the reader closed the pipe on purpose; stop quietly, as other
@@ -10,12 +11,17 @@ for (const stream of [process.stdout, process.stderr]) {
   });
 }
 
-main(process.argv.slice(2)).then(
-  (code) => {
-    process.exitCode = code;
-  },
-  (error: unknown) => {
-    process.stderr.write(`tersely: internal error: ${error instanceof Error ? error.message : String(error)}\n`);
-    process.exitCode = 70;
-  },
-);
+// A digest's reader threads run this same bundle.
+if (!serveAsReaderThread()) runMain();
+
+function runMain(): void {
+  main(process.argv.slice(2)).then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (error: unknown) => {
+      process.stderr.write(`tersely: internal error: ${error instanceof Error ? error.message : String(error)}\n`);
+      process.exitCode = 70;
+    },
+  );
+}

@@ -1,15 +1,16 @@
 /**
- * `tersely digest FILE|DIR...`: one digest of several documents. Files are read one at a time and
- * handed to the engine's digest builder, which keeps only each document's best sentences, so
- * memory stays bounded; a progress line per document goes to standard error (unless --quiet).
+ * `tersely digest FILE|DIR...`: one digest of several documents. Files are read (on several
+ * threads from a handful of files on, digest-threads.ts) and handed in file order to the engine's
+ * digest builder, which keeps only each document's best sentences, so memory stays bounded; a
+ * progress line per document goes to standard error (unless --quiet).
  */
 import { readdir, stat } from 'node:fs/promises';
 import { join } from 'node:path';
-import { formatForFileName, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
+import { digestReader, formatForFileName, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
+import { jobsFor, readOnThreads, readOne, type ReaderSetup, type ReadOutcome } from './digest-threads';
 import { choiceFlag, UsageError } from './args';
 import { engineRequest } from './engine-request';
 import { parseFlags } from './option-flags';
-import { InputError, readInput } from './read-input';
 import { digestToJson, digestToMarkdown, renderDigestText } from './render-digest';
 import { styleFor } from './style';
 import { forcedFormat } from './summarize-command';
@@ -54,6 +55,7 @@ export async function runDigest(args: string[]): Promise<number> {
     'input-format': { type: 'string' },
     'plain-text': { type: 'boolean' },
     quiet: { type: 'boolean' },
+    jobs: { type: 'string' },
   });
   if (positionals.length === 0) throw new UsageError('digest needs at least one FILE or folder');
   if (positionals.includes('-')) throw new UsageError('digest reads files and folders, not standard input');
@@ -65,22 +67,30 @@ export async function runDigest(args: string[]): Promise<number> {
 
   const files = await expandPaths(positionals);
   if (files.length === 0) throw new UsageError('no Markdown, reStructuredText or text files found in the folders given');
-  const builder = startDigest((await engineRequest(options)) as DigestRequest);
+  const request = (await engineRequest(options)) as DigestRequest;
+  const builder = startDigest(request);
+  const setup: ReaderSetup = { options, inputFormat, maxChars };
+  const jobs = jobsFor(extra.jobs, files.length);
   let failures = 0;
-  for (const [k, path] of files.entries()) {
-    const counter = `[${k + 1}/${files.length}]`;
-    try {
-      const input = await readInput(path, 'markdown', maxChars);
-      const progress = builder.add(input.name, input.text, inputFormat ?? input.format);
-      if (progress.refused) {
-        failures++;
-        warn(`tersely: ${counter} ${path}: ${progress.refused}`);
-      } else if (!quiet) warn(`tersely: ${counter} ${path}: ${progress.kept} sentence${progress.kept === 1 ? '' : 's'} kept`);
-    } catch (error) {
-      if (!(error instanceof InputError)) throw error;
+  const onRead = (outcome: ReadOutcome): void => {
+    const path = files[outcome.index]!;
+    const counter = `[${outcome.index + 1}/${files.length}]`;
+    if (!outcome.ok) {
+      if (!outcome.input) throw new Error(outcome.message);
       failures++;
-      warn(`tersely: ${counter} ${path}: ${error.message}`);
+      warn(`tersely: ${counter} ${path}: ${outcome.message}`);
+      return;
     }
+    const progress = builder.addRead(outcome.read);
+    if (progress.refused) {
+      failures++;
+      warn(`tersely: ${counter} ${path}: ${progress.refused}`);
+    } else if (!quiet) warn(`tersely: ${counter} ${path}: ${progress.kept} sentence${progress.kept === 1 ? '' : 's'} kept`);
+  };
+  if (jobs > 1) await readOnThreads(files, setup, jobs, onRead);
+  else {
+    const read = digestReader(request);
+    for (const [k, path] of files.entries()) onRead(await readOne(read, setup, k, path));
   }
   const digest: Digest = builder.finish();
   if (output === 'json') process.stdout.write(terminalSafeJson(digestToJson(digest)) + '\n');

@@ -1,6 +1,7 @@
 /** `tersely --help`: the schema options of each command (option-flags.ts) and its own flags. */
 import { FORMATS, METHODS } from '../core/index';
 import { helpLine, optionHelp } from './option-flags';
+import { THREADS_FROM_FILES } from './digest-threads';
 import { JSON_OFFSETS } from './render-summary';
 
 const inputFormats = FORMATS.map((f) => f.id).join(', ');
@@ -52,6 +53,7 @@ export function helpText(): string {
     helpLine('--input-format FORMAT', `read every input as ${inputFormats} (default: by file extension)`),
     helpLine('--format FORMAT', 'output: text (default), markdown, or json (one object, a file per sentence)'),
     helpLine('--quiet', 'no progress lines on standard error'),
+    helpLine('--jobs N', `read the files on N threads (default: one per core, at most 4, from ${THREADS_FROM_FILES} files on); the digest is the same`),
     ...paragraph(
       'Folders are read recursively for Markdown, reStructuredText and text files (hidden entries and node_modules skipped). ' +
         'Without --length the digest has 2 sentences per document, at most 40; a percentage is of all the documents\u2019 words. ' +

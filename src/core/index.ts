@@ -78,7 +78,8 @@ export { extractKeyPhrases, KEYPHRASE_DEFAULTS } from './keyphrases/textrank-key
 export type { KeyPhraseSettings } from './keyphrases/textrank-keywords';
 
 // Digests of several documents.
-export { startDigest, digestDocuments, DIGEST_DEFAULTS } from './digest/digest';
+export { startDigest, digestDocuments, digestReader, DIGEST_DEFAULTS } from './digest/digest';
+export type { ReadForDigest, DigestReader } from './digest/digest';
 export type { Digest, DigestBuilder, DigestDocument, DigestOccurrence, DigestRequest, DigestSentence, DocumentProgress } from './digest/digest';
 export { CROSS_DOCUMENT_DEFAULTS, DIGEST_WEIGHTS } from './digest/cross-document';
 

@@ -67,6 +67,30 @@ describe('command line: digest', function () {
     assert.equal(model.stdout, '');
   });
 
+  it('reads on several threads with the same digest as one thread, progress in file order, a bad file reported', () => {
+    const many = join(dir, 'many');
+    mkdirSync(many);
+    const files: string[] = [];
+    for (let k = 0; k < 9; k++) {
+      const file = join(many, `note-${k}.md`);
+      writeFileSync(file, `# Harbour note ${k}\n\nThe ferry number ${k} leaves pier ${k + 2} at ${k + 6} in the evening. Its crew of ${k + 3} checks the ropes first.\n\nPassengers board from the ${k % 2 === 0 ? 'north' : 'south'} ramp.\n`);
+      files.push(file);
+    }
+    writeFileSync(join(many, 'note-4.md'), Buffer.from([0x23, 0x20, 0x00, 0xff, 0xfe, 0x00]));
+    const one = tersely(['digest', many, '--format', 'json', '--jobs', '1']);
+    const threads = tersely(['digest', many, '--format', 'json', '--jobs', '3']);
+    assert.equal(one.code, 1, one.stderr);
+    assert.equal(threads.code, 1, threads.stderr);
+    assert.equal(threads.stdout, one.stdout, 'the same digest');
+    assert.equal(threads.stderr, one.stderr, 'the same progress lines and the same complaint, in file order');
+    assert.match(threads.stderr, /\[5\/9\] .*note-4\.md: /);
+    const counters = [...threads.stderr.matchAll(/^tersely: \[(\d+)\/9\]/gm)].map((m) => Number(m[1]));
+    assert.deepEqual(counters, [1, 2, 3, 4, 5, 6, 7, 8, 9]);
+    const bad = tersely(['digest', many, '--jobs', '0']);
+    assert.equal(bad.code, 2);
+    assert.match(bad.stderr, /--jobs takes a whole number from 1 to 16/);
+  });
+
   it('keeps going after a missing file, says why, and exits 1; refuses standard input', () => {
     const run = tersely(['digest', a, join(dir, 'missing.md'), '--quiet']);
     assert.equal(run.code, 1);

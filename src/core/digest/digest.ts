@@ -87,11 +87,22 @@ export interface DocumentProgress {
 
 export interface DigestBuilder {
   add(file: string, text: string, format: DocumentFormat): DocumentProgress;
+  /**
+   * A document read by a `digestReader` made from the same request (on another thread, say), as
+   * the next document (whatever index it was read with: a file that could not be read leaves no gap).
+   */
+  addRead(read: ReadForDigest): DocumentProgress;
   finish(): Digest;
 }
 
-/** Starts a digest. Throws OptionsError on invalid options (checked once, before any document). */
-export function startDigest(request: DigestRequest = {}): DigestBuilder {
+/** One document as a digest keeps it (its best sentences and its weight); plain data. */
+export type ReadForDigest = CollectedDocument;
+
+/** Reads one document for a digest: `index` is its place among the digest's documents. */
+export type DigestReader = (index: number, file: string, text: string, format: DocumentFormat) => ReadForDigest;
+
+/** The request checked once: throws OptionsError on invalid options. */
+function checkDigestRequest(request: DigestRequest) {
   const { keepPerDocument = DIGEST_DEFAULTS.keepPerDocument, ...summaryRequest } = request;
   const { options, problems: checked } = checkOptions(summaryRequest);
   const problems = [...checked];
@@ -100,13 +111,29 @@ export function startDigest(request: DigestRequest = {}): DigestBuilder {
   }
   if (problems.length > 0) throw new OptionsError(problems);
   if (options.focus !== '') throw new OptionsError([{ key: 'focus', reason: 'is not supported by digests yet' }]);
+  return { options, summaryRequest, keepPerDocument };
+}
+
+/** What a builder's `add` does to read a document, for hosts that read documents on several threads. */
+export function digestReader(request: DigestRequest = {}): DigestReader {
+  const { summaryRequest, keepPerDocument } = checkDigestRequest(request);
+  return (index, file, text, format) => collectDocument(index, file, text, { ...summaryRequest, format }, keepPerDocument);
+}
+
+/** Starts a digest. Throws OptionsError on invalid options (checked once, before any document). */
+export function startDigest(request: DigestRequest = {}): DigestBuilder {
+  const { options } = checkDigestRequest(request);
+  const read = digestReader(request);
   const documents: CollectedDocument[] = [];
+  const addRead = (read: CollectedDocument, file: string): DocumentProgress => {
+    const index = documents.length;
+    const collected = read.kept.every((s) => s.document === index) ? read : { ...read, kept: read.kept.map((s) => ({ ...s, document: index })) };
+    documents.push(collected);
+    return { index, file, kept: collected.kept.length, ...(collected.refused ? { refused: collected.refused } : {}) };
+  };
   return {
-    add(file, text, format) {
-      const collected = collectDocument(documents.length, file, text, { ...summaryRequest, format }, keepPerDocument);
-      documents.push(collected);
-      return { index: documents.length - 1, file, kept: collected.kept.length, ...(collected.refused ? { refused: collected.refused } : {}) };
-    },
+    add: (file, text, format) => addRead(read(documents.length, file, text, format), file),
+    addRead: (collected) => addRead(collected, collected.name),
     finish() {
       return finishDigest(documents, request.budget === undefined ? null : options.budget, options);
     },
