@@ -15,6 +15,7 @@ import { LiveMode } from './live-mode';
 import type { PanelControls } from './messages';
 import { editorWording, localizedPanelText } from './localize';
 import { ModelFiles } from './model-file';
+import { TemplateLookups } from './template-files';
 import { FocusState } from './recent-focuses';
 import { handlePanelMessage } from './panel-actions';
 import { SummaryPanel } from './panel-provider';
@@ -44,6 +45,8 @@ export class TerselyContext implements vscode.Disposable {
   readonly abstractCheck: AbstractCheck;
   readonly digester: Digester;
   readonly focus: FocusState;
+  /** The team's templates, looked up once per folder and setting until one of their files changes. */
+  readonly templates: TemplateLookups;
   /** Every user-visible string goes through this (the editor's localization API). */
   readonly wording = editorWording();
 
@@ -55,6 +58,7 @@ export class TerselyContext implements vscode.Disposable {
     this.own(hosts);
     this.engine = this.ownEngine(hosts);
     this.models = new ModelFiles(this.log);
+    this.templates = this.own(new TemplateLookups());
     this.panel = this.own(new SummaryPanel(extension.extensionUri, (message) => void handlePanelMessage(this, message), this.log, () => this.engine.warm()));
     this.live = new LiveMode(this, extension.workspaceState);
     this.focus = new FocusState(extension.workspaceState);

@@ -17,7 +17,6 @@ import type { PanelDigest } from './messages';
 import { checkedSpan } from './ranges';
 import { formatFor, settingKeyOf } from './settings';
 import { isSummarizable } from './summaries';
-import { readTemplateFiles } from './template-files';
 import { CancelledError, type EngineClient } from './worker-client';
 
 interface Source {
@@ -196,7 +195,7 @@ export class Digester {
     const { summary, host } = settings.read();
     // The team's model and templates apply as they do to one document's summary.
     this.engine.useModel(await this.context.models.load(host.modelFile));
-    const { templates, problems } = await readTemplateFiles(host.templateFiles, sources[0]!.uri);
+    const { templates, problems } = await this.context.templates.read(host.templateFiles, sources[0]!.uri);
     for (const problem of problems) void vscode.window.showWarningMessage(t('Tersely: {0} (tersely.templateFiles)', problem));
     // The digest's own length (a few sentences per document) rather than the single-document length setting.
     const options: DigestRequest = { method: summary.method, language: summary.language, maxChars: summary.maxChars, ...(templates.length > 0 ? { templates } : {}) };

@@ -12,7 +12,6 @@ import { startProgress } from './progress';
 import { CONTEXT_KEYS } from './ids';
 import { checkedSpan } from './ranges';
 import { formatFor, settingKeyOf, toEngineOptions } from './settings';
-import { readTemplateFiles } from './template-files';
 import type { Scope, ShownSummary } from './summaries';
 import { CancelledError } from './worker-client';
 
@@ -34,8 +33,11 @@ export class Summarizer {
 
   /** Starts the engine host ahead of the first summary, then sends it the model the settings name. */
   async prepare(): Promise<void> {
-    const { engine, models, settings } = this.context;
+    const { engine, models, settings, templates } = this.context;
     engine.warm();
+    // The templates of the document on screen, looked up now so the first summary need not wait.
+    const document = vscode.window.activeTextEditor?.document;
+    if (document) void templates.read(settings.read().host.templateFiles, document.uri);
     engine.useModel(await models.load(settings.read().host.modelFile));
   }
 
@@ -70,7 +72,9 @@ export class Summarizer {
     const ticket = sequencer.issue(key, document.version);
     engine.useModel(await models.load(settings.host.modelFile));
     const format = formatFor(document.languageId, document.fileName);
-    const { templates, problems } = await readTemplateFiles(settings.host.templateFiles, document.uri);
+    const templatesStarted = performance.now();
+    const { templates, problems } = await this.context.templates.read(settings.host.templateFiles, document.uri);
+    const templatesMs = performance.now() - templatesStarted;
     for (const problem of problems) this.tellTemplateProblem(problem);
     this.templatesInUse = templates.length;
     // Live mode keeps the picks it showed unless a new sentence is clearly better (less churn while typing).
@@ -94,7 +98,7 @@ export class Summarizer {
       const reading = result.reading;
       const read = !reading ? '' : reading.reused ? '; read unchanged, summary reused' : `; read ${reading.read === 'pieces' ? `${reading.piecesRead} of ${reading.pieces} pieces` : reading.read}`;
       log.info(
-        `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}${read}.`,
+        `Summarized ${document.fileName} v${document.version} (${text.length} characters) in ${result.elapsedMs.toFixed(0)} ms in the engine, ${(performance.now() - requested).toFixed(0)} ms in all${waited}${read}; templates looked up in ${templatesMs.toFixed(0)} ms.`,
       );
     } catch (error) {
       if (error instanceof CancelledError) return { kind: 'cancelled' };

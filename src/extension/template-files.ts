@@ -42,8 +42,11 @@ export async function readTemplateFiles(entries: readonly string[], document: vs
   const templates: { text: string; format: DocumentFormat }[] = [];
   const problems: string[] = [];
   const decoder = new TextDecoder('utf-8', { fatal: true });
-  for (const entry of entries) {
-    for (const uri of await filesOf(entry, folder)) {
+  // All locations at once: in the browser editor each look-up is a round trip to the server, and
+  // the default names ten places that mostly do not exist.
+  const located = await Promise.all(entries.map((entry) => filesOf(entry, folder)));
+  for (const files of located) {
+    for (const uri of files) {
       const name = vscode.workspace.asRelativePath(uri, false);
       if (templates.length >= TEMPLATE_LIMITS.maxTemplates) {
         problems.push(`more than ${TEMPLATE_LIMITS.maxTemplates} templates: ${name} and later ones were not read`);
@@ -62,4 +65,41 @@ export async function readTemplateFiles(entries: readonly string[], document: vs
     }
   }
   return { templates, problems };
+}
+
+/**
+ * Template look-ups remembered per workspace folder and setting value until a file at one of the
+ * named places is created, changed or deleted (a file-system watcher says so). In the browser
+ * editor every look-up is a round trip to the server, and the default names ten places: without
+ * this, each summary waited for them. Absolute URIs in the setting are not watched, so a setting
+ * that names one is looked up every time.
+ */
+export class TemplateLookups implements vscode.Disposable {
+  private readonly remembered = new Map<string, { readonly read: Promise<TemplateRead>; readonly watcher: vscode.Disposable }>();
+
+  read(entries: readonly string[], document: vscode.Uri): Promise<TemplateRead> {
+    const folder = vscode.workspace.getWorkspaceFolder(document)?.uri;
+    if (!folder || entries.length === 0 || entries.some((entry) => /^[a-z][a-z0-9+.-]*:/i.test(entry))) return readTemplateFiles(entries, document);
+    const key = `${folder.toString()}\n${JSON.stringify(entries)}`;
+    const known = this.remembered.get(key);
+    if (known) return known.read;
+    // Each place as named, and the files in it when it is a folder.
+    const places = entries.map((entry) => entry.replace(/\/+$/, '')).flatMap((place) => [place, `${place}/*`]);
+    const watcher = vscode.workspace.createFileSystemWatcher(new vscode.RelativePattern(folder, `{${places.join(',')}}`));
+    const forget = () => this.forget(key);
+    const listeners = [watcher, watcher.onDidCreate(forget), watcher.onDidChange(forget), watcher.onDidDelete(forget)];
+    const read = readTemplateFiles(entries, document);
+    this.remembered.set(key, { read, watcher: vscode.Disposable.from(...listeners) });
+    read.catch(forget);
+    return read;
+  }
+
+  private forget(key: string): void {
+    this.remembered.get(key)?.watcher.dispose();
+    this.remembered.delete(key);
+  }
+
+  dispose(): void {
+    for (const key of [...this.remembered.keys()]) this.forget(key);
+  }
 }

@@ -41,7 +41,7 @@ export interface TerselyLog {
 export function parseTerselyLog(raw: string): TerselyLog {
   const text = joinWrappedEntries(raw);
   const activated = /^(\d{4}-\d\d-\d\d \d\d:\d\d:\d\d\.\d{3}) \[info\] Activated in ([\d.]+) ms, in (.+?)\.\s*$/m.exec(text);
-  const summaries = [...text.matchAll(/^(\d{4}-\d\d-\d\d \d\d:\d\d:\d\d\.\d{3}) \[info\] Summarized .* in (\d+) ms in the engine, (\d+) ms in all(?:; the engine host began after (\d+) ms)?(?:; read [^.\n]*)?\./gm)].map((m) => ({
+  const summaries = [...text.matchAll(/^(\d{4}-\d\d-\d\d \d\d:\d\d:\d\d\.\d{3}) \[info\] Summarized .* in (\d+) ms in the engine, (\d+) ms in all(?:; the engine host began after (\d+) ms)?(?:; [^.\n]*)*\./gm)].map((m) => ({
     at: Date.parse(m[1]!.replace(' ', 'T')),
     engineMs: Number(m[2]),
     totalMs: Number(m[3]),

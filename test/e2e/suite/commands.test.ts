@@ -119,6 +119,34 @@ describe('Tersely in the editor', function () {
     }
   });
 
+  it('looks templates up again once a template file changes (the look-up is remembered until then)', async () => {
+    await openDemo();
+    const folder = vscode.workspace.workspaceFolders![0]!.uri;
+    const template = vscode.Uri.joinPath(folder, 'watched-template.md');
+    // The watcher's event arrives a moment after the write: summarize until the change is seen.
+    const summarizeUntilTemplates = async (wanted: number, what: string) => {
+      const stop = Date.now() + 15_000;
+      for (;;) {
+        await vscode.commands.executeCommand('tersely.summarizeDocument');
+        if (api.templatesInUse === wanted) return;
+        if (Date.now() > stop) throw new Error(`timed out waiting for ${what} (${api.templatesInUse} templates in use)`);
+        await new Promise((resolve) => setTimeout(resolve, 200));
+      }
+    };
+    try {
+      await setting('templateFiles', ['watched-template.md']);
+      await vscode.commands.executeCommand('tersely.summarizeDocument');
+      assert.equal(api.templatesInUse, 0, 'no file there yet');
+      await vscode.workspace.fs.writeFile(template, new TextEncoder().encode('# Template\n\nDescribe the rollout in one paragraph.\n'));
+      await summarizeUntilTemplates(1, 'the new template file to be read');
+      await vscode.workspace.fs.delete(template);
+      await summarizeUntilTemplates(0, 'the deleted template file to be forgotten');
+    } finally {
+      await setting('templateFiles', undefined);
+      await vscode.workspace.fs.delete(template).then(undefined, () => undefined);
+    }
+  });
+
   it('inserts the summary under the title as one edit that a single undo removes', async () => {
     const editor = await openDemo();
     const original = editor.document.getText();
