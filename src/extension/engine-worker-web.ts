@@ -4,6 +4,7 @@
  */
 import type { FromEngine, ToEngine } from './engine-protocol';
 import { engineRunner } from './engine-runner';
+import { warmUpEngine } from './engine-warm-up';
 
 interface WorkerScope {
   postMessage(message: FromEngine): void;
@@ -13,3 +14,4 @@ interface WorkerScope {
 const scope = globalThis as unknown as WorkerScope;
 const handle = engineRunner((message) => scope.postMessage(message));
 scope.onmessage = (event) => handle(event.data);
+setTimeout(warmUpEngine, 0);

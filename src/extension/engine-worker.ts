@@ -5,9 +5,11 @@
 import { parentPort } from 'node:worker_threads';
 import type { FromEngine, ToEngine } from './engine-protocol';
 import { engineRunner } from './engine-runner';
+import { warmUpEngine } from './engine-warm-up';
 
 const port = parentPort;
 if (port) {
   const handle = engineRunner((message: FromEngine) => port.postMessage(message));
   port.on('message', (message: ToEngine) => handle(message));
+  setTimeout(warmUpEngine, 0);
 }
