@@ -194,4 +194,14 @@ describe('check consistency: identifiers', () => {
     assert.match(absent[0]!.note ?? '', /never mentions --night-mode/);
     assert.deepEqual(checkIdentifiers(input('The planner reads `dock_limit` at start.', ['The planner reads `dock_limit` at start.'])), []);
   });
+
+  it('counts a path as named by its last segment, and does not take an identifier of another kind in the same place for a swap', () => {
+    assert.deepEqual(checkIdentifiers(input('Move the fleet::planner::Rebalancer type to a new crate.', ['Move the `Rebalancer` type and the `van_capacity` option to a new crate.'])), []);
+    // Another path in the frame is still a swap.
+    const swap = checkIdentifiers(input('Call fleet::planner::rebalance at night.', ['Call fleet::depot::restock at night.']));
+    assert.equal(swap.length, 1);
+    assert.equal(swap[0]!.bodySays, 'fleet::depot::restock');
+    // A code span where the claim has a path, with the same word before it: not a swap.
+    assert.deepEqual(checkIdentifiers(input('Read it from fleet::planner::limits at start.', ['Read it from `dock_limit` at start.'])), []);
+  });
 });

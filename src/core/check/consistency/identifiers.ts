@@ -6,8 +6,10 @@
  * A finding is either
  *   - a swap: neither the body sentence closest to the claim's other words (the frame), nor the
  *     support, nor the next closest sentences name the claim's identifier, and the frame names
- *     another of the same kind (or any other in the same place: the word before or after it is
- *     the same); or
+ *     another of the same kind; a path counts as named by its last segment too (`std::fmt::Debug`
+ *     is often written `Debug`). An identifier of another kind in the same place (the same word
+ *     before or after it) was tried as a swap too: on the train half it caught no changed
+ *     identifier and raised four false alarms, so it is not used; or
  *   - an absence: the body never mentions an option or a file name the claim names (compared
  *     without case); other names are too often written differently (`Foo::bar` / `bar`) to judge.
  * Code spans after a reStructuredText role (:ref:`x`) are cross-references, not identifiers.
@@ -22,8 +24,6 @@ export interface Identifier {
   readonly text: string;
   /** Lower case, trailing "()" and "!" removed: how identifiers are compared. */
   readonly key: string;
-  readonly before: string | null;
-  readonly after: string | null;
 }
 
 /** A code span; its content neither starts nor ends with a space, so the text between two spans is never taken for one. */
@@ -35,37 +35,31 @@ const PATTERNS: readonly (readonly [IdentifierKind, RegExp])[] = [
   ['call', /(?<![\w.])[A-Za-z_]\w*\(\)/gu],
   ['name', /(?<![\w-])[a-z][a-z0-9]*(?:_[a-z0-9]+)+(?![\w-])/gu],
 ];
-const WORD = /[\p{L}\p{N}]+/gu;
 
 export function identifierKey(text: string): string {
   return text.trim().replace(/(?:\(\)|!)+$/u, '').toLowerCase();
 }
 
-function neighbours(source: string, start: number, end: number): { before: string | null; after: string | null } {
-  const before = source.slice(Math.max(0, start - 40), start).match(WORD)?.at(-1)?.toLowerCase() ?? null;
-  const after = source.slice(end, end + 40).match(WORD)?.[0]?.toLowerCase() ?? null;
-  return { before, after };
-}
 
 export function identifiersIn(source: string): Identifier[] {
   const found: (Identifier & { start: number })[] = [];
   const covered: [number, number][] = [];
-  const add = (kind: IdentifierKind, text: string, start: number, end: number) => {
+  const add = (kind: IdentifierKind, text: string, start: number) => {
     const key = identifierKey(text);
     if (key.length < 2 || /^[\d.,%\s]+$/u.test(key)) return;
-    found.push({ kind, text, key, start, ...neighbours(source, start - (kind === 'code' ? 1 : 0), end + (kind === 'code' ? 1 : 0)) });
+    found.push({ kind, text, key, start });
   };
   for (const m of source.matchAll(CODE_SPAN)) {
     if (source[m.index - 1] === ':') continue;
     const start = m.index + m[1]!.length;
-    add('code', m[2]!, start, start + m[2]!.length);
+    add('code', m[2]!, start);
     covered.push([m.index, m.index + m[0].length]);
   }
   for (const [kind, pattern] of PATTERNS) {
     for (const m of source.matchAll(pattern)) {
       const inside = covered.some(([s, e]) => m.index < e && m.index + m[0].length > s);
       if (inside) continue;
-      add(kind, m[0], m.index, m.index + m[0].length);
+      add(kind, m[0], m.index);
       covered.push([m.index, m.index + m[0].length]);
     }
   }
@@ -79,7 +73,13 @@ function identifiersOf(e: Evidence): Identifier[] {
   return found;
 }
 
-const sameSlot = (a: Identifier, b: Identifier) => (a.before !== null && a.before === b.before) || (a.after !== null && a.after === b.after);
+/** Whether a source names the identifier: as written, or a path by its last segment (of 3 characters or more). */
+function namedIn(lowerSource: string, identifier: Identifier): boolean {
+  if (mentions(lowerSource, identifier.key)) return true;
+  if (!identifier.key.includes('::')) return false;
+  const last = identifier.key.split('::').filter((part) => /\w/u.test(part)).at(-1)?.replace(/\W+$/u, '') ?? '';
+  return last.length >= 3 && mentions(lowerSource, last);
+}
 
 /** Whether a source mentions an identifier (compared without case, on word boundaries). */
 function mentions(lowerSource: string, key: string): boolean {
@@ -103,12 +103,10 @@ export const checkIdentifiers: Detector = (input) => {
   for (const identifier of claimed) {
     const frame = input.frame;
     const near = [...new Set([frame, ...input.support, ...input.pool.slice(0, IDENTIFIER_POOL)].filter((e): e is Evidence => e != null))];
-    const named = near.some((e) => mentions(e.source.toLowerCase(), identifier.key));
+    const named = near.some((e) => namedIn(e.source.toLowerCase(), identifier));
     if (frame && !named) {
       // The sentence closest to the claim's other words names another identifier of the kind: a swap.
-      const swap =
-        identifiersOf(frame).find((other) => other.kind === identifier.kind && !claimKeys.has(other.key) && !other.key.includes(identifier.key) && !identifier.key.includes(other.key)) ??
-        identifiersOf(frame).find((other) => !claimKeys.has(other.key) && sameSlot(identifier, other));
+      const swap = identifiersOf(frame).find((other) => other.kind === identifier.kind && !claimKeys.has(other.key) && !other.key.includes(identifier.key) && !identifier.key.includes(other.key));
       if (swap) {
         findings.push({ kind: 'identifier', abstractSays: identifier.text, bodySays: swap.text, evidence: frame });
         continue;
