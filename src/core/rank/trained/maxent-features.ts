@@ -20,7 +20,7 @@ import { textRank } from '../textrank';
 import { headingClassesOf, type HeadingClass } from '../../text/headings';
 import { minMax } from '../../scale';
 import type { AnalyzedDocument } from '../../types';
-import { rankBayes } from './model';
+import { defaultModel, rankBayes } from './model';
 import { FEATURES, rankBins, sentenceFeatures, type FeatureDefinition } from './features';
 import { firstContentSection, intentCue, isLinkOnly, isPlaceholder } from './sentence-cues';
 
@@ -111,7 +111,8 @@ export function maxentFeatures(a: AnalyzedDocument): MaxentFeatureMatrix {
     lexrankScore: minMax(withDefaultsOnce(a, 'lexrank', () => lexRank(a)).scores),
     centroidScore: minMax(withDefaultsOnce(a, 'centroid', () => centroidRank(a)).scores),
     textrankScore: minMax(withDefaultsOnce(a, 'textrank', () => textRank(a)).scores),
-    bayesScore: minMax(withDefaultsOnce(a, 'bayes', () => rankBayes(a)).scores),
+    // The Bayes model reads the same base features; computing them again cost a tenth of a 20 KB summary.
+    bayesScore: minMax(withDefaultsOnce(a, 'bayes', () => rankBayes(a, defaultModel(), base)).scores),
   } satisfies Record<(typeof CONTINUOUS_FEATURES)[number]['name'], Float64Array>;
   return { ...base, ...extra, ...continuous };
 }
