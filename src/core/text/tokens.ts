@@ -151,6 +151,15 @@ const SCRIPT_PATTERNS: readonly (readonly [Script, RegExp])[] = [
   ['hangul', /\p{sc=Hangul}/gu],
 ];
 
+const byScript = new Map<Script, readonly Language[]>();
+
+/** The languages written in a script, in LANGUAGES order (one array per script, so its stop-word index is built once). */
+function languagesOfScript(script: Script): readonly Language[] {
+  let list = byScript.get(script);
+  if (list === undefined) byScript.set(script, (list = LANGUAGES.filter((language) => language.script === script)));
+  return list;
+}
+
 /**
  * Language of `text` (ISO 639-1): the dominant script first (Japanese whenever Kana is common,
  * since Japanese mixes Kana with Han), then the language of that script whose stop words occur
@@ -172,21 +181,47 @@ export function detectLanguage(text: string): string {
     }
   }
   if (script === null) return 'en';
-  const candidates = LANGUAGES.filter((language) => language.script === script);
+  const candidates = languagesOfScript(script);
   if (candidates.length === 1) return candidates[0]?.code ?? 'en';
   return mostStopWords(wordTokens(sample), candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
 }
 
+/** Per list of candidate languages: which of them (by position) have each stop word. */
+const stopWordOwners = new WeakMap<readonly Language[], Map<string, number[]>>();
+
+function ownersOf(candidates: readonly Language[]): Map<string, number[]> {
+  let owners = stopWordOwners.get(candidates);
+  if (owners === undefined) {
+    owners = new Map();
+    candidates.forEach((language, position) => {
+      for (const word of stopWords(language.code)) {
+        const list = owners!.get(word);
+        if (list === undefined) owners!.set(word, [position]);
+        else list.push(position);
+      }
+    });
+    stopWordOwners.set(candidates, owners);
+  }
+  return owners;
+}
+
+/**
+ * The candidate with the most stop-word hits (the earlier one on a tie). One lookup per token
+ * instead of one per token and language (with a dozen Latin-script languages, 3% of a 20 KB summary).
+ */
 function mostStopWords(tokens: readonly string[], candidates: readonly Language[]): string | null {
+  const owners = ownersOf(candidates);
+  const hits = new Array<number>(candidates.length).fill(0);
+  for (const token of tokens) {
+    const list = owners.get(token);
+    if (list !== undefined) for (const position of list) hits[position]!++;
+  }
   let bestCode: string | null = null;
   let bestHits = 0;
-  for (const language of candidates) {
-    const stops = stopWords(language.code);
-    let hits = 0;
-    for (const token of tokens) if (stops.has(token)) hits++;
-    if (hits > bestHits) {
-      bestHits = hits;
-      bestCode = language.code;
+  for (let position = 0; position < candidates.length; position++) {
+    if (hits[position]! > bestHits) {
+      bestHits = hits[position]!;
+      bestCode = candidates[position]!.code;
     }
   }
   return bestCode;
