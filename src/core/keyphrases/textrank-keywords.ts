@@ -104,17 +104,22 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
 
   const clauses = clausesOf(a);
   const vertexOf = new Map<string, number>();
+  // The filter and the stem depend on the token alone, so each distinct token is judged once.
+  const vertexOfToken = new Map<string, number>();
   /** Per clause: the vertex of each token, or -1 for a filtered word. */
   const clauseVertices: Int32Array[] = [];
   for (const clause of clauses) {
-    const vertices = new Int32Array(clause.tokens.length).fill(-1);
+    const vertices = new Int32Array(clause.tokens.length);
     clause.tokens.forEach((token, k) => {
-      if (!isCandidate(token)) return;
-      const key = stem(token, a.language);
-      let id = vertexOf.get(key);
+      let id = vertexOfToken.get(token);
       if (id === undefined) {
-        id = vertexOf.size;
-        vertexOf.set(key, id);
+        id = -1;
+        if (isCandidate(token)) {
+          const key = stem(token, a.language);
+          id = vertexOf.get(key) ?? vertexOf.size;
+          if (id === vertexOf.size) vertexOf.set(key, id);
+        }
+        vertexOfToken.set(token, id);
       }
       vertices[k] = id;
     });
