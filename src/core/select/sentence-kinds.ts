@@ -76,7 +76,14 @@ export function normalizeSentence(text: string): string {
 /** Why a sentence may never be picked, or null. */
 export function barredKind(text: string, words: number, settings = SENTENCE_KIND_DEFAULTS): BarredKind | null {
   const trimmed = text.trim();
-  const key = normalizeSentence(trimmed);
+  return barredKindOf(trimmed, normalizeSentence(trimmed), words, settings);
+}
+
+/**
+ * barredKind given the trimmed text and its normalized key. normalizeSentence trims, so the key of
+ * the untrimmed text is the same: sentenceKinds passes the key it already has.
+ */
+function barredKindOf(trimmed: string, key: string, words: number, settings: typeof SENTENCE_KIND_DEFAULTS): BarredKind | null {
   if (key === '' || PLACEHOLDERS.has(key) || LATER_NOTE.test(trimmed)) return 'placeholder';
   if (ISSUE_LINE.test(trimmed) || TRAILER.test(trimmed) || MENTION_LINE.test(trimmed) || CHECKLIST.test(trimmed)) return 'boilerplate';
   if (words <= settings.bylineWords && BYLINE.test(trimmed)) return 'byline';
@@ -142,7 +149,7 @@ export function sentenceKinds(doc: ParsedDocument, wordCounts: readonly number[]
     }
     textKey[i] = id;
     const words = wordCounts[i] ?? 0;
-    barred[i] = templateKeys.has(key) ? 'template' : barredKind(sentence.text, words);
+    barred[i] = templateKeys.has(key) ? 'template' : barredKindOf(sentence.text.trim(), key, words, SENTENCE_KIND_DEFAULTS);
     const source = doc.text.slice(sentence.span.start - doc.baseOffset, sentence.span.end - doc.baseOffset);
     if (fragmentKind(sentence.text, words, source) !== null) fragment[i] = 1;
   });
