@@ -29,14 +29,19 @@ const UNSPACED_SCRIPT =
  * it (kept whole otherwise), so text in those scripts still yields tokens.
  */
 export function wordTokens(text: string): string[] {
-  const tokens: string[] = [];
   // Lower-casing once, before matching, is much cheaper than once per token.
   const lower = text.toLowerCase();
+  const words = lower.match(WORD);
+  if (words === null) return [];
   const unspaced = UNSPACED_SCRIPT.test(lower);
-  for (const match of lower.matchAll(WORD)) {
-    let word = match[0];
-    if (word.includes('\u2019')) word = word.replaceAll('\u2019', "'");
-    if (word.includes('\u2010')) word = word.replaceAll('\u2010', '-');
+  const curly = lower.includes('\u2019');
+  const hyphen = lower.includes('\u2010');
+  // The common case: every match is a token as it stands.
+  if (!unspaced && !curly && !hyphen) return words;
+  const tokens: string[] = [];
+  for (let word of words) {
+    if (curly && word.includes('\u2019')) word = word.replaceAll('\u2019', "'");
+    if (hyphen && word.includes('\u2010')) word = word.replaceAll('\u2010', '-');
     if (!unspaced) {
       tokens.push(word);
     } else if (IDEOGRAPHIC.test(word)) {
@@ -122,23 +127,54 @@ const HAS_DIGIT_OR_DOT = /[\p{N}.]/u;
  * removed, then stemmed. Numbers, versions and file names are kept unstemmed.
  */
 export function contentTerms(words: readonly string[], lang: string): string[] {
-  const stops = stopWords(lang);
-  const english = languageFor(lang)?.code === 'en';
+  const cache = wordTermCache(lang);
   const terms: string[] = [];
   for (const word of words) {
-    if (stops.has(word)) continue;
-    const hyphenated = word.includes('-');
-    const minLength = hyphenated ? MIN_PART_LENGTH : MIN_TERM_LENGTH;
-    for (let part of hyphenated ? word.split('-') : [word]) {
-      if (english && part.endsWith("'s")) part = part.slice(0, -2);
-      if (part.startsWith("'") || part.endsWith("'")) part = part.replace(/^'+|'+$/g, '');
-      if (part === '' || stops.has(part)) continue;
-      if (part.length < minLength && !IDEOGRAPHIC.test(part)) continue;
-      terms.push(HAS_DIGIT_OR_DOT.test(part) || !HAS_LETTER.test(part) ? part : stem(part, lang));
+    let own = cache.get(word);
+    if (own === undefined) {
+      own = termsOfWord(word, lang);
+      if (cache.size >= MAX_CACHED_WORDS) cache.clear();
+      cache.set(word, own);
     }
+    for (let k = 0; k < own.length; k++) terms.push(own[k]!);
   }
   return terms;
 }
+
+/**
+ * A word's terms depend on the word and the language alone, and a document repeats its words: each
+ * language keeps the terms of the words it has seen (bounded like the stems).
+ */
+const wordTermCaches = new Map<string, Map<string, readonly string[]>>();
+const MAX_CACHED_WORDS = 200_000;
+const NO_LANGUAGE = '';
+
+function wordTermCache(lang: string): Map<string, readonly string[]> {
+  const code = languageFor(lang)?.code ?? NO_LANGUAGE;
+  let cache = wordTermCaches.get(code);
+  if (cache === undefined) wordTermCaches.set(code, (cache = new Map()));
+  return cache;
+}
+
+/** The content terms of one word token (see contentTerms). */
+function termsOfWord(word: string, lang: string): readonly string[] {
+  const stops = stopWords(lang);
+  if (stops.has(word)) return NO_TERMS;
+  const english = languageFor(lang)?.code === 'en';
+  const hyphenated = word.includes('-');
+  const minLength = hyphenated ? MIN_PART_LENGTH : MIN_TERM_LENGTH;
+  const terms: string[] = [];
+  for (let part of hyphenated ? word.split('-') : [word]) {
+    if (english && part.endsWith("'s")) part = part.slice(0, -2);
+    if (part.startsWith("'") || part.endsWith("'")) part = part.replace(/^'+|'+$/g, '');
+    if (part === '' || stops.has(part)) continue;
+    if (part.length < minLength && !IDEOGRAPHIC.test(part)) continue;
+    terms.push(HAS_DIGIT_OR_DOT.test(part) || !HAS_LETTER.test(part) ? part : stem(part, lang));
+  }
+  return terms.length === 0 ? NO_TERMS : terms;
+}
+
+const NO_TERMS: readonly string[] = [];
 
 /** Characters read to detect the language; enough for a stable stop-word count. */
 const DETECTION_SAMPLE = 20_000;
