@@ -105,10 +105,12 @@ function thematicTerms(terms: readonly (readonly string[])[]): Set<string> {
 
 /** A capitalised word after the first word (proper nouns, names of things); acronyms count too. */
 function hasInnerCapital(text: string): boolean {
-  const words = text.match(/[\p{L}][\p{L}\p{N}'’-]*/gu) ?? [];
-  for (let i = 1; i < words.length; i++) {
-    const first = words[i]![0]!;
-    if (first !== first.toLowerCase() && words[i] !== 'I') return true;
+  // Word by word, stopping at the first capital (matching every word of every sentence cost more).
+  const word = /[\p{L}][\p{L}\p{N}'’-]*/gu;
+  if (word.exec(text) === null) return false;
+  for (let match = word.exec(text); match !== null; match = word.exec(text)) {
+    const first = match[0][0]!;
+    if (first !== first.toLowerCase() && match[0] !== 'I') return true;
   }
   return false;
 }
@@ -156,8 +158,9 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     const fromEnd = contentParagraphs.length - 1 - ordinal;
     m.documentZone[i] = ordinal < 3 ? 0 : ordinal < 10 ? 1 : fromEnd < 5 ? 3 : 2;
     m.sectionPosition[i] = sentence.positionInSection === 0 ? 0 : sentence.positionInSection < 3 ? 1 : 2;
+    const distinct = new Set(a.terms[i]);
     let themes = 0;
-    for (const term of new Set(a.terms[i])) if (thematic.has(term)) themes++;
+    for (const term of distinct) if (thematic.has(term)) themes++;
     m.thematic[i] = Math.min(3, themes);
     m.properNoun[i] = hasInnerCapital(sentence.text) ? 1 : 0;
     m.headingPrior[i] = priorBin(priors[sentence.section] ?? 1);
@@ -166,7 +169,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     const depth = doc.sections[sentence.section]?.depth ?? 0;
     m.sectionDepth[i] = depth === 0 ? 0 : depth <= topDepth ? 1 : 2;
     let shared = 0;
-    for (const term of new Set(a.terms[i])) if (title.has(term)) shared++;
+    for (const term of distinct) if (title.has(term)) shared++;
     m.titleOverlap[i] = Math.min(2, shared);
     m.ending[i] = endingBin(sentence.text);
   });

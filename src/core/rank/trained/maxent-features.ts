@@ -82,12 +82,13 @@ export function maxentFeatures(a: AnalyzedDocument): MaxentFeatureMatrix {
   const classes = sectionClasses(a);
   const firstContent = firstContentSection(a);
   const title = new Set(a.titleTerms);
+  const headings = a.headingTerms.map((terms) => new Set(terms));
   a.doc.sentences.forEach((sentence, i) => {
     const words = a.words[i]!;
     const terms = new Set(a.terms[i]);
     extra.sectionClass[i] = classes[sentence.section] ?? 0;
     extra.intentCue[i] = intentCue(words);
-    const heading = new Set(a.headingTerms[sentence.section] ?? []);
+    const heading = headings[sentence.section] ?? new Set<string>();
     let inHeading = 0;
     let inTitle = 0;
     for (const term of terms) {

@@ -35,13 +35,15 @@ export function isPlaceholder(text: string): boolean {
 }
 
 const URL = /\b(?:[a-z][a-z0-9+.-]*:\/\/|www\.)\S+/giu;
+const MAY_HOLD_WWW = /www\./iu;
 
 /**
  * A sentence that only points elsewhere: a bare URL, or a short "See …" pointer. Links in the
  * source keep their visible text, so a pointer is judged by its shape.
  */
 export function isLinkOnly(text: string, words: readonly string[]): boolean {
-  const withoutUrls = text.replace(URL, ' ');
+  // Every URL holds "://" or "www." (any case); most sentences hold neither and skip the replace.
+  const withoutUrls = text.includes('://') || MAY_HOLD_WWW.test(text) ? text.replace(URL, ' ') : text;
   if (withoutUrls.length < text.length && !/\p{L}{2,}/u.test(withoutUrls.replace(/\b(?:see|at|here|link)\b/giu, ''))) return true;
   return words.length <= 8 && (words[0] === 'see' || words[0] === 'cf');
 }
