@@ -106,10 +106,10 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
   const vertexOf = new Map<string, number>();
   // The filter and the stem depend on the token alone, so each distinct token is judged once.
   const vertexOfToken = new Map<string, number>();
-  /** Per clause: the vertex of each token, or -1 for a filtered word. */
-  const clauseVertices: Int32Array[] = [];
+  /** Per clause: the vertex of each token, or -1 for a filtered word (plain arrays: thousands of tiny typed arrays cost more). */
+  const clauseVertices: number[][] = [];
   for (const clause of clauses) {
-    const vertices = new Int32Array(clause.tokens.length);
+    const vertices = new Array<number>(clause.tokens.length);
     clause.tokens.forEach((token, k) => {
       let id = vertexOfToken.get(token);
       if (id === undefined) {
@@ -155,11 +155,10 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
   // Step 3: PageRank over the undirected, unweighted graph.
   const { scores } = pageRank(csrOf(n, edges), settings);
   const keep = Math.min(settings.maxKeywords, Math.max(1, Math.round(n * settings.keepShare)));
-  const order = Array.from({ length: n }, (_, v) => v).sort((x, y) => scores[y]! - scores[x]! || x - y);
-  // Words tied with the last kept one are kept too: the cut never chooses among equals by position.
-  const cutScore = scores[order[keep - 1]!]!;
+  // The keep-th highest score; words tied with it are kept too: the cut never chooses among equals by position.
+  const cutScore = Float64Array.from(scores).sort()[n - keep]!;
   const isKeyword = new Uint8Array(n);
-  for (const v of order) if (scores[v]! >= cutScore * (1 - TIE_TOLERANCE)) isKeyword[v] = 1;
+  for (let v = 0; v < n; v++) if (scores[v]! >= cutScore * (1 - TIE_TOLERANCE)) isKeyword[v] = 1;
 
   // Step 4: collapse adjacent keywords into phrases; count them and their written forms.
   interface Tally {
@@ -181,7 +180,7 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
       }
       let end = k;
       while (end < vertices.length && vertices[end]! >= 0 && isKeyword[vertices[end]!]) end++;
-      const ids = Array.from(vertices.subarray(k, end));
+      const ids = vertices.slice(k, end);
       // A run that repeats a word ("type type") or runs on is not a phrase; its words still count alone.
       if (ids.length > 1 && (ids.length > settings.maxPhraseWords || new Set(ids).size < ids.length)) {
         for (let w = k; w < end; w++) tallyPhrase([vertices[w]!], clause.tokens[w]!, clause.sentence);
