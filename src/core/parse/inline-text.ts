@@ -150,8 +150,7 @@ export class InlineTextBuilder {
     }
     return {
       text: codesToString(units, 0, length),
-      starts: starts.slice(0, length),
-      ends: ends.slice(0, length),
+      ...finalOffsets(starts, ends, length),
       lines: { softBreaks, deliberate: this.options.deliberateLines ?? false, ...(unbreakable.length > 0 ? { unbreakable } : {}) },
     };
   }
@@ -173,6 +172,14 @@ const scratch = { starts: new Int32Array(SCRATCH_UNITS), ends: new Int32Array(SC
 
 function offsetsFor(count: number): { starts: Int32Array; ends: Int32Array } {
   return count <= SCRATCH_UNITS ? scratch : { starts: new Int32Array(count), ends: new Int32Array(count) };
+}
+
+/** The first `length` starts and ends, copied into one buffer (one allocation per paragraph, not two). */
+function finalOffsets(starts: Int32Array, ends: Int32Array, length: number): { starts: Int32Array; ends: Int32Array } {
+  const both = new Int32Array(2 * length);
+  both.set(starts.subarray(0, length));
+  both.set(ends.subarray(0, length), length);
+  return { starts: both.subarray(0, length), ends: both.subarray(length) };
 }
 /** Units per String.fromCharCode call, far below engines' argument limits. */
 const CODES_PER_CALL = 4096;
