@@ -17,6 +17,7 @@
  * The band values are ours (common practice, no source); Luhn chose his cutoffs by inspection.
  */
 import { contentTerms } from '../text/tokens';
+import { termIndexOf } from '../vectors';
 import type { AnalyzedDocument, RankResult } from '../types';
 
 export interface LuhnSettings {
@@ -40,18 +41,19 @@ export interface LuhnOptions {
 
 /** The set of significant terms and the cutoffs that produced it. */
 export function significantTerms(a: AnalyzedDocument, settings: LuhnSettings = LUHN_DEFAULTS): { terms: Set<string>; minCount: number; maxCount: number } {
-  const counts = new Map<string, number>();
+  // The shared term index already counts every term (vocabulary in order of first appearance).
+  const { vocabulary, totalCount } = termIndexOf(a);
   let tokens = 0;
-  for (const terms of a.terms) {
-    for (const term of terms) counts.set(term, (counts.get(term) ?? 0) + 1);
-    tokens += terms.length;
-  }
+  for (const terms of a.terms) tokens += terms.length;
   const minCount = Math.max(settings.minCountFloor, Math.ceil(Math.log10(Math.max(tokens, 1))));
-  const descending = [...counts.values()].sort((x, y) => y - x);
+  const descending = Float64Array.from(totalCount).sort().reverse();
   const dropped = Math.floor(descending.length * settings.dropTopShare);
   const maxCount = dropped > 0 && dropped < descending.length ? descending[dropped]! : Infinity;
   const terms = new Set<string>();
-  for (const [term, count] of counts) if (count >= minCount && count <= maxCount) terms.add(term);
+  for (const [term, id] of vocabulary) {
+    const count = totalCount[id]!;
+    if (count >= minCount && count <= maxCount) terms.add(term);
+  }
   return { terms, minCount, maxCount };
 }
 
