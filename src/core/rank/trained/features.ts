@@ -17,6 +17,7 @@ import { lexRank } from '../lexrank';
 import { countPhrases, DEFAULT_CUE_WORDS, phraseIndex } from '../edmundson';
 import { sectionPriors } from '../heading-prior';
 import { withDefaultsOnce } from '../memo';
+import { termIndexOf } from '../../vectors';
 import type { AnalyzedDocument, BlockKind } from '../../types';
 
 export interface FeatureDefinition {
@@ -84,6 +85,7 @@ function priorBin(prior: number): number {
 /** Rank-percentile bins of scores within one document (ties share the better rank). */
 export function rankBins(scores: Float64Array): Uint8Array {
   const n = scores.length;
+  if (!scores.some(Number.isNaN)) return rankBinsBySearch(scores);
   const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => scores[b]! - scores[a]! || a - b);
   const bins = new Uint8Array(n);
   let rank = 0;
@@ -95,10 +97,35 @@ export function rankBins(scores: Float64Array): Uint8Array {
   return bins;
 }
 
-function thematicTerms(terms: readonly (readonly string[])[]): Set<string> {
-  const counts = new Map<string, number>();
-  for (const sentence of terms) for (const term of sentence) counts.set(term, (counts.get(term) ?? 0) + 1);
-  const frequent = [...counts.entries()].filter(([, count]) => count >= 2);
+/**
+ * rankBins without a comparator sort: a sentence's rank (ties sharing the better one) is the number
+ * of scores above its own, read from a numeric sort by binary search. Same bins; NaN-free scores only.
+ */
+function rankBinsBySearch(scores: Float64Array): Uint8Array {
+  const n = scores.length;
+  const ascending = Float64Array.from(scores).sort();
+  const bins = new Uint8Array(n);
+  for (let s = 0; s < n; s++) {
+    // First position holding a score above scores[s]; everything from there on is higher.
+    let low = 0;
+    let high = n;
+    while (low < high) {
+      const mid = (low + high) >> 1;
+      if (ascending[mid]! <= scores[s]!) low = mid + 1;
+      else high = mid;
+    }
+    const rank = n - low;
+    const share = n <= 1 ? 0 : rank / n;
+    bins[s] = share < 0.1 ? 0 : share < 0.25 ? 1 : share < 0.5 ? 2 : 3;
+  }
+  return bins;
+}
+
+function thematicTerms(a: AnalyzedDocument): Set<string> {
+  // The shared term index already counts every term (vocabulary in order of first appearance).
+  const { vocabulary, totalCount } = termIndexOf(a);
+  const frequent: [string, number][] = [];
+  for (const [term, id] of vocabulary) if (totalCount[id]! >= 2) frequent.push([term, totalCount[id]!]);
   frequent.sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1));
   return new Set(frequent.slice(0, THEMATIC_WORDS).map(([term]) => term));
 }
@@ -138,7 +165,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
   const indicatorIndex = phraseIndex(INDICATOR_PHRASES);
   const hedgeIndex = phraseIndex(HEDGE_PHRASES);
   const priors = sectionPriors(doc.sections);
-  const thematic = thematicTerms(a.terms);
+  const thematic = thematicTerms(a);
   const title = new Set(a.titleTerms);
   const headedDepths = doc.sections.filter((s) => s.depth > 0).map((s) => s.depth);
   const topDepth = headedDepths.length > 0 ? Math.min(...headedDepths) : 1;
