@@ -178,9 +178,10 @@ const NO_TERMS: readonly string[] = [];
 
 /** Characters read to detect the language; enough for a stable stop-word count. */
 const DETECTION_SAMPLE = 20_000;
+const LATIN_RUNS = /\p{sc=Latin}+/gu;
 /** Runs of each script's characters; counted in code points (see charactersIn). */
 const SCRIPT_PATTERNS: readonly (readonly [Script, RegExp])[] = [
-  ['latin', /\p{sc=Latin}+/gu],
+  ['latin', LATIN_RUNS],
   ['cyrillic', /\p{sc=Cyrillic}+/gu],
   ['arabic', /\p{sc=Arabic}+/gu],
   ['han', /\p{sc=Han}+/gu],
@@ -205,6 +206,23 @@ function charactersIn(text: string, runs: RegExp): number {
   return count;
 }
 
+const NON_ASCII_RUNS = /[^\u0000-\u007f]+/g;
+
+/**
+ * charactersIn(text, Latin runs), faster: the only Latin characters in ASCII are A-Z and a-z, so
+ * those are counted by code and the regular expression reads only the non-ASCII runs (matching
+ * every Latin run of a 20 KB sample took a few percent of its summary).
+ */
+function latinCharacters(text: string): number {
+  let count = 0;
+  for (let i = 0; i < text.length; i++) {
+    const folded = text.charCodeAt(i) | 0x20; // 'A'-'Z' onto 'a'-'z'; no other unit lands there
+    if (folded >= 0x61 && folded <= 0x7a) count++;
+  }
+  for (const [run] of text.matchAll(NON_ASCII_RUNS)) count += charactersIn(run, LATIN_RUNS);
+  return count;
+}
+
 const byScript = new Map<Script, readonly Language[]>();
 
 /** The languages written in a script, in LANGUAGES order (one array per script, so its stop-word index is built once). */
@@ -222,7 +240,7 @@ function languagesOfScript(script: Script): readonly Language[] {
 export function detectLanguage(text: string): string {
   const sample = text.slice(0, DETECTION_SAMPLE);
   const counts = new Map<Script, number>();
-  for (const [script, runs] of SCRIPT_PATTERNS) counts.set(script, charactersIn(sample, runs));
+  for (const [script, runs] of SCRIPT_PATTERNS) counts.set(script, script === 'latin' ? latinCharacters(sample) : charactersIn(sample, runs));
   const kana = counts.get('kana') ?? 0;
   const han = counts.get('han') ?? 0;
   if (kana > 0 && kana * 5 >= han) counts.set('kana', kana + han);
