@@ -13,6 +13,9 @@
 import { splitSentences, type LineBreaks } from '../segment/sentences';
 import type { Span } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+
 export interface NormalizedText {
   readonly text: string;
   /** Start of the source range (local to the parsed string) that produced each UTF-16 unit. */
@@ -222,7 +225,7 @@ export function sentencesOf(normalized: NormalizedText): LocalSentence[] {
     const raw = normalized.text.slice(span.start, span.end);
     // Finished text has its blank runs collapsed already; the replace is needed only where not.
     const text = (NEEDS_COLLAPSE.test(raw) ? raw.replace(/\s+/g, ' ') : raw).trim();
-    if (!/[\p{L}\p{N}]/u.test(text)) continue; // stray punctuation is not a sentence
+    if (!LETTER_OR_DIGIT.test(text)) continue; // stray punctuation is not a sentence
     const source = sourceSpan(normalized, span);
     out.push({ text, start: source.start, end: source.end });
   }

@@ -20,6 +20,9 @@ import { contentTerms } from '../text/tokens';
 import { termIndexOf } from '../vectors';
 import type { AnalyzedDocument, RankResult } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const MARKS = /\p{M}/gu;
+
 export interface LuhnSettings {
   /** Most insignificant words allowed between two significant words of one cluster. */
   readonly gapLimit: number;
@@ -149,7 +152,7 @@ function prefixSimilarity(word: string, term: string): number {
 
 /** Case and accents folded, so a stemmer that strips diacritics still lines up with its word. */
 function fold(text: string): string {
-  return text.normalize('NFD').replace(/\p{M}/gu, '').toLowerCase();
+  return text.normalize('NFD').replace(MARKS, '').toLowerCase();
 }
 
 /**

@@ -11,6 +11,10 @@
  */
 import type { BarredKind, ParsedDocument } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LEADING_MARKS = /^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u;
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+
 export type { BarredKind };
 export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference';
 
@@ -68,7 +72,7 @@ export function normalizeSentence(text: string): string {
     .toLowerCase()
     .replace(/[`*_~]/g, '')
     .replace(/\s+/g, ' ')
-    .replace(/^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u, '')
+    .replace(LEADING_MARKS, '')
     .replace(/[\s.,;:!?]+$/u, '')
     .trim();
 }
@@ -118,7 +122,7 @@ function isLinkOnly(source: string): boolean {
     .replace(/<https?:\/\/[^>]+>/g, ' ')
     .replace(/https?:\/\/\S+/g, ' ')
     .replace(/^\s*(?:[-*+]|\d+[.)])\s+/, ' ');
-  return rest !== source && !/[\p{L}\p{N}]/u.test(rest);
+  return rest !== source && !LETTER_OR_DIGIT.test(rest);
 }
 
 export interface SentenceKinds {

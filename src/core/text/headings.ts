@@ -8,6 +8,9 @@
  * "heading dictionary" for his location method.
  */
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const HEADING_WORD = /[\p{L}\p{N}]+(?:['’][\p{L}\p{N}]+)*/gu;
+
 export type HeadingClass = 'abstract' | 'introduction' | 'proposal' | 'detail' | 'discussion' | 'aside' | 'backMatter';
 
 export interface HeadingClassEntry {
@@ -75,7 +78,7 @@ const NUMBERING = /^\s*(?:\d+(?:\.\d+)*\.?|[ivxlc]+\.|[a-z]\))\s+/iu;
 
 /** Heading words: section numbering dropped ("2.1", "IV."), lower case, letters and digits only. */
 export function headingWords(heading: string): string[] {
-  return heading.replace(NUMBERING, '').toLowerCase().match(/[\p{L}\p{N}]+(?:['’][\p{L}\p{N}]+)*/gu) ?? [];
+  return heading.replace(NUMBERING, '').toLowerCase().match(HEADING_WORD) ?? [];
 }
 
 /** Headings compared without numbering, punctuation or case: "7. References" matches "references". */

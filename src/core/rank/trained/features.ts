@@ -130,10 +130,14 @@ function thematicTerms(a: AnalyzedDocument): Set<string> {
   return new Set(frequent.slice(0, THEMATIC_WORDS).map(([term]) => term));
 }
 
+/** Module-level, not in the function: the bundler turns a \p{…} literal into `new RegExp(…)` at every call. */
+const WORD_FOR_CAPITALS = /[\p{L}][\p{L}\p{N}'’-]*/gu;
+
 /** A capitalised word after the first word (proper nouns, names of things); acronyms count too. */
 function hasInnerCapital(text: string): boolean {
   // Word by word, stopping at the first capital (matching every word of every sentence cost more).
-  const word = /[\p{L}][\p{L}\p{N}'’-]*/gu;
+  const word = WORD_FOR_CAPITALS;
+  word.lastIndex = 0;
   if (word.exec(text) === null) return false;
   for (let match = word.exec(text); match !== null; match = word.exec(text)) {
     const first = match[0][0]!;
