@@ -177,7 +177,7 @@ function termsOfWord(word: string, lang: string): readonly string[] {
 const NO_TERMS: readonly string[] = [];
 
 /** Characters read to detect the language; enough for a stable stop-word count. */
-const DETECTION_SAMPLE = 20_000;
+export const DETECTION_SAMPLE = 20_000;
 const LATIN_RUNS = /\p{sc=Latin}+/gu;
 /** Runs of each script's characters; counted in code points (see charactersIn). */
 const SCRIPT_PATTERNS: readonly (readonly [Script, RegExp])[] = [
@@ -235,9 +235,10 @@ function languagesOfScript(script: Script): readonly Language[] {
 /**
  * Language of `text` (ISO 639-1): the dominant script first (Japanese whenever Kana is common,
  * since Japanese mixes Kana with Han), then the language of that script whose stop words occur
- * most often. 'en' when nothing fits.
+ * most often. 'en' when nothing fits. `sampleTokens`, when given, returns what
+ * wordTokens(text.slice(0, DETECTION_SAMPLE)) would, from tokens the caller already has.
  */
-export function detectLanguage(text: string): string {
+export function detectLanguage(text: string, sampleTokens?: () => readonly string[]): string {
   const sample = text.slice(0, DETECTION_SAMPLE);
   const counts = new Map<Script, number>();
   for (const [script, runs] of SCRIPT_PATTERNS) counts.set(script, script === 'latin' ? latinCharacters(sample) : charactersIn(sample, runs));
@@ -255,7 +256,8 @@ export function detectLanguage(text: string): string {
   if (script === null) return 'en';
   const candidates = languagesOfScript(script);
   if (candidates.length === 1) return candidates[0]?.code ?? 'en';
-  return mostStopWords(wordTokens(sample), candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
+  const tokens = sampleTokens ? sampleTokens() : wordTokens(sample);
+  return mostStopWords(tokens, candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
 }
 
 /** Per list of candidate languages: which of them (by position) have each stop word. */
