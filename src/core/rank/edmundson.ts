@@ -91,11 +91,16 @@ export function phraseIndex(phrases: readonly string[]): PhraseIndex {
 export function countPhrases(words: readonly string[], phrases: readonly string[] | PhraseIndex): number {
   const index = Array.isArray(phrases) ? phraseIndex(phrases) : (phrases as PhraseIndex);
   let count = 0;
-  words.forEach((word, start) => {
-    for (const parts of index.get(word) ?? []) {
-      if (parts.every((part, k) => words[start + k] === part)) count++;
+  // Runs for every sentence under several phrase lists: plain loops, nothing allocated per word.
+  for (let start = 0; start < words.length; start++) {
+    const candidates = index.get(words[start]!);
+    if (candidates === undefined) continue;
+    for (const parts of candidates) {
+      let k = 1;
+      while (k < parts.length && words[start + k] === parts[k]) k++;
+      if (k === parts.length) count++;
     }
-  });
+  }
   return count;
 }
 
