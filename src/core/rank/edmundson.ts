@@ -17,6 +17,7 @@
 import { headingClassesOf, type HeadingClass } from '../text/headings';
 import type { AnalyzedDocument, CueWords, RankResult } from '../types';
 import { isProseBlock } from './position';
+import { termIndexOf } from '../vectors';
 
 export interface EdmundsonWeights {
   readonly cue: number;
@@ -111,12 +112,12 @@ export function cueComponent(a: AnalyzedDocument, cues: CueWords): Float64Array 
 }
 
 export function keyComponent(a: AnalyzedDocument, keyMinCount: number): Float64Array {
-  const counts = new Map<string, number>();
-  for (const terms of a.terms) for (const term of terms) counts.set(term, (counts.get(term) ?? 0) + 1);
+  // Document counts of every term, from the shared term index.
+  const { vocabulary, totalCount } = termIndexOf(a);
   return Float64Array.from(a.terms, (terms) => {
     let sum = 0;
     for (const term of terms) {
-      const count = counts.get(term)!;
+      const count = totalCount[vocabulary.get(term)!]!;
       if (count >= keyMinCount) sum += count;
     }
     return sum;
