@@ -113,6 +113,20 @@ function containsPhrase(words: readonly string[], phrase: readonly string[]): bo
  * count, so "Future work" is judged by its own entry rather than by "Future" and "work" apart.
  */
 export function headingClassesOf(heading: string): HeadingClass[] {
+  // Several rankers and the selector ask about every section's heading: each heading is read once.
+  let classes = classesByHeading.get(heading);
+  if (classes === undefined) {
+    classes = classesOfHeading(heading);
+    if (classesByHeading.size >= MAX_CACHED_HEADINGS) classesByHeading.clear();
+    classesByHeading.set(heading, classes);
+  }
+  return [...classes];
+}
+
+const classesByHeading = new Map<string, readonly HeadingClass[]>();
+const MAX_CACHED_HEADINGS = 10_000;
+
+function classesOfHeading(heading: string): HeadingClass[] {
   const words = headingWords(heading);
   const matched = CLASS_PHRASES.filter((entry) => containsPhrase(words, entry.words));
   return matched
