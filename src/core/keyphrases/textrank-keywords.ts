@@ -24,6 +24,7 @@ import { stem, stopWords, wordTokens } from '../text/tokens';
 import { pageRank } from '../rank/power-iteration';
 import type { CsrGraph } from '../rank/similarity-graph';
 import { isEnglishNonKeyword } from './english-shapes';
+import { phraseMatches } from './phrase-matches';
 
 export interface KeyPhraseSettings {
   readonly window: number;
@@ -248,22 +249,20 @@ function csrOf(n: number, edges: ReadonlySet<number>): CsrGraph {
   return { size: n, offsets, targets, weights: new Float64Array(targets.length).fill(1) };
 }
 
-const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-
 /**
  * Spans of a phrase in the source of the sentences that hold it: its words in order, any case,
- * separated by anything that is not a letter or digit (markup, line breaks), never inside a word.
+ * separated by anything that is not a letter or digit (markup, line breaks), never inside a word
+ * (phrase-matches.ts).
  */
 function occurrencesOf(a: AnalyzedDocument, phrase: string, sentences: ReadonlySet<number>, limit: number): Span[] {
   const { doc } = a;
-  const pattern = new RegExp(`(?<![\\p{L}\\p{N}])${phrase.split(' ').map(escapeRegExp).join('[^\\p{L}\\p{N}]{1,12}')}(?![\\p{L}\\p{N}])`, 'giu');
   const spans: Span[] = [];
   for (const index of [...sentences].sort((x, y) => x - y)) {
     const { span } = doc.sentences[index]!;
     const source = doc.text.slice(span.start - doc.baseOffset, span.end - doc.baseOffset);
-    for (const match of source.matchAll(pattern)) {
+    for (const match of phraseMatches(source, phrase)) {
       if (spans.length >= limit) return spans;
-      spans.push({ start: span.start + match.index, end: span.start + match.index + match[0].length });
+      spans.push({ start: span.start + match.start, end: span.start + match.end });
     }
   }
   return spans;
