@@ -16,7 +16,7 @@
  *
  * The band values are ours (common practice, no source); Luhn chose his cutoffs by inspection.
  */
-import { contentTerms } from '../text/tokens';
+import { wordTerms } from '../text/tokens';
 import { termIndexOf } from '../vectors';
 import type { AnalyzedDocument, RankResult } from '../types';
 
@@ -179,7 +179,7 @@ export function luhnRank(a: AnalyzedDocument, options: LuhnOptions = {}): RankRe
   const n = a.terms.length;
   const scores = new Float64Array(n);
   const significantWords = new Float64Array(n);
-  const termsOfWord = memoize((word: string) => contentTerms([word], a.language));
+  const termsOfWord = (word: string) => wordTerms(word, a.language);
   for (let s = 0; s < n; s++) {
     const terms = a.terms[s]!;
     const position = termPositions(a.words[s] ?? [], terms, termsOfWord);
@@ -192,17 +192,4 @@ export function luhnRank(a: AnalyzedDocument, options: LuhnOptions = {}): RankRe
     scores[s] = significanceFactor(positions, settings.gapLimit);
   }
   return { scores, features: { luhn: scores, significantWords } };
-}
-
-/** A document repeats its words; stemming each distinct word once is enough. */
-function memoize<T>(compute: (word: string) => T): (word: string) => T {
-  const cache = new Map<string, T>();
-  return (word) => {
-    let value = cache.get(word);
-    if (value === undefined) {
-      value = compute(word);
-      cache.set(word, value);
-    }
-    return value;
-  };
 }

@@ -130,15 +130,25 @@ export function contentTerms(words: readonly string[], lang: string): string[] {
   const cache = wordTermCache(lang);
   const terms: string[] = [];
   for (const word of words) {
-    let own = cache.get(word);
-    if (own === undefined) {
-      own = termsOfWord(word, lang);
-      if (cache.size >= MAX_CACHED_WORDS) cache.clear();
-      cache.set(word, own);
-    }
+    const own = cachedWordTerms(cache, word, lang);
     for (let k = 0; k < own.length; k++) terms.push(own[k]!);
   }
   return terms;
+}
+
+/** contentTerms([word], lang), read-only and without a copy (for callers asking word by word). */
+export function wordTerms(word: string, lang: string): readonly string[] {
+  return cachedWordTerms(wordTermCache(lang), word, lang);
+}
+
+function cachedWordTerms(cache: Map<string, readonly string[]>, word: string, lang: string): readonly string[] {
+  let own = cache.get(word);
+  if (own === undefined) {
+    own = termsOfWord(word, lang);
+    if (cache.size >= MAX_CACHED_WORDS) cache.clear();
+    cache.set(word, own);
+  }
+  return own;
 }
 
 /**
