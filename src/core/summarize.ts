@@ -5,7 +5,7 @@
  * `finishSummary`) so the benchmarks time and tune exactly what ships, and reuse one ranking for
  * several lengths, instead of composing a pipeline of their own.
  */
-import { analyze, resolveLanguage } from './analyze';
+import { analyze, resolveLanguage, sentenceWords } from './analyze';
 import { findStandAloneProblems, repairAutomatically } from './coherence/index';
 import { FORMAT_IDS } from './formats/catalog';
 import { parseDocument } from './formats/registry';
@@ -77,7 +77,8 @@ export function prepareDocument(text: string, request: SummarizeRequest = {}): P
   const { options, format, baseOffset } = checked;
   request.onStage?.('reading');
   const { doc, notices } = withWellFormedTexts(parseDocument(text, { format, baseOffset, includeTables: options.includeTables, includeFootnotes: options.includeFootnotes }));
-  const analyzed = analyze(doc, resolveLanguage(doc, options.language));
+  const words = sentenceWords(doc);
+  const analyzed = analyze(doc, resolveLanguage(doc, options.language, words), words);
   return { ok: true, prepared: { analyzed, options, ...(notices.length > 0 ? { notices } : {}) } };
 }
 

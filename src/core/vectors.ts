@@ -48,9 +48,16 @@ export function buildTermIndex(sentences: readonly (readonly string[])[]): TermI
   const vocabulary = new Map<string, number>();
   const frequency: number[] = [];
   const total: number[] = [];
-  const counts = sentences.map((terms) => {
-    const sorted = new Int32Array(terms.length);
-    terms.forEach((term, k) => {
+  // Every sentence's ids in one buffer, each sentence's part sorted in place; the vectors are then
+  // views of two shared buffers: one allocation per document instead of three per sentence.
+  let termCount = 0;
+  for (const terms of sentences) termCount += terms.length;
+  const sortedIds = new Int32Array(termCount);
+  const from = new Int32Array(sentences.length + 1);
+  let at = 0;
+  sentences.forEach((terms, s) => {
+    from[s] = at;
+    for (const term of terms) {
       let id = vocabulary.get(term);
       if (id === undefined) {
         id = vocabulary.size;
@@ -58,24 +65,30 @@ export function buildTermIndex(sentences: readonly (readonly string[])[]): TermI
         frequency.push(0);
         total.push(0);
       }
-      sorted[k] = id;
+      sortedIds[at++] = id;
       total[id]! += 1;
-    });
-    sorted.sort();
-    // Run-length encode the sorted ids into (id, count) pairs.
-    let distinct = 0;
-    for (let k = 0; k < sorted.length; k++) if (k === 0 || sorted[k] !== sorted[k - 1]) distinct++;
-    const ids = new Int32Array(distinct);
-    const values = new Float64Array(distinct);
-    let slot = -1;
-    for (let k = 0; k < sorted.length; k++) {
-      if (k === 0 || sorted[k] !== sorted[k - 1]) {
-        ids[++slot] = sorted[k]!;
-        frequency[sorted[k]!]! += 1;
-      }
-      values[slot]! += 1;
     }
-    return makeVector(ids, values);
+    sortedIds.subarray(from[s]!, at).sort();
+  });
+  from[sentences.length] = at;
+  // Run-length encode each sentence's sorted ids into (id, count) pairs.
+  let distinct = 0;
+  for (let s = 0; s < sentences.length; s++) {
+    for (let k = from[s]!; k < from[s + 1]!; k++) if (k === from[s] || sortedIds[k] !== sortedIds[k - 1]) distinct++;
+  }
+  const allIds = new Int32Array(distinct);
+  const allValues = new Float64Array(distinct);
+  let slot = -1;
+  const counts = sentences.map((_, s) => {
+    const first = slot + 1;
+    for (let k = from[s]!; k < from[s + 1]!; k++) {
+      if (k === from[s] || sortedIds[k] !== sortedIds[k - 1]) {
+        allIds[++slot] = sortedIds[k]!;
+        frequency[sortedIds[k]!]! += 1;
+      }
+      allValues[slot]! += 1;
+    }
+    return makeVector(allIds.subarray(first, slot + 1), allValues.subarray(first, slot + 1));
   });
   return {
     vocabulary,
@@ -122,19 +135,23 @@ export function sentenceVectorsOf(a: AnalyzedDocument): readonly SparseVector[] 
 
 /** tf·idf vectors (tf = raw count in the sentence); entries whose weight is 0 are dropped. */
 export function tfidfVectors(index: TermIndex, idf: Float64Array): SparseVector[] {
+  // Kept entries of all sentences in two shared buffers (views per sentence), as in buildTermIndex.
+  let kept = 0;
+  for (const counts of index.counts) {
+    for (let k = 0; k < counts.ids.length; k++) if (counts.values[k]! * idf[counts.ids[k]!]! > 0) kept++;
+  }
+  const allIds = new Int32Array(kept);
+  const allValues = new Float64Array(kept);
+  let slot = 0;
   return index.counts.map((counts) => {
-    const keep: number[] = [];
-    counts.ids.forEach((id, k) => {
-      if (counts.values[k]! * idf[id]! > 0) keep.push(k);
-    });
-    const ids = new Int32Array(keep.length);
-    const values = new Float64Array(keep.length);
-    keep.forEach((k, slot) => {
+    const first = slot;
+    for (let k = 0; k < counts.ids.length; k++) {
       const id = counts.ids[k]!;
-      ids[slot] = id;
-      values[slot] = counts.values[k]! * idf[id]!;
-    });
-    return makeVector(ids, values);
+      if (!(counts.values[k]! * idf[id]! > 0)) continue;
+      allIds[slot] = id;
+      allValues[slot++] = counts.values[k]! * idf[id]!;
+    }
+    return makeVector(allIds.subarray(first, slot), allValues.subarray(first, slot));
   });
 }
 
@@ -155,7 +172,12 @@ export function dot(a: SparseVector, b: SparseVector): number {
 
 /** 0/1 vectors: their dot product counts the distinct terms two sentences share. */
 export function presenceVectors(index: TermIndex): SparseVector[] {
-  return index.counts.map((counts) => makeVector(counts.ids, new Float64Array(counts.ids.length).fill(1)));
+  let entries = 0;
+  for (const counts of index.counts) entries += counts.ids.length;
+  // One buffer of ones; every sentence's values are a view of it.
+  const ones = new Float64Array(entries).fill(1);
+  let at = 0;
+  return index.counts.map((counts) => makeVector(counts.ids, ones.subarray(at, (at += counts.ids.length))));
 }
 
 /** Cosine of two sparse vectors; 0 when either is empty (no direction to compare). */

@@ -1,4 +1,5 @@
 import assert from 'node:assert/strict';
+import fc from 'fast-check';
 import { analyze } from '../../src/core/analyze';
 import { FEATURES, rankBins, sentenceFeatures } from '../../src/core/rank/trained/features';
 import { labelSentences, termOverlapF1 } from '../../src/core/rank/trained/labels';
@@ -101,6 +102,21 @@ describe('features', () => {
   it('bins ranks by share of the document (top 10%, 10-25%, 25-50%, rest)', () => {
     const scores = Float64Array.from([10, 9, 8, 7, 6, 5, 4, 3, 2, 1]);
     assert.deepEqual([...rankBins(scores)], [0, 1, 1, 2, 2, 3, 3, 3, 3, 3]);
+  });
+
+  it('ranks a sentence by the number of higher scores, so ties share the better rank', () => {
+    // The definition, counted pair by pair, against rankBins on tie-heavy scores (zeros of both signs included).
+    const bin = (share: number) => (share < 0.1 ? 0 : share < 0.25 ? 1 : share < 0.5 ? 2 : 3);
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(0, -0, 0.25, 0.5, 1, 1e-300, 3, -2), { maxLength: 40 }), (values) => {
+        const scores = Float64Array.from(values);
+        const n = scores.length;
+        const expected = [...scores].map((score) => bin(n <= 1 ? 0 : [...scores].filter((other) => other > score).length / n));
+        assert.deepEqual([...rankBins(scores)], expected);
+      }),
+      { numRuns: 500 },
+    );
+    assert.deepEqual([...rankBins(Float64Array.from([2, 2, 1, 1, 1, 1, 1, 1, 1, 1]))], [0, 0, 1, 1, 1, 1, 1, 1, 1, 1]);
   });
 });
 

@@ -9,7 +9,8 @@ import assert from 'node:assert/strict';
 import { readdirSync, readFileSync, existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { parseDocument } from '../../src/core/formats/registry';
-import { barredKind, fragmentKind, normalizeSentence } from '../../src/core/select/sentence-kinds';
+import fc from 'fast-check';
+import { barredKind, fragmentKind, normalizeSentence, sentenceKinds } from '../../src/core/select/sentence-kinds';
 import { wordTokens } from '../../src/core/text/tokens';
 import { CORPUS_DIR, corpusFiles } from './helpers/corpus';
 
@@ -108,5 +109,25 @@ describe('sentence kinds: fragments', () => {
   it('normalizes copies to one key', () => {
     assert.equal(normalizeSentence('  The **ferry** leaves at nine.  '), normalizeSentence('the ferry leaves at nine'));
     assert.notEqual(normalizeSentence('The ferry leaves at nine.'), normalizeSentence('The ferry leaves at ten.'));
+  });
+
+  // sentenceKinds reuses a sentence's key for its barred check, which keys the trimmed text.
+  it('gives a text and its trimmed text the same key', () => {
+    const piece = fc.constantFrom(' ', '\t', '\n', '\u00a0', '\u3000', '\ufeff', '*', '`', '_', '~', '-', '(', '.', ',', ':', '?', '#', 'é', 'Σ', 'a', 'N', '7', '\u0301');
+    fc.assert(
+      fc.property(fc.array(piece, { maxLength: 12 }).map((parts) => parts.join('')), (text) => {
+        assert.equal(normalizeSentence(text), normalizeSentence(text.trim()));
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it('classifies sentences as barredKind does, one by one', () => {
+    const text = ['# Notes', '', 'N/A', '', 'Signed-off-by: Ada <ada@ferry.example>', '', 'TODO: timetable', '', 'The ferry leaves at nine every morning from the north pier.'].join('\n');
+    const doc = parseDocument(text, { format: 'markdown' });
+    const counts = doc.sentences.map((s) => words(s.text));
+    const kinds = sentenceKinds(doc, counts);
+    assert.deepEqual(kinds.barred, doc.sentences.map((s, i) => barredKind(s.text, counts[i]!)));
+    assert.deepEqual(kinds.barred.slice(0, 3), ['placeholder', 'boilerplate', 'placeholder']);
   });
 });

@@ -1,6 +1,7 @@
 import assert from 'node:assert/strict';
 import { deu, eng, fra, rus } from 'stopword';
 import porterModule from 'natural/lib/natural/stemmers/porter_stemmer.js';
+import { languageFor } from '../../src/core/text/languages';
 import {
   SUPPORTED_LANGUAGES,
   contentTerms,
@@ -225,6 +226,16 @@ describe('tokens', () => {
     it('defaults to English when there is nothing to go on', () => {
       assert.equal(detectLanguage(''), 'en');
       assert.equal(detectLanguage('1234 5678 !!!'), 'en');
+    });
+
+    it('counts a script in characters: accented and astral Latin letters count once each', () => {
+      // Five Cyrillic letters against Latin ones; 'é' and U+1DF00 (Latin Extended-G) are Latin, digits and marks are not.
+      const cyrillic = 'жжжжж';
+      assert.equal(languageFor(detectLanguage(`${cyrillic} ab12`))?.script, 'cyrillic');
+      assert.equal(languageFor(detectLanguage(`${cyrillic} ab\u{1DF00}\u{1DF00}`))?.script, 'cyrillic'); // 4 Latin
+      assert.equal(languageFor(detectLanguage(`${cyrillic} abé\u{1DF00}\u{1DF00}x`))?.script, 'latin'); // 6 Latin
+      assert.equal(languageFor(detectLanguage(`${cyrillic} abcd!?`))?.script, 'cyrillic');
+      assert.equal(languageFor(detectLanguage(`${cyrillic} ABCDéF`))?.script, 'latin');
     });
 
     it('only returns supported languages', () => {

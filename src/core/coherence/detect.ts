@@ -8,6 +8,9 @@ import { contextSource } from './context';
 import { trimLeadingConnective } from './trim';
 import { danglingTriggers, type TriggerHit } from './triggers';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const WORD_CHARACTER = /[\p{L}\d]/u;
+
 export interface CheckOptions {
   /** Score per sentence (higher is better). Without it, "replace" repairs carry no replacement. */
   readonly scores?: ArrayLike<number>;
@@ -186,7 +189,7 @@ function nearestOccurrence(haystack: string, needle: string, near: number): numb
   for (let at = lowerHay.indexOf(lowerNeedle); at >= 0; at = lowerHay.indexOf(lowerNeedle, at + 1)) {
     const before = at === 0 ? '' : haystack[at - 1]!;
     const after = haystack[at + needle.length] ?? '';
-    if (/[\p{L}\d]/u.test(before) || /[\p{L}\d]/u.test(after)) continue; // whole words only
+    if (WORD_CHARACTER.test(before) || WORD_CHARACTER.test(after)) continue; // whole words only
     if (best < 0 || Math.abs(at - near) < Math.abs(best - near)) best = at;
   }
   return best;

@@ -16,6 +16,9 @@ import { isGenericIt } from './generic-it';
 import { isClauseBreak, isWord, nextWord, previousWord, type Token } from './tokens';
 import { DETERMINERS, FUNCTION_WORDS, PREPOSITIONS, SUBORDINATORS, looksPlural } from './words';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const STARTS_UPPER = /^\p{Lu}/u;
+
 export interface FoundTrigger {
   readonly trigger: 'pronoun' | 'demonstrative' | 'backReference' | 'additive';
   /** Token range, half-open. */
@@ -219,7 +222,7 @@ function verbBeforePronoun(tokens: readonly Token[], i: number, pronoun: number)
 
 function looksLikeNounPhraseHead(tokens: readonly Token[], i: number): boolean {
   const prev = previousWord(tokens, i);
-  if (prev < 0) return /^\p{Lu}/u.test(tokens[i]!.text); // first word of the sentence
+  if (prev < 0) return STARTS_UPPER.test(tokens[i]!.text); // first word of the sentence
   const prevWord = tokens[prev]!.lower;
   if (isImperativeObject(tokens, i, prev)) return true;
   if (DETERMINERS.has(prevWord) || SUBORDINATORS.has(prevWord) || prevWord === 'and') return true;
@@ -240,13 +243,13 @@ function isImperativeObject(tokens: readonly Token[], i: number, prev: number): 
   const word = tokens[i]!.lower;
   const opener = tokens[prev]!.lower;
   if (prev !== 0 || i !== prev + 1 || !looksPlural(word) || FUNCTION_WORDS.has(word)) return false;
-  if (FUNCTION_WORDS.has(opener) || /(s|ed|ing)$/.test(opener) || !/^\p{Lu}/u.test(tokens[prev]!.text)) return false;
+  if (FUNCTION_WORDS.has(opener) || /(s|ed|ing)$/.test(opener) || !STARTS_UPPER.test(tokens[prev]!.text)) return false;
   const after = tokens[i + 1];
   return isWord(after) && DETERMINERS.has(after.lower) && !/^(that|this|these|those|their|its)$/.test(after.lower);
 }
 
 function isCapitalizedName(tokens: readonly Token[], i: number): boolean {
-  return previousWord(tokens, i) >= 0 && /^\p{Lu}/u.test(tokens[i]!.text);
+  return previousWord(tokens, i) >= 0 && STARTS_UPPER.test(tokens[i]!.text);
 }
 
 /** "Tomasz and Ravi", "the probe and the valve": a coordination counts as plural. */

@@ -3,6 +3,9 @@
  * sentence text, lower-cased forms with contractions split off ("it's" → "it" + implied "is").
  */
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const STARTS_WITH_LETTER = /^\p{L}/u;
+
 export interface Token {
   /** As written. */
   readonly text: string;
@@ -37,7 +40,7 @@ export function tokenize(text: string): Token[] {
     const end = start + raw.length;
     if (/^\d/.test(raw)) {
       tokens.push({ text: raw, lower: raw, kind: 'number', start, end });
-    } else if (/^\p{L}/u.test(raw)) {
+    } else if (STARTS_WITH_LETTER.test(raw)) {
       const straight = raw.toLowerCase().replace(/’/g, "'");
       const contraction = CONTRACTION.exec(straight);
       // "isn't" keeps its stem as "is" with a "not"; possessive "'s" on nouns is harmless here.

@@ -24,6 +24,7 @@ import { stem, stopWords, wordTokens } from '../text/tokens';
 import { pageRank } from '../rank/power-iteration';
 import type { CsrGraph } from '../rank/similarity-graph';
 import { isEnglishNonKeyword } from './english-shapes';
+import { phraseMatches } from './phrase-matches';
 
 export interface KeyPhraseSettings {
   readonly window: number;
@@ -104,17 +105,22 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
 
   const clauses = clausesOf(a);
   const vertexOf = new Map<string, number>();
-  /** Per clause: the vertex of each token, or -1 for a filtered word. */
-  const clauseVertices: Int32Array[] = [];
+  // The filter and the stem depend on the token alone, so each distinct token is judged once.
+  const vertexOfToken = new Map<string, number>();
+  /** Per clause: the vertex of each token, or -1 for a filtered word (plain arrays: thousands of tiny typed arrays cost more). */
+  const clauseVertices: number[][] = [];
   for (const clause of clauses) {
-    const vertices = new Int32Array(clause.tokens.length).fill(-1);
+    const vertices = new Array<number>(clause.tokens.length);
     clause.tokens.forEach((token, k) => {
-      if (!isCandidate(token)) return;
-      const key = stem(token, a.language);
-      let id = vertexOf.get(key);
+      let id = vertexOfToken.get(token);
       if (id === undefined) {
-        id = vertexOf.size;
-        vertexOf.set(key, id);
+        id = -1;
+        if (isCandidate(token)) {
+          const key = stem(token, a.language);
+          id = vertexOf.get(key) ?? vertexOf.size;
+          if (id === vertexOf.size) vertexOf.set(key, id);
+        }
+        vertexOfToken.set(token, id);
       }
       vertices[k] = id;
     });
@@ -150,11 +156,10 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
   // Step 3: PageRank over the undirected, unweighted graph.
   const { scores } = pageRank(csrOf(n, edges), settings);
   const keep = Math.min(settings.maxKeywords, Math.max(1, Math.round(n * settings.keepShare)));
-  const order = Array.from({ length: n }, (_, v) => v).sort((x, y) => scores[y]! - scores[x]! || x - y);
-  // Words tied with the last kept one are kept too: the cut never chooses among equals by position.
-  const cutScore = scores[order[keep - 1]!]!;
+  // The keep-th highest score; words tied with it are kept too: the cut never chooses among equals by position.
+  const cutScore = Float64Array.from(scores).sort()[n - keep]!;
   const isKeyword = new Uint8Array(n);
-  for (const v of order) if (scores[v]! >= cutScore * (1 - TIE_TOLERANCE)) isKeyword[v] = 1;
+  for (let v = 0; v < n; v++) if (scores[v]! >= cutScore * (1 - TIE_TOLERANCE)) isKeyword[v] = 1;
 
   // Step 4: collapse adjacent keywords into phrases; count them and their written forms.
   interface Tally {
@@ -176,7 +181,7 @@ export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhr
       }
       let end = k;
       while (end < vertices.length && vertices[end]! >= 0 && isKeyword[vertices[end]!]) end++;
-      const ids = Array.from(vertices.subarray(k, end));
+      const ids = vertices.slice(k, end);
       // A run that repeats a word ("type type") or runs on is not a phrase; its words still count alone.
       if (ids.length > 1 && (ids.length > settings.maxPhraseWords || new Set(ids).size < ids.length)) {
         for (let w = k; w < end; w++) tallyPhrase([vertices[w]!], clause.tokens[w]!, clause.sentence);
@@ -244,22 +249,20 @@ function csrOf(n: number, edges: ReadonlySet<number>): CsrGraph {
   return { size: n, offsets, targets, weights: new Float64Array(targets.length).fill(1) };
 }
 
-const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-
 /**
  * Spans of a phrase in the source of the sentences that hold it: its words in order, any case,
- * separated by anything that is not a letter or digit (markup, line breaks), never inside a word.
+ * separated by anything that is not a letter or digit (markup, line breaks), never inside a word
+ * (phrase-matches.ts).
  */
 function occurrencesOf(a: AnalyzedDocument, phrase: string, sentences: ReadonlySet<number>, limit: number): Span[] {
   const { doc } = a;
-  const pattern = new RegExp(`(?<![\\p{L}\\p{N}])${phrase.split(' ').map(escapeRegExp).join('[^\\p{L}\\p{N}]{1,12}')}(?![\\p{L}\\p{N}])`, 'giu');
   const spans: Span[] = [];
   for (const index of [...sentences].sort((x, y) => x - y)) {
     const { span } = doc.sentences[index]!;
     const source = doc.text.slice(span.start - doc.baseOffset, span.end - doc.baseOffset);
-    for (const match of source.matchAll(pattern)) {
+    for (const match of phraseMatches(source, phrase)) {
       if (spans.length >= limit) return spans;
-      spans.push({ start: span.start + match.index, end: span.start + match.index + match[0].length });
+      spans.push({ start: span.start + match.start, end: span.start + match.end });
     }
   }
   return spans;

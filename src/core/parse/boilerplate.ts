@@ -7,6 +7,11 @@
 import type { List, ListItem, Paragraph, PhrasingContent } from 'mdast';
 import type { SkipReason } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const STARTS_LOWER = /^\p{Ll}/u;
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+const ONLY_MARKS = /^[\s\p{P}\p{S}]*$/u;
+
 /**
  * `Key: value`, the key being 1-4 short words starting with a letter (`Start Date`, `RFC PR #`);
  * a `::` path separator is not a key's colon.
@@ -34,11 +39,11 @@ export function isMetadataRun(lines: readonly string[]): boolean {
     const match = METADATA_LINE.exec(line);
     if (match === null) return false;
     if (line.indexOf(':') > MAX_KEY_LENGTH) return false;
-    if (!/^\p{Ll}/u.test(line)) capitalized++;
+    if (!STARTS_LOWER.test(line)) capitalized++;
     const value = match[1]!.trim();
     if (value.length === 0) continue;
     if (value.startsWith('//')) return false; // `https://…`: a URL, not a key
-    if (!/[\p{L}\p{N}]/u.test(value)) return false; // `Example::` introduces a literal block
+    if (!LETTER_OR_DIGIT.test(value)) return false; // `Example::` introduces a literal block
     withValue++;
     const words = value.split(/\s+/).length;
     const lone = lines.length === 1;
@@ -50,7 +55,7 @@ export function isMetadataRun(lines: readonly string[]): boolean {
 
 /** Text between links that is only separators (spaces, punctuation, symbols). */
 function isSeparator(node: PhrasingContent): boolean {
-  return (node.type === 'text' && /^[\s\p{P}\p{S}]*$/u.test(node.value)) || node.type === 'break';
+  return (node.type === 'text' && ONLY_MARKS.test(node.value)) || node.type === 'break';
 }
 
 function isImage(node: PhrasingContent): boolean {

@@ -13,6 +13,9 @@
 import { splitSentences, type LineBreaks } from '../segment/sentences';
 import type { Span } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+
 export interface NormalizedText {
   readonly text: string;
   /** Start of the source range (local to the parsed string) that produced each UTF-16 unit. */
@@ -99,10 +102,12 @@ export class InlineTextBuilder {
   finish(): NormalizedText {
     const count = this.units.length;
     const units: number[] = [];
-    const starts = new Int32Array(count);
-    const ends = new Int32Array(count);
+    // Written into shared scratch arrays and copied out at their final length.
+    const { starts, ends } = offsetsFor(count);
     const softBreaks: number[] = [];
-    const isSoftBreak = new Set(this.lineBreaks.filter((i) => this.units[i] === SPACE));
+    // Line breaks ascend, so one cursor finds whether unit i is a soft break.
+    const { lineBreaks } = this;
+    let nextBreak = 0;
     let pendingBlank = -1; // index of the first blank of a run not yet written
     let pendingSoft = false; // that run holds a soft line break
     /** Output index of each unit that was written, -1 for a unit collapsed away (code ranges only). */
@@ -116,7 +121,8 @@ export class InlineTextBuilder {
         if (units.length === 0 || units[units.length - 1] === LINE_FEED) continue;
       } else if (isBlank(code)) {
         if (pendingBlank < 0) pendingBlank = i;
-        if (isSoftBreak.has(i)) pendingSoft = true;
+        while (nextBreak < lineBreaks.length && lineBreaks[nextBreak]! < i) nextBreak++;
+        if (lineBreaks[nextBreak] === i && code === SPACE) pendingSoft = true;
         continue;
       } else {
         if (pendingBlank >= 0 && units.length > 0 && units[units.length - 1] !== LINE_FEED) {
@@ -147,13 +153,13 @@ export class InlineTextBuilder {
     }
     return {
       text: codesToString(units, 0, length),
-      starts: starts.slice(0, length),
-      ends: ends.slice(0, length),
+      ...finalOffsets(starts, ends, length),
       lines: { softBreaks, deliberate: this.options.deliberateLines ?? false, ...(unbreakable.length > 0 ? { unbreakable } : {}) },
     };
   }
 
-  private pushCode(code: number, start: number, end: number): void {
+  /** One UTF-16 unit, given by its code, produced by the source range `[start, end)`. */
+  pushCode(code: number, start: number, end: number): void {
     this.units.push(code);
     this.starts.push(start);
     this.ends.push(end);
@@ -162,6 +168,22 @@ export class InlineTextBuilder {
 
 const SPACE = 0x20;
 const LINE_FEED = 0x0a;
+
+/** Offsets scratch of finish() for paragraphs up to this many units; a longer one gets its own. */
+const SCRATCH_UNITS = 4096;
+const scratch = { starts: new Int32Array(SCRATCH_UNITS), ends: new Int32Array(SCRATCH_UNITS) };
+
+function offsetsFor(count: number): { starts: Int32Array; ends: Int32Array } {
+  return count <= SCRATCH_UNITS ? scratch : { starts: new Int32Array(count), ends: new Int32Array(count) };
+}
+
+/** The first `length` starts and ends, copied into one buffer (one allocation per paragraph, not two). */
+function finalOffsets(starts: Int32Array, ends: Int32Array, length: number): { starts: Int32Array; ends: Int32Array } {
+  const both = new Int32Array(2 * length);
+  both.set(starts.subarray(0, length));
+  both.set(ends.subarray(0, length), length);
+  return { starts: both.subarray(0, length), ends: both.subarray(length) };
+}
 /** Units per String.fromCharCode call, far below engines' argument limits. */
 const CODES_PER_CALL = 4096;
 
@@ -191,14 +213,19 @@ export function sourceSpan(normalized: NormalizedText, span: Span): Span {
   return { start: normalized.starts[span.start]!, end: normalized.ends[span.end - 1]! };
 }
 
+/** Two blanks in a row, or a blank other than ' ': what /\s+/ → ' ' would change. */
+const NEEDS_COLLAPSE = /\s\s|[^\S ]/;
+
 /** Splits a paragraph's normalized text into sentences, each with its local source range. */
 export function sentencesOf(normalized: NormalizedText): LocalSentence[] {
   if (normalized.text.length === 0) return [];
   const out: LocalSentence[] = [];
   for (const span of splitSentences(normalized.text, normalized.lines)) {
     if (span.end <= span.start) continue;
-    const text = normalized.text.slice(span.start, span.end).replace(/\s+/g, ' ').trim();
-    if (!/[\p{L}\p{N}]/u.test(text)) continue; // stray punctuation is not a sentence
+    const raw = normalized.text.slice(span.start, span.end);
+    // Finished text has its blank runs collapsed already; the replace is needed only where not.
+    const text = (NEEDS_COLLAPSE.test(raw) ? raw.replace(/\s+/g, ' ') : raw).trim();
+    if (!LETTER_OR_DIGIT.test(text)) continue; // stray punctuation is not a sentence
     const source = sourceSpan(normalized, span);
     out.push({ text, start: source.start, end: source.end });
   }

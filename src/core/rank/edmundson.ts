@@ -17,6 +17,7 @@
 import { headingClassesOf, type HeadingClass } from '../text/headings';
 import type { AnalyzedDocument, CueWords, RankResult } from '../types';
 import { isProseBlock } from './position';
+import { termIndexOf } from '../vectors';
 
 export interface EdmundsonWeights {
   readonly cue: number;
@@ -91,11 +92,16 @@ export function phraseIndex(phrases: readonly string[]): PhraseIndex {
 export function countPhrases(words: readonly string[], phrases: readonly string[] | PhraseIndex): number {
   const index = Array.isArray(phrases) ? phraseIndex(phrases) : (phrases as PhraseIndex);
   let count = 0;
-  words.forEach((word, start) => {
-    for (const parts of index.get(word) ?? []) {
-      if (parts.every((part, k) => words[start + k] === part)) count++;
+  // Runs for every sentence under several phrase lists: plain loops, nothing allocated per word.
+  for (let start = 0; start < words.length; start++) {
+    const candidates = index.get(words[start]!);
+    if (candidates === undefined) continue;
+    for (const parts of candidates) {
+      let k = 1;
+      while (k < parts.length && words[start + k] === parts[k]) k++;
+      if (k === parts.length) count++;
     }
-  });
+  }
   return count;
 }
 
@@ -106,12 +112,12 @@ export function cueComponent(a: AnalyzedDocument, cues: CueWords): Float64Array 
 }
 
 export function keyComponent(a: AnalyzedDocument, keyMinCount: number): Float64Array {
-  const counts = new Map<string, number>();
-  for (const terms of a.terms) for (const term of terms) counts.set(term, (counts.get(term) ?? 0) + 1);
+  // Document counts of every term, from the shared term index.
+  const { vocabulary, totalCount } = termIndexOf(a);
   return Float64Array.from(a.terms, (terms) => {
     let sum = 0;
     for (const term of terms) {
-      const count = counts.get(term)!;
+      const count = totalCount[vocabulary.get(term)!]!;
       if (count >= keyMinCount) sum += count;
     }
     return sum;

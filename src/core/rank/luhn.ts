@@ -16,8 +16,12 @@
  *
  * The band values are ours (common practice, no source); Luhn chose his cutoffs by inspection.
  */
-import { contentTerms } from '../text/tokens';
+import { wordTerms } from '../text/tokens';
+import { termIndexOf } from '../vectors';
 import type { AnalyzedDocument, RankResult } from '../types';
+
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const MARKS = /\p{M}/gu;
 
 export interface LuhnSettings {
   /** Most insignificant words allowed between two significant words of one cluster. */
@@ -40,18 +44,19 @@ export interface LuhnOptions {
 
 /** The set of significant terms and the cutoffs that produced it. */
 export function significantTerms(a: AnalyzedDocument, settings: LuhnSettings = LUHN_DEFAULTS): { terms: Set<string>; minCount: number; maxCount: number } {
-  const counts = new Map<string, number>();
+  // The shared term index already counts every term (vocabulary in order of first appearance).
+  const { vocabulary, totalCount } = termIndexOf(a);
   let tokens = 0;
-  for (const terms of a.terms) {
-    for (const term of terms) counts.set(term, (counts.get(term) ?? 0) + 1);
-    tokens += terms.length;
-  }
+  for (const terms of a.terms) tokens += terms.length;
   const minCount = Math.max(settings.minCountFloor, Math.ceil(Math.log10(Math.max(tokens, 1))));
-  const descending = [...counts.values()].sort((x, y) => y - x);
+  const descending = Float64Array.from(totalCount).sort().reverse();
   const dropped = Math.floor(descending.length * settings.dropTopShare);
   const maxCount = dropped > 0 && dropped < descending.length ? descending[dropped]! : Infinity;
   const terms = new Set<string>();
-  for (const [term, count] of counts) if (count >= minCount && count <= maxCount) terms.add(term);
+  for (const [term, id] of vocabulary) {
+    const count = totalCount[id]!;
+    if (count >= minCount && count <= maxCount) terms.add(term);
+  }
   return { terms, minCount, maxCount };
 }
 
@@ -147,7 +152,7 @@ function prefixSimilarity(word: string, term: string): number {
 
 /** Case and accents folded, so a stemmer that strips diacritics still lines up with its word. */
 function fold(text: string): string {
-  return text.normalize('NFD').replace(/\p{M}/gu, '').toLowerCase();
+  return text.normalize('NFD').replace(MARKS, '').toLowerCase();
 }
 
 /**
@@ -174,7 +179,7 @@ export function luhnRank(a: AnalyzedDocument, options: LuhnOptions = {}): RankRe
   const n = a.terms.length;
   const scores = new Float64Array(n);
   const significantWords = new Float64Array(n);
-  const termsOfWord = memoize((word: string) => contentTerms([word], a.language));
+  const termsOfWord = (word: string) => wordTerms(word, a.language);
   for (let s = 0; s < n; s++) {
     const terms = a.terms[s]!;
     const position = termPositions(a.words[s] ?? [], terms, termsOfWord);
@@ -187,17 +192,4 @@ export function luhnRank(a: AnalyzedDocument, options: LuhnOptions = {}): RankRe
     scores[s] = significanceFactor(positions, settings.gapLimit);
   }
   return { scores, features: { luhn: scores, significantWords } };
-}
-
-/** A document repeats its words; stemming each distinct word once is enough. */
-function memoize<T>(compute: (word: string) => T): (word: string) => T {
-  const cache = new Map<string, T>();
-  return (word) => {
-    let value = cache.get(word);
-    if (value === undefined) {
-      value = compute(word);
-      cache.set(word, value);
-    }
-    return value;
-  };
 }

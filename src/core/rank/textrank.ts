@@ -35,18 +35,23 @@ export interface TextRankOptions {
 
 /** Overlap similarity of two sentences given their shared distinct terms and their term counts. */
 export function overlapSimilarity(shared: number, lengthA: number, lengthB: number, minDenominator = TEXTRANK_DEFAULTS.minDenominator): number {
+  return overlapFromLogs(shared, Math.log(lengthA), Math.log(lengthB), minDenominator);
+}
+
+/** overlapSimilarity given the logarithms of the two term counts (the graph takes each once per sentence). */
+function overlapFromLogs(shared: number, logA: number, logB: number, minDenominator: number): number {
   if (shared === 0) return 0;
-  return shared / Math.max(Math.log(lengthA) + Math.log(lengthB), minDenominator);
+  return shared / Math.max(logA + logB, minDenominator);
 }
 
 export function textRankGraph(a: AnalyzedDocument, settings: TextRankSettings = TEXTRANK_DEFAULTS): CsrGraph {
   const index = termIndexOf(a);
-  const lengths = a.terms.map((terms) => terms.length);
+  const logLengths = Float64Array.from(a.terms, (terms) => Math.log(terms.length));
   // The dot product of 0/1 vectors is the number of distinct shared terms.
   return similarityGraph(
     presenceVectors(index),
     index.vocabulary.size,
-    (i, j, shared) => overlapSimilarity(shared, lengths[i]!, lengths[j]!, settings.minDenominator),
+    (i, j, shared) => overlapFromLogs(shared, logLengths[i]!, logLengths[j]!, settings.minDenominator),
     0,
     settings,
   );

@@ -11,6 +11,10 @@
  */
 import type { BarredKind, ParsedDocument } from '../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LEADING_MARKS = /^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u;
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+
 export type { BarredKind };
 export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference';
 
@@ -68,7 +72,7 @@ export function normalizeSentence(text: string): string {
     .toLowerCase()
     .replace(/[`*_~]/g, '')
     .replace(/\s+/g, ' ')
-    .replace(/^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u, '')
+    .replace(LEADING_MARKS, '')
     .replace(/[\s.,;:!?]+$/u, '')
     .trim();
 }
@@ -76,7 +80,14 @@ export function normalizeSentence(text: string): string {
 /** Why a sentence may never be picked, or null. */
 export function barredKind(text: string, words: number, settings = SENTENCE_KIND_DEFAULTS): BarredKind | null {
   const trimmed = text.trim();
-  const key = normalizeSentence(trimmed);
+  return barredKindOf(trimmed, normalizeSentence(trimmed), words, settings);
+}
+
+/**
+ * barredKind given the trimmed text and its normalized key. normalizeSentence trims, so the key of
+ * the untrimmed text is the same: sentenceKinds passes the key it already has.
+ */
+function barredKindOf(trimmed: string, key: string, words: number, settings: typeof SENTENCE_KIND_DEFAULTS): BarredKind | null {
   if (key === '' || PLACEHOLDERS.has(key) || LATER_NOTE.test(trimmed)) return 'placeholder';
   if (ISSUE_LINE.test(trimmed) || TRAILER.test(trimmed) || MENTION_LINE.test(trimmed) || CHECKLIST.test(trimmed)) return 'boilerplate';
   if (words <= settings.bylineWords && BYLINE.test(trimmed)) return 'byline';
@@ -111,7 +122,7 @@ function isLinkOnly(source: string): boolean {
     .replace(/<https?:\/\/[^>]+>/g, ' ')
     .replace(/https?:\/\/\S+/g, ' ')
     .replace(/^\s*(?:[-*+]|\d+[.)])\s+/, ' ');
-  return rest !== source && !/[\p{L}\p{N}]/u.test(rest);
+  return rest !== source && !LETTER_OR_DIGIT.test(rest);
 }
 
 export interface SentenceKinds {
@@ -142,7 +153,7 @@ export function sentenceKinds(doc: ParsedDocument, wordCounts: readonly number[]
     }
     textKey[i] = id;
     const words = wordCounts[i] ?? 0;
-    barred[i] = templateKeys.has(key) ? 'template' : barredKind(sentence.text, words);
+    barred[i] = templateKeys.has(key) ? 'template' : barredKindOf(sentence.text.trim(), key, words, SENTENCE_KIND_DEFAULTS);
     const source = doc.text.slice(sentence.span.start - doc.baseOffset, sentence.span.end - doc.baseOffset);
     if (fragmentKind(sentence.text, words, source) !== null) fragment[i] = 1;
   });

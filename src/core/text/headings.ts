@@ -8,6 +8,9 @@
  * "heading dictionary" for his location method.
  */
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const HEADING_WORD = /[\p{L}\p{N}]+(?:['’][\p{L}\p{N}]+)*/gu;
+
 export type HeadingClass = 'abstract' | 'introduction' | 'proposal' | 'detail' | 'discussion' | 'aside' | 'backMatter';
 
 export interface HeadingClassEntry {
@@ -75,7 +78,7 @@ const NUMBERING = /^\s*(?:\d+(?:\.\d+)*\.?|[ivxlc]+\.|[a-z]\))\s+/iu;
 
 /** Heading words: section numbering dropped ("2.1", "IV."), lower case, letters and digits only. */
 export function headingWords(heading: string): string[] {
-  return heading.replace(NUMBERING, '').toLowerCase().match(/[\p{L}\p{N}]+(?:['’][\p{L}\p{N}]+)*/gu) ?? [];
+  return heading.replace(NUMBERING, '').toLowerCase().match(HEADING_WORD) ?? [];
 }
 
 /** Headings compared without numbering, punctuation or case: "7. References" matches "references". */
@@ -110,6 +113,20 @@ function containsPhrase(words: readonly string[], phrase: readonly string[]): bo
  * count, so "Future work" is judged by its own entry rather than by "Future" and "work" apart.
  */
 export function headingClassesOf(heading: string): HeadingClass[] {
+  // Several rankers and the selector ask about every section's heading: each heading is read once.
+  let classes = classesByHeading.get(heading);
+  if (classes === undefined) {
+    classes = classesOfHeading(heading);
+    if (classesByHeading.size >= MAX_CACHED_HEADINGS) classesByHeading.clear();
+    classesByHeading.set(heading, classes);
+  }
+  return [...classes];
+}
+
+const classesByHeading = new Map<string, readonly HeadingClass[]>();
+const MAX_CACHED_HEADINGS = 10_000;
+
+function classesOfHeading(heading: string): HeadingClass[] {
   const words = headingWords(heading);
   const matched = CLASS_PHRASES.filter((entry) => containsPhrase(words, entry.words));
   return matched

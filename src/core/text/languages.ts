@@ -99,5 +99,14 @@ const BY_CODE: ReadonlyMap<string, Language> = new Map(LANGUAGES.map((language) 
 
 /** The language for an ISO 639-1 code (region suffixes such as "en-GB" ignored), or undefined. */
 export function languageFor(code: string): Language | undefined {
-  return BY_CODE.get(code.toLowerCase().split(/[-_]/)[0] ?? '');
+  // Called for every stem and stop-word lookup, so each code string is resolved once.
+  if (resolved.has(code)) return resolved.get(code);
+  const language = BY_CODE.get(code.toLowerCase().split(/[-_]/)[0] ?? '');
+  if (resolved.size >= MAX_RESOLVED_CODES) resolved.clear();
+  resolved.set(code, language);
+  return language;
 }
+
+const resolved = new Map<string, Language | undefined>();
+/** Codes come from settings and detection, a handful; the bound only guards against odd callers. */
+const MAX_RESOLVED_CODES = 64;

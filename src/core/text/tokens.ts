@@ -29,14 +29,19 @@ const UNSPACED_SCRIPT =
  * it (kept whole otherwise), so text in those scripts still yields tokens.
  */
 export function wordTokens(text: string): string[] {
-  const tokens: string[] = [];
   // Lower-casing once, before matching, is much cheaper than once per token.
   const lower = text.toLowerCase();
+  const words = lower.match(WORD);
+  if (words === null) return [];
   const unspaced = UNSPACED_SCRIPT.test(lower);
-  for (const match of lower.matchAll(WORD)) {
-    let word = match[0];
-    if (word.includes('\u2019')) word = word.replaceAll('\u2019', "'");
-    if (word.includes('\u2010')) word = word.replaceAll('\u2010', '-');
+  const curly = lower.includes('\u2019');
+  const hyphen = lower.includes('\u2010');
+  // The common case: every match is a token as it stands.
+  if (!unspaced && !curly && !hyphen) return words;
+  const tokens: string[] = [];
+  for (let word of words) {
+    if (curly && word.includes('\u2019')) word = word.replaceAll('\u2019', "'");
+    if (hyphen && word.includes('\u2010')) word = word.replaceAll('\u2010', '-');
     if (!unspaced) {
       tokens.push(word);
     } else if (IDEOGRAPHIC.test(word)) {
@@ -122,44 +127,131 @@ const HAS_DIGIT_OR_DOT = /[\p{N}.]/u;
  * removed, then stemmed. Numbers, versions and file names are kept unstemmed.
  */
 export function contentTerms(words: readonly string[], lang: string): string[] {
-  const stops = stopWords(lang);
-  const english = languageFor(lang)?.code === 'en';
+  const cache = wordTermCache(lang);
   const terms: string[] = [];
   for (const word of words) {
-    if (stops.has(word)) continue;
-    const hyphenated = word.includes('-');
-    const minLength = hyphenated ? MIN_PART_LENGTH : MIN_TERM_LENGTH;
-    for (let part of hyphenated ? word.split('-') : [word]) {
-      if (english && part.endsWith("'s")) part = part.slice(0, -2);
-      if (part.startsWith("'") || part.endsWith("'")) part = part.replace(/^'+|'+$/g, '');
-      if (part === '' || stops.has(part)) continue;
-      if (part.length < minLength && !IDEOGRAPHIC.test(part)) continue;
-      terms.push(HAS_DIGIT_OR_DOT.test(part) || !HAS_LETTER.test(part) ? part : stem(part, lang));
-    }
+    const own = cachedWordTerms(cache, word, lang);
+    for (let k = 0; k < own.length; k++) terms.push(own[k]!);
   }
   return terms;
 }
 
+/** contentTerms([word], lang), read-only and without a copy (for callers asking word by word). */
+export function wordTerms(word: string, lang: string): readonly string[] {
+  return cachedWordTerms(wordTermCache(lang), word, lang);
+}
+
+function cachedWordTerms(cache: Map<string, readonly string[]>, word: string, lang: string): readonly string[] {
+  let own = cache.get(word);
+  if (own === undefined) {
+    own = termsOfWord(word, lang);
+    if (cache.size >= MAX_CACHED_WORDS) cache.clear();
+    cache.set(word, own);
+  }
+  return own;
+}
+
+/**
+ * A word's terms depend on the word and the language alone, and a document repeats its words: each
+ * language keeps the terms of the words it has seen (bounded like the stems).
+ */
+const wordTermCaches = new Map<string, Map<string, readonly string[]>>();
+const MAX_CACHED_WORDS = 200_000;
+const NO_LANGUAGE = '';
+
+function wordTermCache(lang: string): Map<string, readonly string[]> {
+  const code = languageFor(lang)?.code ?? NO_LANGUAGE;
+  let cache = wordTermCaches.get(code);
+  if (cache === undefined) wordTermCaches.set(code, (cache = new Map()));
+  return cache;
+}
+
+/** The content terms of one word token (see contentTerms). */
+function termsOfWord(word: string, lang: string): readonly string[] {
+  const stops = stopWords(lang);
+  if (stops.has(word)) return NO_TERMS;
+  const english = languageFor(lang)?.code === 'en';
+  const hyphenated = word.includes('-');
+  const minLength = hyphenated ? MIN_PART_LENGTH : MIN_TERM_LENGTH;
+  const terms: string[] = [];
+  for (let part of hyphenated ? word.split('-') : [word]) {
+    if (english && part.endsWith("'s")) part = part.slice(0, -2);
+    if (part.startsWith("'") || part.endsWith("'")) part = part.replace(/^'+|'+$/g, '');
+    if (part === '' || stops.has(part)) continue;
+    if (part.length < minLength && !IDEOGRAPHIC.test(part)) continue;
+    terms.push(HAS_DIGIT_OR_DOT.test(part) || !HAS_LETTER.test(part) ? part : stem(part, lang));
+  }
+  return terms.length === 0 ? NO_TERMS : terms;
+}
+
+const NO_TERMS: readonly string[] = [];
+
 /** Characters read to detect the language; enough for a stable stop-word count. */
-const DETECTION_SAMPLE = 20_000;
+export const DETECTION_SAMPLE = 20_000;
+const LATIN_RUNS = /\p{sc=Latin}+/gu;
+/** Runs of each script's characters; counted in code points (see charactersIn). */
 const SCRIPT_PATTERNS: readonly (readonly [Script, RegExp])[] = [
-  ['latin', /\p{sc=Latin}/gu],
-  ['cyrillic', /\p{sc=Cyrillic}/gu],
-  ['arabic', /\p{sc=Arabic}/gu],
-  ['han', /\p{sc=Han}/gu],
-  ['kana', /[\p{sc=Hiragana}\p{sc=Katakana}]/gu],
-  ['hangul', /\p{sc=Hangul}/gu],
+  ['latin', LATIN_RUNS],
+  ['cyrillic', /\p{sc=Cyrillic}+/gu],
+  ['arabic', /\p{sc=Arabic}+/gu],
+  ['han', /\p{sc=Han}+/gu],
+  ['kana', /[\p{sc=Hiragana}\p{sc=Katakana}]+/gu],
+  ['hangul', /\p{sc=Hangul}+/gu],
 ];
+
+/**
+ * Characters (code points) of the text that `runs` matches. Matching runs, not single characters,
+ * saves a string per character (a 20 KB sample held some 15,000 Latin ones).
+ */
+function charactersIn(text: string, runs: RegExp): number {
+  let count = 0;
+  for (const [run] of text.matchAll(runs)) {
+    count += run.length;
+    // A run holds whole code points, so each high surrogate starts a pair counted twice above.
+    for (let k = 0; k < run.length; k++) {
+      const unit = run.charCodeAt(k);
+      if (unit >= 0xd800 && unit <= 0xdbff) count--;
+    }
+  }
+  return count;
+}
+
+const NON_ASCII_RUNS = /[^\u0000-\u007f]+/g;
+
+/**
+ * charactersIn(text, Latin runs), faster: the only Latin characters in ASCII are A-Z and a-z, so
+ * those are counted by code and the regular expression reads only the non-ASCII runs (matching
+ * every Latin run of a 20 KB sample took a few percent of its summary).
+ */
+function latinCharacters(text: string): number {
+  let count = 0;
+  for (let i = 0; i < text.length; i++) {
+    const folded = text.charCodeAt(i) | 0x20; // 'A'-'Z' onto 'a'-'z'; no other unit lands there
+    if (folded >= 0x61 && folded <= 0x7a) count++;
+  }
+  for (const [run] of text.matchAll(NON_ASCII_RUNS)) count += charactersIn(run, LATIN_RUNS);
+  return count;
+}
+
+const byScript = new Map<Script, readonly Language[]>();
+
+/** The languages written in a script, in LANGUAGES order (one array per script, so its stop-word index is built once). */
+function languagesOfScript(script: Script): readonly Language[] {
+  let list = byScript.get(script);
+  if (list === undefined) byScript.set(script, (list = LANGUAGES.filter((language) => language.script === script)));
+  return list;
+}
 
 /**
  * Language of `text` (ISO 639-1): the dominant script first (Japanese whenever Kana is common,
  * since Japanese mixes Kana with Han), then the language of that script whose stop words occur
- * most often. 'en' when nothing fits.
+ * most often. 'en' when nothing fits. `sampleTokens`, when given, returns what
+ * wordTokens(text.slice(0, DETECTION_SAMPLE)) would, from tokens the caller already has.
  */
-export function detectLanguage(text: string): string {
+export function detectLanguage(text: string, sampleTokens?: () => readonly string[]): string {
   const sample = text.slice(0, DETECTION_SAMPLE);
   const counts = new Map<Script, number>();
-  for (const [script, pattern] of SCRIPT_PATTERNS) counts.set(script, sample.match(pattern)?.length ?? 0);
+  for (const [script, runs] of SCRIPT_PATTERNS) counts.set(script, script === 'latin' ? latinCharacters(sample) : charactersIn(sample, runs));
   const kana = counts.get('kana') ?? 0;
   const han = counts.get('han') ?? 0;
   if (kana > 0 && kana * 5 >= han) counts.set('kana', kana + han);
@@ -172,21 +264,48 @@ export function detectLanguage(text: string): string {
     }
   }
   if (script === null) return 'en';
-  const candidates = LANGUAGES.filter((language) => language.script === script);
+  const candidates = languagesOfScript(script);
   if (candidates.length === 1) return candidates[0]?.code ?? 'en';
-  return mostStopWords(wordTokens(sample), candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
+  const tokens = sampleTokens ? sampleTokens() : wordTokens(sample);
+  return mostStopWords(tokens, candidates) ?? (script === 'latin' ? 'en' : candidates[0]?.code ?? 'en');
 }
 
+/** Per list of candidate languages: which of them (by position) have each stop word. */
+const stopWordOwners = new WeakMap<readonly Language[], Map<string, number[]>>();
+
+function ownersOf(candidates: readonly Language[]): Map<string, number[]> {
+  let owners = stopWordOwners.get(candidates);
+  if (owners === undefined) {
+    owners = new Map();
+    candidates.forEach((language, position) => {
+      for (const word of stopWords(language.code)) {
+        const list = owners!.get(word);
+        if (list === undefined) owners!.set(word, [position]);
+        else list.push(position);
+      }
+    });
+    stopWordOwners.set(candidates, owners);
+  }
+  return owners;
+}
+
+/**
+ * The candidate with the most stop-word hits (the earlier one on a tie). One lookup per token
+ * instead of one per token and language (with a dozen Latin-script languages, 3% of a 20 KB summary).
+ */
 function mostStopWords(tokens: readonly string[], candidates: readonly Language[]): string | null {
+  const owners = ownersOf(candidates);
+  const hits = new Array<number>(candidates.length).fill(0);
+  for (const token of tokens) {
+    const list = owners.get(token);
+    if (list !== undefined) for (const position of list) hits[position]!++;
+  }
   let bestCode: string | null = null;
   let bestHits = 0;
-  for (const language of candidates) {
-    const stops = stopWords(language.code);
-    let hits = 0;
-    for (const token of tokens) if (stops.has(token)) hits++;
-    if (hits > bestHits) {
-      bestHits = hits;
-      bestCode = language.code;
+  for (let position = 0; position < candidates.length; position++) {
+    if (hits[position]! > bestHits) {
+      bestHits = hits[position]!;
+      bestCode = candidates[position]!.code;
     }
   }
   return bestCode;

@@ -60,8 +60,16 @@ export function alignValue(
   end: number,
   codeSpan = false,
 ): Alignment {
-  const starts = new Int32Array(value.length);
-  const ends = new Int32Array(value.length);
+  const alignment = { starts: new Int32Array(value.length), ends: new Int32Array(value.length) };
+  alignInto(value, source, start, end, codeSpan, alignment);
+  return alignment;
+}
+
+/**
+ * alignValue into arrays of at least `value.length` units (the first `value.length` are written):
+ * a reader aligning thousands of short text nodes reuses one pair instead of allocating two each.
+ */
+export function alignInto(value: string, source: string, start: number, end: number, codeSpan: boolean, { starts, ends }: Alignment): void {
   let p = start;
   let i = 0;
   while (i < value.length) {
@@ -98,7 +106,6 @@ export function alignValue(
     ends[i] = at + 1;
     i++;
   }
-  return { starts, ends };
 }
 
 /** If value[i...] is produced by source[p...], returns [value units consumed, source units consumed]. */

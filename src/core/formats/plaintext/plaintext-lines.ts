@@ -3,6 +3,11 @@
  * single line can have (rule, list item, numbered or capitalized heading).
  */
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LOWER = /\p{Ll}/u;
+const UPPER = /\p{Lu}/u;
+const LETTERS = /\p{L}/gu;
+
 export interface Line {
   /** Local offset of the first character of the line. */
   readonly start: number;
@@ -103,8 +108,8 @@ export function numberedWithPeriod(text: string): boolean {
 /** A short line whose letters are all capitals (`RESULTS`, `FIELD NOTES 2`). */
 export function isCapitalsHeading(text: string): boolean {
   const trimmed = text.trim();
-  const letters = trimmed.match(/\p{L}/gu);
+  const letters = trimmed.match(LETTERS);
   if (letters === null || letters.length < 2) return false;
-  if (/\p{Ll}/u.test(trimmed) || !/\p{Lu}/u.test(trimmed)) return false;
+  if (LOWER.test(trimmed) || !UPPER.test(trimmed)) return false;
   return isShortTitle(trimmed);
 }

@@ -4,6 +4,9 @@
  * inline markup recognition rules.
  */
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const OPENING_PUNCTUATION = /\p{Ps}/u;
+
 /** A reference name: alphanumerics with isolated internal `-._+:` characters ("simple name"). */
 export const SIMPLE_NAME = String.raw`[\p{L}\p{N}]+(?:[-._+:][\p{L}\p{N}]+)*`;
 
@@ -73,5 +76,5 @@ export function matchingPair(open: string, close: string): boolean {
   const listed = PAIRS[open];
   if (listed !== undefined) return listed.includes(close);
   // Other opening brackets close with the next code point (U+2045 ⁅ / U+2046 ⁆, U+300C 「 / U+300D 」, …).
-  return /\p{Ps}/u.test(open) && close.codePointAt(0) === open.codePointAt(0)! + 1;
+  return OPENING_PUNCTUATION.test(open) && close.codePointAt(0) === open.codePointAt(0)! + 1;
 }

@@ -9,6 +9,9 @@ import type { TextLines } from './blocks';
 import { escapeToPlaceholder, inlinePieces, type Piece } from './inline';
 import { ESCAPE } from './patterns';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
+
 export interface InlineSource {
   /** The lines joined by '\n', minus the closing cut. */
   readonly text: string;
@@ -86,7 +89,7 @@ export function isLinkOnly(visible: VisibleText): boolean {
       links++;
       return ' ';
     });
-    if (/[\p{L}\p{N}]/u.test(rest)) return false;
+    if (LETTER_OR_DIGIT.test(rest)) return false;
   }
   return links > 0;
 }

@@ -17,6 +17,7 @@ import { lexRank } from '../lexrank';
 import { countPhrases, DEFAULT_CUE_WORDS, phraseIndex } from '../edmundson';
 import { sectionPriors } from '../heading-prior';
 import { withDefaultsOnce } from '../memo';
+import { termIndexOf } from '../../vectors';
 import type { AnalyzedDocument, BlockKind } from '../../types';
 
 export interface FeatureDefinition {
@@ -84,6 +85,7 @@ function priorBin(prior: number): number {
 /** Rank-percentile bins of scores within one document (ties share the better rank). */
 export function rankBins(scores: Float64Array): Uint8Array {
   const n = scores.length;
+  if (!scores.some(Number.isNaN)) return rankBinsBySearch(scores);
   const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => scores[b]! - scores[a]! || a - b);
   const bins = new Uint8Array(n);
   let rank = 0;
@@ -95,20 +97,51 @@ export function rankBins(scores: Float64Array): Uint8Array {
   return bins;
 }
 
-function thematicTerms(terms: readonly (readonly string[])[]): Set<string> {
-  const counts = new Map<string, number>();
-  for (const sentence of terms) for (const term of sentence) counts.set(term, (counts.get(term) ?? 0) + 1);
-  const frequent = [...counts.entries()].filter(([, count]) => count >= 2);
+/**
+ * rankBins without a comparator sort: a sentence's rank (ties sharing the better one) is the number
+ * of scores above its own, read from a numeric sort by binary search. Same bins; NaN-free scores only.
+ */
+function rankBinsBySearch(scores: Float64Array): Uint8Array {
+  const n = scores.length;
+  const ascending = Float64Array.from(scores).sort();
+  const bins = new Uint8Array(n);
+  for (let s = 0; s < n; s++) {
+    // First position holding a score above scores[s]; everything from there on is higher.
+    let low = 0;
+    let high = n;
+    while (low < high) {
+      const mid = (low + high) >> 1;
+      if (ascending[mid]! <= scores[s]!) low = mid + 1;
+      else high = mid;
+    }
+    const rank = n - low;
+    const share = n <= 1 ? 0 : rank / n;
+    bins[s] = share < 0.1 ? 0 : share < 0.25 ? 1 : share < 0.5 ? 2 : 3;
+  }
+  return bins;
+}
+
+function thematicTerms(a: AnalyzedDocument): Set<string> {
+  // The shared term index already counts every term (vocabulary in order of first appearance).
+  const { vocabulary, totalCount } = termIndexOf(a);
+  const frequent: [string, number][] = [];
+  for (const [term, id] of vocabulary) if (totalCount[id]! >= 2) frequent.push([term, totalCount[id]!]);
   frequent.sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1));
   return new Set(frequent.slice(0, THEMATIC_WORDS).map(([term]) => term));
 }
 
+/** Module-level, not in the function: the bundler turns a \p{…} literal into `new RegExp(…)` at every call. */
+const WORD_FOR_CAPITALS = /[\p{L}][\p{L}\p{N}'’-]*/gu;
+
 /** A capitalised word after the first word (proper nouns, names of things); acronyms count too. */
 function hasInnerCapital(text: string): boolean {
-  const words = text.match(/[\p{L}][\p{L}\p{N}'’-]*/gu) ?? [];
-  for (let i = 1; i < words.length; i++) {
-    const first = words[i]![0]!;
-    if (first !== first.toLowerCase() && words[i] !== 'I') return true;
+  // Word by word, stopping at the first capital (matching every word of every sentence cost more).
+  const word = WORD_FOR_CAPITALS;
+  word.lastIndex = 0;
+  if (word.exec(text) === null) return false;
+  for (let match = word.exec(text); match !== null; match = word.exec(text)) {
+    const first = match[0][0]!;
+    if (first !== first.toLowerCase() && match[0] !== 'I') return true;
   }
   return false;
 }
@@ -136,7 +169,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
   const indicatorIndex = phraseIndex(INDICATOR_PHRASES);
   const hedgeIndex = phraseIndex(HEDGE_PHRASES);
   const priors = sectionPriors(doc.sections);
-  const thematic = thematicTerms(a.terms);
+  const thematic = thematicTerms(a);
   const title = new Set(a.titleTerms);
   const headedDepths = doc.sections.filter((s) => s.depth > 0).map((s) => s.depth);
   const topDepth = headedDepths.length > 0 ? Math.min(...headedDepths) : 1;
@@ -156,8 +189,9 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     const fromEnd = contentParagraphs.length - 1 - ordinal;
     m.documentZone[i] = ordinal < 3 ? 0 : ordinal < 10 ? 1 : fromEnd < 5 ? 3 : 2;
     m.sectionPosition[i] = sentence.positionInSection === 0 ? 0 : sentence.positionInSection < 3 ? 1 : 2;
+    const distinct = new Set(a.terms[i]);
     let themes = 0;
-    for (const term of new Set(a.terms[i])) if (thematic.has(term)) themes++;
+    for (const term of distinct) if (thematic.has(term)) themes++;
     m.thematic[i] = Math.min(3, themes);
     m.properNoun[i] = hasInnerCapital(sentence.text) ? 1 : 0;
     m.headingPrior[i] = priorBin(priors[sentence.section] ?? 1);
@@ -166,7 +200,7 @@ export function sentenceFeatures(a: AnalyzedDocument): FeatureMatrix {
     const depth = doc.sections[sentence.section]?.depth ?? 0;
     m.sectionDepth[i] = depth === 0 ? 0 : depth <= topDepth ? 1 : 2;
     let shared = 0;
-    for (const term of new Set(a.terms[i])) if (title.has(term)) shared++;
+    for (const term of distinct) if (title.has(term)) shared++;
     m.titleOverlap[i] = Math.min(2, shared);
     m.ending[i] = endingBin(sentence.text);
   });

@@ -20,7 +20,7 @@ import { textRank } from '../textrank';
 import { headingClassesOf, type HeadingClass } from '../../text/headings';
 import { minMax } from '../../scale';
 import type { AnalyzedDocument } from '../../types';
-import { rankBayes } from './model';
+import { defaultModel, rankBayes } from './model';
 import { FEATURES, rankBins, sentenceFeatures, type FeatureDefinition } from './features';
 import { firstContentSection, intentCue, isLinkOnly, isPlaceholder } from './sentence-cues';
 
@@ -82,12 +82,13 @@ export function maxentFeatures(a: AnalyzedDocument): MaxentFeatureMatrix {
   const classes = sectionClasses(a);
   const firstContent = firstContentSection(a);
   const title = new Set(a.titleTerms);
+  const headings = a.headingTerms.map((terms) => new Set(terms));
   a.doc.sentences.forEach((sentence, i) => {
     const words = a.words[i]!;
     const terms = new Set(a.terms[i]);
     extra.sectionClass[i] = classes[sentence.section] ?? 0;
     extra.intentCue[i] = intentCue(words);
-    const heading = new Set(a.headingTerms[sentence.section] ?? []);
+    const heading = headings[sentence.section] ?? new Set<string>();
     let inHeading = 0;
     let inTitle = 0;
     for (const term of terms) {
@@ -111,7 +112,8 @@ export function maxentFeatures(a: AnalyzedDocument): MaxentFeatureMatrix {
     lexrankScore: minMax(withDefaultsOnce(a, 'lexrank', () => lexRank(a)).scores),
     centroidScore: minMax(withDefaultsOnce(a, 'centroid', () => centroidRank(a)).scores),
     textrankScore: minMax(withDefaultsOnce(a, 'textrank', () => textRank(a)).scores),
-    bayesScore: minMax(withDefaultsOnce(a, 'bayes', () => rankBayes(a)).scores),
+    // The Bayes model reads the same base features; computing them again cost a tenth of a 20 KB summary.
+    bayesScore: minMax(withDefaultsOnce(a, 'bayes', () => rankBayes(a, defaultModel(), base)).scores),
   } satisfies Record<(typeof CONTINUOUS_FEATURES)[number]['name'], Float64Array>;
   return { ...base, ...extra, ...continuous };
 }

@@ -8,6 +8,9 @@ import { countPhrases, phraseIndex } from '../edmundson';
 import { headingClassesOf, type HeadingClass } from '../../text/headings';
 import type { AnalyzedDocument } from '../../types';
 
+// Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
+const TWO_LETTERS = /\p{L}{2,}/u;
+
 /**
  * Phrases with which authors state what their document proposes or does ("This proposal adds…",
  * "We propose…"); matched on lower-cased word tokens.
@@ -35,14 +38,16 @@ export function isPlaceholder(text: string): boolean {
 }
 
 const URL = /\b(?:[a-z][a-z0-9+.-]*:\/\/|www\.)\S+/giu;
+const MAY_HOLD_WWW = /www\./iu;
 
 /**
  * A sentence that only points elsewhere: a bare URL, or a short "See …" pointer. Links in the
  * source keep their visible text, so a pointer is judged by its shape.
  */
 export function isLinkOnly(text: string, words: readonly string[]): boolean {
-  const withoutUrls = text.replace(URL, ' ');
-  if (withoutUrls.length < text.length && !/\p{L}{2,}/u.test(withoutUrls.replace(/\b(?:see|at|here|link)\b/giu, ''))) return true;
+  // Every URL holds "://" or "www." (any case); most sentences hold neither and skip the replace.
+  const withoutUrls = text.includes('://') || MAY_HOLD_WWW.test(text) ? text.replace(URL, ' ') : text;
+  if (withoutUrls.length < text.length && !TWO_LETTERS.test(withoutUrls.replace(/\b(?:see|at|here|link)\b/giu, ''))) return true;
   return words.length <= 8 && (words[0] === 'see' || words[0] === 'cf');
 }
 
