@@ -56,6 +56,7 @@ const PUBLIC_VALUES = [
   'defaultMaxentModel',
   'defaultModel',
   'digestDocuments',
+  'digestReader',
   'escapeMarkdown',
   'exampleFromDocument',
   'extractKeyPhrases',
