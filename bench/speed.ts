@@ -416,7 +416,7 @@ async function report(args: readonly string[], printed: string[]): Promise<numbe
 
   const results: (JobResult | { error: string; label: string; format: string })[] = [];
   if (existsSync(corpus)) {
-    console.log(`Engine: method blend (default options), corpus ${corpus}`);
+    console.log(`Engine: method ${resolveOptions().method} (default options), corpus ${corpus}`);
     for (const job of jobsFor(quick, full)) {
       const result = runInChild(job, corpus);
       if ('error' in result) {
