@@ -63,6 +63,11 @@ interface Job {
   readonly bare?: boolean;
   /** Also time this many live re-summaries after one-paragraph edits (a summary session). */
   readonly edits?: number;
+  /**
+   * Also summarize this many different texts of the same size once each: what a user's new
+   * document costs, where the timed runs repeat one text (and find its patterns compiled).
+   */
+  readonly distinct?: number;
 }
 
 interface JobResult {
@@ -85,6 +90,8 @@ interface JobResult {
   readonly bareParseMs?: number;
   /** Live row: median re-summary after a one-paragraph edit, pieces read per edit, edits timed. */
   readonly live?: { readonly medianMs: number; readonly piecesRead: number; readonly pieces: number; readonly edits: number };
+  /** Median over `distinct` different texts, each summarized once after the timed runs. */
+  readonly distinct?: { readonly medianMs: number; readonly texts: number };
 }
 
 const median = (values: readonly number[]): number => {
@@ -111,13 +118,13 @@ function markdownFiles(dir: string): string[] {
     });
 }
 
-/** Corpus documents joined by blank lines (repeated if the corpus is smaller), cut to `chars`. */
-function corpusText(dir: string, chars: number): string {
+/** Corpus documents joined by blank lines (repeated if the corpus is smaller), cut to `chars`; from the `first`-th file on. */
+function corpusText(dir: string, chars: number, first = 0): string {
   const files = markdownFiles(dir);
   if (files.length === 0) throw new Error(`no .md files in ${dir}`);
   const parts: string[] = [];
   let length = 0;
-  for (let i = 0; length < chars; i = (i + 1) % files.length) {
+  for (let i = first % files.length; length < chars; i = (i + 1) % files.length) {
     const text = readFileSync(files[i]!, 'utf8');
     parts.push(text);
     length += text.length + 2;
@@ -218,6 +225,18 @@ function runJob(job: Job, corpus: string): JobResult {
     bareParseMs = median(times);
   }
   const live = job.edits ? liveEdits(text, request, job.edits) : undefined;
+  let distinct: JobResult['distinct'];
+  if (job.distinct) {
+    const times: number[] = [];
+    // Texts starting 11 files apart: no two share their opening documents.
+    for (let k = 1; k <= job.distinct; k++) {
+      const other = corpusText(corpus, job.chars, 11 * k);
+      const started = performance.now();
+      summarize(other, request);
+      times.push(performance.now() - started);
+    }
+    distinct = { medianMs: median(times), texts: times.length };
+  }
 
   return {
     label: job.label,
@@ -225,6 +244,7 @@ function runJob(job: Job, corpus: string): JobResult {
     chars: text.length,
     ...(bareParseMs !== undefined ? { bareParseMs } : {}),
     ...(live ? { live } : {}),
+    ...(distinct ? { distinct } : {}),
     sentences: last.document.sentences.length,
     picked: last.sentences.length,
     ...(last.refused !== undefined ? { refused: last.refused } : {}),
@@ -330,7 +350,7 @@ function standIn(name: string): unknown {
 
 function jobsFor(quick: boolean, full: boolean): Job[] {
   const jobs: Job[] = [
-    { label: '20 KB', format: 'markdown', chars: 20 * KB, warmups: quick ? 3 : 10, runs: quick ? 9 : 31, stages: true },
+    { label: '20 KB', format: 'markdown', chars: 20 * KB, warmups: quick ? 3 : 10, runs: quick ? 9 : 31, stages: true, distinct: quick ? 9 : 31 },
     { label: '200 KB', format: 'markdown', chars: 200 * KB, warmups: quick ? 1 : 2, runs: quick ? 3 : 7, stages: true, edits: quick ? 9 : 25 },
     { label: '1 MB', format: 'markdown', chars: MB, warmups: 1, runs: quick ? 3 : 5, stages: true, bare: true },
     { label: '1 MB', format: 'plaintext', chars: MB, warmups: 1, runs: quick ? 1 : 3, stages: true },
@@ -444,6 +464,9 @@ async function report(args: readonly string[], printed: string[]): Promise<numbe
       console.log(`Targets: 20 KB ≤ ${TARGETS.smallMs} ms → ${ms(small.medianMs)} ms ${small.medianMs <= TARGETS.smallMs ? 'met' : 'NOT met'}; ` +
         `1 MB ≤ ${TARGETS.megabyteMs} ms → ${ms(big.medianMs)} ms ${big.medianMs <= TARGETS.megabyteMs ? 'met' : 'NOT met'}; ` +
         `1 MB peak RSS (one run) ≤ ${TARGETS.megabyteRssMb} MB → ${(big.singleRunPeakRssMb ?? big.peakRssMb).toFixed(0)} MB ${(big.singleRunPeakRssMb ?? big.peakRssMb) <= TARGETS.megabyteRssMb ? 'met' : 'NOT met'}`);
+    }
+    if (small?.distinct) {
+      console.log(`20 KB, a new document each time: median ${ms(small.distinct.medianMs)} ms over ${small.distinct.texts} different texts (the same text repeated: ${ms(small.medianMs)} ms; ratio ${(small.distinct.medianMs / small.medianMs).toFixed(2)})`);
     }
     const mid = markdown('200 KB');
     const huge = markdown('10 MB (cap raised)');
