@@ -16,24 +16,31 @@ interface CachedModel {
 }
 
 /**
- * Sessions kept, the most recently used first: each holds one text and its parsed pieces (a few
- * times the text's size), so a handful of open documents re-read only what an edit touched.
+ * Sessions kept, the least recently used forgotten first: each holds one text and its parsed
+ * pieces (a few times the text's size), so a handful of open documents re-read only what an edit
+ * touched. Besides the count, the texts kept together stay under ENGINE_SESSION_CHARS (the one in
+ * use is always kept), so a few very large documents do not hold hundreds of megabytes.
  */
 export const ENGINE_SESSIONS = 4;
+export const ENGINE_SESSION_CHARS = 2_000_000;
 
 /** Returns the host's message handler; `post` sends a reply to the extension. */
 export function engineRunner(post: (message: FromEngine) => void): (message: ToEngine) => void {
   let cached: CachedModel | undefined;
-  const sessions = new Map<string, SummarySession>();
-  const sessionFor = (name: string): SummarySession => {
-    const session = sessions.get(name) ?? createSummarySession();
+  const sessions = new Map<string, { readonly session: SummarySession; chars: number }>();
+  const sessionFor = (name: string, chars: number): SummarySession => {
+    const kept = sessions.get(name) ?? { session: createSummarySession(), chars };
+    kept.chars = chars;
     sessions.delete(name);
-    sessions.set(name, session);
-    for (const oldest of sessions.keys()) {
-      if (sessions.size <= ENGINE_SESSIONS) break;
+    sessions.set(name, kept);
+    let total = 0;
+    for (const { chars: size } of sessions.values()) total += size;
+    for (const [oldest, { chars: size }] of sessions) {
+      if (oldest === name || (sessions.size <= ENGINE_SESSIONS && total <= ENGINE_SESSION_CHARS)) break;
       sessions.delete(oldest);
+      total -= size;
     }
-    return session;
+    return kept.session;
   };
 
   const modelFor = (key: string | undefined): { model?: unknown; problem?: string } => {
@@ -59,7 +66,7 @@ export function engineRunner(post: (message: FromEngine) => void): (message: ToE
       if (task.kind === 'summarize') {
         const { model, problem } = modelFor(message.modelKey);
         const request = { ...task.options, ...(model !== undefined ? { model } : {}), onStage: (stage: EngineStage) => post({ type: 'stage', id, stage }) };
-        const session = task.session === undefined ? undefined : sessionFor(task.session);
+        const session = task.session === undefined ? undefined : sessionFor(task.session, task.text.length);
         // A session gives the same summary as summarize() (test/unit/session.test.ts), reading less.
         const summary = session ? session.summarize(task.text, request) : summarize(task.text, request);
         const update = session?.lastUpdate;

@@ -14,7 +14,7 @@ import { summarize } from '../../src/core/summarize';
 import { nodeWorkerHost } from '../../src/extension/engine-host-node';
 import { BlobScript, webWorkerHost, type DomWorker } from '../../src/extension/engine-host-web';
 import type { EngineResult, EngineStage, FromEngine, ToEngine } from '../../src/extension/engine-protocol';
-import { ENGINE_SESSIONS, engineRunner } from '../../src/extension/engine-runner';
+import { ENGINE_SESSION_CHARS, ENGINE_SESSIONS, engineRunner } from '../../src/extension/engine-runner';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
 import { CancelledError, EngineClient } from '../../src/extension/worker-client';
 
@@ -143,6 +143,17 @@ describe('engine hosts', function () {
       const read = out.map((m) => (m.type === 'done' && m.result.kind === 'summarize' ? m.result.reading?.read : undefined));
       assert.equal(read.at(-2), 'unchanged', 'the most recently used is kept');
       assert.equal(read.at(-1), 'whole', 'the least recently used was forgotten');
+    });
+
+    it('keeps the texts of its sessions under ENGINE_SESSION_CHARS together, always keeping the one in use', function () {
+      this.timeout(120_000);
+      const big = DEMO.repeat(Math.ceil((0.4 * ENGINE_SESSION_CHARS) / DEMO.length));
+      const options = { ...OPTIONS, maxChars: 3_000_000 };
+      const job = (id: number, text: string, session: string): ToEngine => ({ type: 'job', id, task: { kind: 'summarize', text, options, session } });
+      // Two big texts fit under the bound (0.8 of it); a third pushes the oldest out.
+      const out = run([job(1, big, 'a'), job(2, big, 'b'), job(3, big, 'c'), job(4, big, 'b'), job(5, big, 'a')]).filter((m) => m.type === 'done');
+      const read = out.map((m) => (m.type === 'done' && m.result.kind === 'summarize' ? m.result.reading?.read : undefined));
+      assert.deepEqual(read, ['whole', 'whole', 'whole', 'unchanged', 'whole']);
     });
 
     it('keeps the model it was sent and uses it for every job that names its key', () => {
