@@ -4,6 +4,9 @@ import type { PickedSentence, Summary } from '../core/index';
 import { whyInWords, whyNumbers } from './why-text';
 import { ENGLISH, type Wording } from './wording';
 
+/** Features the hover names (the strongest first); a trained model has about thirty. */
+export const HOVER_FEATURES = 6;
+
 /** Whether an iterative ranker (LexRank, TextRank) converged, and in how many iterations. */
 export interface Convergence {
   readonly converged: boolean;
@@ -31,10 +34,14 @@ export function describePick(pick: PickedSentence, summary: Summary, wording: Wo
   const lines: string[] = [];
   lines.push(`**${wording.t('Why Tersely picked this sentence')}**`, '', escapeMarkdown(whyInWords(pick, summary, wording)));
   if (pick.edited) lines.push('', escapeMarkdown(wording.t('Shown in the summary with an edit: {0}', pick.edited.reason)));
-  const numbers = whyNumbers(pick, summary, wording);
-  if (numbers.length > 0) {
+  const all = whyNumbers(pick, summary, wording);
+  if (all.length > 0) {
+    // The rank line, what the numbers are, then the strongest features; the panel lists them all.
+    const shown = all.slice(0, 2 + HOVER_FEATURES);
+    const more = all.length - shown.length;
+    const rest = more > 0 ? [wording.t('{0} more under “Show the numbers” in the panel', wording.count(more))] : [];
     // The published method names and raw values stay here, in the detail.
-    lines.push('', `*${wording.t('The numbers behind it')}:* ${numbers.map(escapeMarkdown).join(' · ')}`);
+    lines.push('', `*${wording.t('The numbers behind it')}:* ${[...shown, ...rest].map(escapeMarkdown).join(' · ')}`);
   }
   if (convergence && pick.rank > 0) lines.push('', escapeMarkdown(convergenceLine(convergence)));
   return lines.join('\n');

@@ -3,10 +3,10 @@ import { readFileSync } from 'node:fs';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Heading, List, Paragraph, RootContent } from 'mdast';
 import { buildPanelSummary, previousPicksFor, UNTITLED_SECTION } from '../../src/extension/panel-model';
-import { applyRepair, countWords, METHOD_INFO, summarize } from '../../src/core/index';
+import { applyRepair, countWords, escapeMarkdown, METHOD_INFO, summarize } from '../../src/core/index';
 import { FEATURE_LABELS, whyNumbers } from '../../src/extension/why-text';
 import { planInsertion, summaryForClipboard } from '../../src/extension/summary-text';
-import { convergenceOf, describePick } from '../../src/extension/hover-text';
+import { convergenceOf, describePick, HOVER_FEATURES } from '../../src/extension/hover-text';
 import { contentSecurityPolicy, makeNonce, panelHtml } from '../../src/extension/panel-html';
 import { FERRY_TEXT, ferrySummary } from './extension-fixture';
 import { wordingFor } from '../../src/extension/wording';
@@ -227,6 +227,19 @@ describe('extension hover text', () => {
     assert.ok(text.indexOf('ranked 2nd') < text.indexOf('score 0.500'), 'words before numbers');
     assert.ok(text.indexOf('position:') < text.indexOf('heading'), 'largest feature first');
     assert.ok(text.includes('heading\\|overlap'), 'a pipe in a feature name is escaped');
+  });
+
+  it('names the strongest HOVER_FEATURES features of a trained model and points to the panel for the rest', () => {
+    const demo = readFileSync(new URL('../../media/demo/bike-share-rebalancing.md', import.meta.url), 'utf8');
+    const summary = summarize(demo, { method: 'maxent' });
+    const pick = summary.sentences[0]!;
+    const all = whyNumbers(pick, summary, wordingFor('en'));
+    assert.ok(all.length > 2 + HOVER_FEATURES, `${all.length} lines`);
+    const text = describePick(pick, summary);
+    // The hover is Markdown: each line appears escaped, as describePick writes it.
+    for (const line of all.slice(0, 2 + HOVER_FEATURES)) assert.ok(text.includes(escapeMarkdown(line)), line);
+    for (const line of all.slice(2 + HOVER_FEATURES)) assert.ok(!text.includes(escapeMarkdown(line)), `left to the panel: ${line}`);
+    assert.match(text, new RegExp(`${all.length - 2 - HOVER_FEATURES} more under “Show the numbers” in the panel`));
   });
 
   it('says when a sentence came from a repair instead of a ranking', () => {
