@@ -120,6 +120,10 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.equal(added[0]!.abstractSays, 'does not reduce waiting');
     const removed = checkNegation(input('The new timetable does reduce waiting times at the pier.', ['The new timetable does not reduce waiting times at the pier.']));
     assert.equal(removed.length, 1);
+    // In both directions the cited sentence must be close enough to the claim.
+    const far = input('The new timetable does reduce waiting times at the pier.', ['The new timetable does not reduce waiting times at the pier.']);
+    assert.deepEqual(checkNegation({ ...far, closeness: () => NEGATION_CLOSENESS / 2 }), []);
+    assert.equal(checkNegation({ ...far, closeness: () => NEGATION_CLOSENESS }).length, 1);
   });
 
   it('reads the body where it uses the negated word, even when that sentence shares little else with the claim', () => {

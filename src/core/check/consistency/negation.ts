@@ -12,6 +12,7 @@
  *   - The claim asserts a word that the closest of them negates, and that sentence is about the
  *     claim's matter (its first support, its frame, or sharing `ABOUT_SHARED` more words) while
  *     the next ones do not assert it: a finding.
+ * Either way the cited sentence must be close to the claim (`NEGATION_CLOSENESS`).
  * A word the body never uses is left to the support rule. English only.
  */
 import type { CheckedText } from './claim-tokens';
@@ -151,6 +152,8 @@ export const checkNegation: Detector = (input) => {
     const there = polarity(closest, term);
     if (there.negated === null || there.plain !== null) continue;
     if (!aboutClaim(input, closest, term)) continue;
+    // The same closeness as the other direction asks of the sentence it cites.
+    if ((input.closeness?.(closest) ?? 1) < NEGATION_CLOSENESS) continue;
     // Said plainly in the next sentences about it: the body says it both ways.
     if (near.slice(1).some((e) => polarity(e, term).plain !== null && polarity(e, term).negated === null)) continue;
     const scope = scopesOf(closest.checked).find((s) => s.scope.includes(there.negated!));
