@@ -6,7 +6,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
-import { digestReader, type DocumentFormat, type ReadForDigest } from '../core/index';
+import { digestReader, type DigestReader, type DocumentFormat, type ReadForDigest } from '../core/index';
 import { UsageError } from './args';
 import { engineRequest } from './engine-request';
 import { InputError, readInput } from './read-input';
@@ -39,7 +39,7 @@ export function jobsFor(flag: unknown, files: number): number {
 }
 
 /** Reads one file as the digest's document number `index` (the same on any thread). */
-export async function readOne(read: ReturnType<typeof digestReader>, setup: ReaderSetup, index: number, path: string): Promise<ReadOutcome> {
+export async function readOne(read: DigestReader, setup: ReaderSetup, index: number, path: string): Promise<ReadOutcome> {
   try {
     const input = await readInput(path, 'markdown', setup.maxChars);
     return { index, ok: true, read: read(index, input.name, input.text, setup.inputFormat ?? input.format) };

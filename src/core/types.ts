@@ -134,13 +134,13 @@ export type RankerName =
   | 'maxent'
   | 'blend';
 
-/** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
 /** Per discrete feature: each sentence's value (an index into `labels[feature]`) and what each value means. */
 export interface FeatureValues {
   readonly bins: Readonly<Record<string, ArrayLike<number>>>;
   readonly labels: Readonly<Record<string, readonly string[]>>;
 }
 
+/** Scores of one ranker: one value per sentence, higher is better; plus named features for explanations. */
 export interface RankResult {
   readonly scores: Float64Array;
   /** Optional per-feature values (same length as scores) that explain the score. */

@@ -196,7 +196,7 @@ export class Digester {
     // The team's model and templates apply as they do to one document's summary.
     this.engine.useModel(await this.context.models.load(host.modelFile));
     const { templates, problems } = await this.context.templates.read(host.templateFiles, sources[0]!.uri);
-    for (const problem of problems) void vscode.window.showWarningMessage(t('Tersely: {0} (tersely.templateFiles)', problem));
+    for (const problem of problems) this.context.summarizer.tellTemplateProblem(problem);
     // The digest's own length (a few sentences per document) rather than the single-document length setting.
     const options: DigestRequest = { method: summary.method, language: summary.language, maxChars: summary.maxChars, ...(templates.length > 0 ? { templates } : {}) };
     let result;

@@ -205,7 +205,8 @@ export class Summarizer {
     return sentences.length === summary.sentences.length ? summary : { ...summary, sentences };
   }
 
-  private tellTemplateProblem(problem: string): void {
+  /** Logs a template problem and shows it once per session (digests report theirs here too). */
+  tellTemplateProblem(problem: string): void {
     this.context.log.warn(problem);
     if (this.toldTemplateProblems.has(problem)) return;
     this.toldTemplateProblems.add(problem);

@@ -22,9 +22,12 @@ async function statOf(uri: vscode.Uri): Promise<vscode.FileStat | undefined> {
   }
 }
 
+/** A setting entry with a URI scheme names a place of its own; any other is relative to the workspace folder. */
+const ABSOLUTE = /^[a-z][a-z0-9+.-]*:/i;
+
 /** The document files an entry names: the file, or a folder's document files (sorted, not recursive). */
 async function filesOf(entry: string, folder: vscode.Uri): Promise<vscode.Uri[]> {
-  const uri = /^[a-z][a-z0-9+.-]*:/i.test(entry) ? vscode.Uri.parse(entry) : vscode.Uri.joinPath(folder, entry);
+  const uri = ABSOLUTE.test(entry) ? vscode.Uri.parse(entry) : vscode.Uri.joinPath(folder, entry);
   const stat = await statOf(uri);
   if (!stat) return [];
   if (stat.type & vscode.FileType.File) return [uri];
@@ -79,7 +82,7 @@ export class TemplateLookups implements vscode.Disposable {
 
   read(entries: readonly string[], document: vscode.Uri): Promise<TemplateRead> {
     const folder = vscode.workspace.getWorkspaceFolder(document)?.uri;
-    if (!folder || entries.length === 0 || entries.some((entry) => /^[a-z][a-z0-9+.-]*:/i.test(entry))) return readTemplateFiles(entries, document);
+    if (!folder || entries.length === 0 || entries.some((entry) => ABSOLUTE.test(entry))) return readTemplateFiles(entries, document);
     const key = `${folder.toString()}\n${JSON.stringify(entries)}`;
     const known = this.remembered.get(key);
     if (known) return known.read;

@@ -114,20 +114,24 @@ function checkDigestRequest(request: DigestRequest) {
   return { options, summaryRequest, keepPerDocument };
 }
 
+function readerOf({ summaryRequest, keepPerDocument }: ReturnType<typeof checkDigestRequest>): DigestReader {
+  return (index, file, text, format) => collectDocument(index, file, text, { ...summaryRequest, format }, keepPerDocument);
+}
+
 /** What a builder's `add` does to read a document, for hosts that read documents on several threads. */
 export function digestReader(request: DigestRequest = {}): DigestReader {
-  const { summaryRequest, keepPerDocument } = checkDigestRequest(request);
-  return (index, file, text, format) => collectDocument(index, file, text, { ...summaryRequest, format }, keepPerDocument);
+  return readerOf(checkDigestRequest(request));
 }
 
 /** Starts a digest. Throws OptionsError on invalid options (checked once, before any document). */
 export function startDigest(request: DigestRequest = {}): DigestBuilder {
-  const { options } = checkDigestRequest(request);
-  const read = digestReader(request);
+  const checked = checkDigestRequest(request);
+  const { options } = checked;
+  const read = readerOf(checked);
   const documents: CollectedDocument[] = [];
-  const addRead = (read: CollectedDocument, file: string): DocumentProgress => {
+  const addRead = (given: CollectedDocument, file: string): DocumentProgress => {
     const index = documents.length;
-    const collected = read.kept.every((s) => s.document === index) ? read : { ...read, kept: read.kept.map((s) => ({ ...s, document: index })) };
+    const collected = given.kept.every((s) => s.document === index) ? given : { ...given, kept: given.kept.map((s) => ({ ...s, document: index })) };
     documents.push(collected);
     return { index, file, kept: collected.kept.length, ...(collected.refused ? { refused: collected.refused } : {}) };
   };

@@ -40,7 +40,6 @@ export function identifierKey(text: string): string {
   return text.trim().replace(/(?:\(\)|!)+$/u, '').toLowerCase();
 }
 
-
 export function identifiersIn(source: string): Identifier[] {
   const found: (Identifier & { start: number })[] = [];
   const covered: [number, number][] = [];

@@ -13,6 +13,7 @@
  * another document ("RFC 1728", "issue #961") is a reference: a different one in the body is a
  * contradiction, but one the body never mentions is not reported (common practice, no source).
  */
+import type { CheckedText } from './claim-tokens';
 import type { Detector, Evidence, RawFinding } from './detector';
 import { CODE_SPAN } from './identifiers';
 import { comparable, quantitiesIn, sameQuantity, type Quantity } from './quantities';
@@ -43,7 +44,7 @@ function quantitiesOf(evidence: Evidence): Quantity[] {
 /** Words before a number that make it the name of another document, not a count. */
 const REFERENCE_WORDS = new Set(['rfc', 'rfcs', 'issue', 'issues', 'pr', 'prs', 'bug', 'bugs', 'ticket', 'pep']);
 
-function isReference(claim: Parameters<Detector>[0]['claim'], token: number): boolean {
+function isReference(claim: CheckedText, token: number): boolean {
   const at = claim.tokens[token]!;
   if (claim.text[at.start - 1] === '#') return true;
   const before = claim.tokens[token - 1];
