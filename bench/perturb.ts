@@ -4,7 +4,8 @@
  *
  * Rules (one perturbation per document and rule, the target drawn with the seeded generator):
  *   number      a number (digits, a number word, a percentage) that the body also states is changed
- *               to a value the body never states (n → n+1, n+2, 2n, n+10, … in seeded order);
+ *               to a value the body never states (n → n+1, n+2, 2n, n+10, … in seeded order); "one"
+ *               as a pronoun ("the one that", "one of which", "allows one to") is not a number;
  *   negation    a negation is dropped ("does not X" → "does X", "cannot" → "can", "never X" → "X")
  *               or one is added after an auxiliary ("is X" → "is not X");
  *   modal       a modal verb is swapped for one of another strength (must / should / may / will);
@@ -16,6 +17,7 @@
  * to be checked against. A sentence with no grounded target is not perturbed by that rule.
  */
 import { parseDocument, wordTokens, type DocumentFormat } from '../src/core/index';
+import { eng } from 'stopword';
 import { seededRandom } from './seeded-random';
 
 export type PerturbationKind = 'number' | 'negation' | 'modal' | 'identifier' | 'replacement';
@@ -126,12 +128,28 @@ function governedWord(text: string, end: number): string | null {
   return null;
 }
 
+const ENGLISH_STOP_WORDS = new Set(eng);
+/** Words before "one" that make it a pronoun ("the one that", "this one", "each one"). */
+const DETERMINERS = new Set(['the', 'this', 'that', 'each', 'every', 'any', 'which', 'no', 'a', 'an', 'another', 'such', 'only']);
+
+/**
+ * "one" as a pronoun, not a count: nothing but a function word (the `stopword` package's English
+ * list, or an auxiliary) follows it ("one of which", "allows one to", "when one may"), or a determiner precedes
+ * it ("the one that"). Common practice, no source.
+ */
+function pronounOne(sentence: string, start: number, end: number): boolean {
+  const next = sentence.slice(end).match(/^\s+([\p{L}][\p{L}'-]*)/u)?.[1]?.toLowerCase();
+  const previous = sentence.slice(0, start).match(/([\p{L}][\p{L}'-]*)\s+$/u)?.[1]?.toLowerCase();
+  return next === undefined || ENGLISH_STOP_WORDS.has(next) || AUXILIARIES.includes(next) || (previous !== undefined && DETERMINERS.has(previous));
+}
+
 function numberEdits(sentence: string, facts: BodyFacts, random: () => number): Edit[] {
   const edits: Edit[] = [];
   const inCode = identifiersIn(sentence).filter((i) => i.kind === 'code');
   for (const m of sentence.matchAll(/(?<![\w.`-])(\d+(?:\.\d+)?|\d{1,3}(?:,\d{3})+|[A-Za-z]+)(%?)(?![\w`]|\.\d)/gu)) {
     const value = numericValue(m[1]!);
     if (value === null || !facts.numbers.has(value)) continue;
+    if (m[1]!.toLowerCase() === 'one' && pronounOne(sentence, m.index!, m.index! + m[0].length)) continue;
     // "[3]" and "[3]_" are citation markers, not quantities.
     if (sentence[m.index! - 1] === '[' && sentence[m.index! + m[0].length] === ']') continue;
     if (inCode.some((c) => m.index! >= c.start - 1 && m.index! < c.end + 1)) continue;

@@ -6,7 +6,7 @@ import { checkIdentifiers, identifiersIn } from '../../src/core/check/consistenc
 import { checkModality, modalUses } from '../../src/core/check/consistency/modality';
 import { checkNegation, NEGATION_CLOSENESS, negationScopes } from '../../src/core/check/consistency/negation';
 import { checkNumbers } from '../../src/core/check/consistency/numbers';
-import { quantitiesIn } from '../../src/core/check/consistency/quantities';
+import { numbersInText, quantitiesIn } from '../../src/core/check/consistency/quantities';
 
 // Invented demo sentences (a city bike-share and a ferry timetable), one behaviour per test.
 const evidence = (text: string, sentence = 0): Evidence => ({ sentence, checked: checkedText(text, 'en'), source: text, span: { start: 0, end: text.length } });
@@ -99,6 +99,17 @@ describe('check consistency: numbers', () => {
     assert.equal(findings.length, 1);
     assert.match(findings[0]!.note ?? '', /never gives 300/);
     assert.equal(findings[0]!.bodySays, '240 bikes');
+  });
+
+  it('takes the year of an ISO date as written, not its month and day', () => {
+    const written = numbersInText('the pilot started on 2024-12-19 with 40 docks.');
+    assert.ok(written.has(2024) && written.has(40));
+    assert.ok(!written.has(12) && !written.has(19));
+    // So "12 stations" is a figure the body never gives, although the date has a 12 in it.
+    const claim = input('The pilot opened 12 stations.', ['The pilot opened stations across the city.']);
+    const findings = checkNumbers({ ...claim, body: { ...claim.body, textNumbers: written } });
+    assert.equal(findings.length, 1);
+    assert.match(findings[0]!.note ?? '', /never gives 12/);
   });
 });
 

@@ -85,10 +85,13 @@ function phraseOf(text: CheckedText, first: number, last: number): string {
   return text.text.slice(tokens[first]!.start, tokens[end]!.end);
 }
 
+/** An ISO date (2014-12-19) gives its year; its month and day are not figures the text gives. */
+const ISO_DATE = /\b(\d{4})-\d{2}-\d{2}\b/gu;
+
 /** Numbers written anywhere in a text (digits, with decimals or thousands commas, and number words), for "the body never gives N". */
 export function numbersInText(lowerText: string): Set<number> {
   const found = new Set<number>();
-  for (const m of lowerText.matchAll(/\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|[a-z]+(?:-[a-z]+)?/gu)) {
+  for (const m of lowerText.replace(ISO_DATE, '$1').matchAll(/\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|[a-z]+(?:-[a-z]+)?/gu)) {
     const value = /\d/u.test(m[0]) ? digitValue(m[0]) : numberWordValue(m[0]);
     if (value !== null) found.add(value);
     // "1.50" also states 1 and 50 as written parts (a version, a section number).
