@@ -96,7 +96,8 @@ interface FoundIdentifier {
   readonly end: number;
 }
 
-const CODE_SPAN = /(`{1,2})([^`\n]{1,60}?)\1/gu;
+/** A code span; its content neither starts nor ends with a space, so the text between two spans is never taken for one. */
+const CODE_SPAN = /(`{1,2})([^`\s](?:[^`\n]{0,58}[^`\s])?)\1/gu;
 const OPTION = /(?<![\w-])--[a-z][a-z0-9-]+/gu;
 const FILE_NAME = /(?<![\w/.-])[\w-]+\.(?:rs|toml|md|json|yaml|yml|py|js|ts|c|h|cfg|conf|ini|txt|lock|sh)\b/gu;
 const PATH = /(?<![\w:])[A-Za-z_]\w*(?:::[A-Za-z_]\w*)+/gu;
