@@ -12,7 +12,7 @@ import { join } from 'node:path';
 import { summarize } from '../../src/core/summarize';
 import { checkAbstract } from '../../src/core/index';
 import { abstractView } from '../../src/extension/abstract-view';
-import { LineIndex } from '../../src/extension/ranges';
+import { LineIndex } from '../../src/core/index';
 import { UNTITLED_SECTION } from '../../src/extension/panel-model';
 import { parseSettings, toEngineOptions } from '../../src/extension/settings';
 import { isPanelResource, openSession, timer } from './browser';

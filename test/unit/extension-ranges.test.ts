@@ -2,7 +2,8 @@ import assert from 'node:assert/strict';
 import fc from 'fast-check';
 import { fromMarkdown } from 'mdast-util-from-markdown';
 import type { Node as MdNode, Parent } from 'mdast';
-import { LineIndex, checkedSpan, spanAt } from '../../src/extension/ranges';
+import { LineIndex } from '../../src/core/index';
+import { checkedSpan, spanAt } from '../../src/extension/ranges';
 
 /** Reference conversion from the ECMAScript string methods: split on the three line breaks the editor knows. */
 function naivePosition(text: string, offset: number): { line: number; character: number } {
