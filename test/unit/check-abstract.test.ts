@@ -237,6 +237,19 @@ describe('check: abstract options and edge cases', () => {
     assert.deepEqual(check.uncoveredSections, []);
   });
 
+  it('does not judge a sentence that only points to a web address, but judges a claim that carries one', () => {
+    const abstract = [
+      'The new timetable can be seen here: https://ferries.example/timetable',
+      'Ferries to the island now leave every twenty minutes instead of every hour (https://ferries.example/notice).',
+    ].join('\n\n');
+    const check = expectCheck(checkAbstract(doc, { format: 'markdown', language: 'en', abstract: { kind: 'text', text: abstract } }));
+    const [pointer, claim] = check.abstract.sentences;
+    assert.equal(pointer!.verdict, 'notAClaim');
+    assert.match(pointer!.reason, /web address/);
+    assert.equal(claim!.claim, true);
+    assert.notEqual(claim!.verdict, 'notAClaim');
+  });
+
   it('applies a caller threshold, clamped to [0, 1], to both verdicts at once', () => {
     const strict = run({ thresholds: { supported: 5 } });
     assert.deepEqual(strict.thresholds, { ...ABSTRACT_CHECK_DEFAULTS, supported: 1 });

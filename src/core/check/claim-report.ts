@@ -48,6 +48,8 @@ export interface ClaimReportInput {
   readonly sentence: AbstractSentence;
   readonly index: number;
   readonly claim: boolean;
+  /** Not a claim because it points to a web address (abstract-match.ts). */
+  readonly link?: boolean;
   readonly alignment: Alignment;
   readonly findings: readonly RawFinding[];
   readonly copy: CopyMatch | null;
@@ -106,7 +108,7 @@ export function claimReport(input: ClaimReportInput): AbstractSentenceCheck {
     claim: input.claim,
     supported: verdict === 'supported' || verdict === 'notAClaim',
     verdict,
-    reason: reasonFor(verdict, strength, support, findings, settings),
+    reason: reasonFor(verdict, strength, support, findings, settings, input.link === true),
     findings,
     copy: input.copy ? copiedFrom(input.copy, input) : null,
   };
@@ -146,8 +148,8 @@ function copiedFrom(copy: CopyMatch, input: ClaimReportInput): CopiedFrom {
   return { kind: copy.kind, sentences, span, line: lineOf(input.body, doc, span.start), containment: copy.containment };
 }
 
-function reasonFor(verdict: ClaimVerdict, strength: number, support: readonly SupportingSentence[], findings: readonly ConsistencyFinding[], settings: SupportSettings): string {
-  if (verdict === 'notAClaim') return 'a lead-in or a line with too few content words; not judged';
+function reasonFor(verdict: ClaimVerdict, strength: number, support: readonly SupportingSentence[], findings: readonly ConsistencyFinding[], settings: SupportSettings, link: boolean): string {
+  if (verdict === 'notAClaim') return link ? 'points to a web address, which the body cannot support; not judged' : 'a lead-in or a line with too few content words; not judged';
   if (verdict === 'contradicted') {
     const more = findings.length > 1 ? ` (and ${findings.length - 1} more)` : '';
     return `the body says otherwise — ${findings[0]!.message}${more}`;
