@@ -179,6 +179,12 @@ describe('check consistency: modality', () => {
     assert.equal(checkModality(input(claim, ['Operators may publish the winter timetable online.'])).length, 1);
     assert.deepEqual(checkModality(input(claim, ['Operators may publish the winter timetable online.'], ['Each operator must publish its timetable.'])), []);
   });
+
+  it('takes "will" and "can" for the same claim, but not "will" and "must"', () => {
+    assert.deepEqual(checkModality(input('The kiosk will print a paper ticket on request.', ['The kiosk can print a paper ticket on request.'])), []);
+    assert.deepEqual(checkModality(input('The kiosk could print a paper ticket on request.', ['The kiosk would print a paper ticket on request.'])), []);
+    assert.equal(checkModality(input('The kiosk will print a paper ticket on request.', ['The kiosk must print a paper ticket on request.'])).length, 1);
+  });
 });
 
 describe('check consistency: comparatives', () => {
