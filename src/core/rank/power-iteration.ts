@@ -54,6 +54,7 @@ export function pageRank(graph: CsrGraph, settings: PageRankSettings = PAGERANK_
   let current = new Float64Array(n).fill(1 / n);
   let next = new Float64Array(n);
   const share = new Float64Array(n);
+  const unitWeights = weights.every((w) => w === 1);
   let iterations = 0;
   let converged = false;
   while (iterations < maxIterations) {
@@ -67,7 +68,9 @@ export function pageRank(graph: CsrGraph, settings: PageRankSettings = PAGERANK_
     let change = 0;
     for (let j = 0; j < n; j++) {
       let sum = base;
-      for (let e = offsets[j]!; e < offsets[j + 1]!; e++) sum += share[targets[e]!]! * weights[e]!;
+      // x · 1 is x: links of weight 1 (LexRank's threshold graph, key phrases) skip the product.
+      if (unitWeights) for (let e = offsets[j]!; e < offsets[j + 1]!; e++) sum += share[targets[e]!]!;
+      else for (let e = offsets[j]!; e < offsets[j + 1]!; e++) sum += share[targets[e]!]! * weights[e]!;
       next[j] = sum;
       change += Math.abs(sum - current[j]!);
     }
