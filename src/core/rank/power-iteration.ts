@@ -53,20 +53,28 @@ export function pageRank(graph: CsrGraph, settings: PageRankSettings = PAGERANK_
 
   let current = new Float64Array(n).fill(1 / n);
   let next = new Float64Array(n);
+  const share = new Float64Array(n);
+  const unitWeights = weights.every((w) => w === 1);
   let iterations = 0;
   let converged = false;
   while (iterations < maxIterations) {
     let danglingMass = 0;
     for (const k of dangling) danglingMass += current[k]!;
-    next.fill((damping * danglingMass + 1 - damping) / n);
-    for (let i = 0; i < n; i++) {
-      if (outWeight[i] === 0) continue;
-      const share = (damping * current[i]!) / outWeight[i]!;
-      for (let e = offsets[i]!; e < offsets[i + 1]!; e++) next[targets[e]!]! += share * weights[e]!;
+    const base = (damping * danglingMass + 1 - damping) / n;
+    for (let i = 0; i < n; i++) share[i] = outWeight[i] === 0 ? 0 : (damping * current[i]!) / outWeight[i]!;
+    // Each node gathers from its own row: the graph is undirected (w(i,j) = w(j,i)) and rows
+    // ascend, so the terms are added in the same order as pushing from every i in turn would add
+    // them, and the sums are the same to the last bit, without scattered writes.
+    let change = 0;
+    for (let j = 0; j < n; j++) {
+      let sum = base;
+      // x · 1 is x: links of weight 1 (LexRank's threshold graph, key phrases) skip the product.
+      if (unitWeights) for (let e = offsets[j]!; e < offsets[j + 1]!; e++) sum += share[targets[e]!]!;
+      else for (let e = offsets[j]!; e < offsets[j + 1]!; e++) sum += share[targets[e]!]! * weights[e]!;
+      next[j] = sum;
+      change += Math.abs(sum - current[j]!);
     }
     iterations++;
-    let change = 0;
-    for (let i = 0; i < n; i++) change += Math.abs(next[i]! - current[i]!);
     [current, next] = [next, current];
     if (change < tolerance) {
       converged = true;

@@ -32,7 +32,11 @@ export interface GraphLimits {
   readonly maxProposingFrequency: number;
 }
 
-/** An undirected weighted graph stored as compressed rows: the edges of node i are slots `offsets[i] .. offsets[i+1]`. */
+/**
+ * An undirected weighted graph stored as compressed rows: the edges of node i are slots
+ * `offsets[i] .. offsets[i+1]`, every link in both rows with the same weight, each row ascending
+ * (pageRank relies on both).
+ */
 export interface CsrGraph {
   readonly size: number;
   readonly offsets: Int32Array;
