@@ -83,6 +83,8 @@ describe('check consistency: numbers', () => {
   it('does not report a document reference the body never mentions, but does report a different one', () => {
     assert.deepEqual(checkNumbers(input('This follows proposal RFC 1728 for docks.', ['This follows the dock proposal.'])), []);
     assert.deepEqual(checkNumbers(input('Riders asked for it in issue #961.', ['Riders asked for it.'])), []);
+    assert.deepEqual(checkNumbers(input('This builds on RFCs 352 and 955 for docks.', ['This builds on the dock proposals.'])), []);
+    assert.equal(checkNumbers(input('This builds on 352 docks and 955 bikes.', ['This builds on the dock proposals.'])).length, 2);
     const changed = checkNumbers(input('This follows RFC 1728 for docks.', ['This follows RFC 1182 for docks.']));
     assert.equal(changed.length, 1);
     assert.equal(changed[0]!.bodySays, '1182');

@@ -44,10 +44,16 @@ function quantitiesOf(evidence: Evidence): Quantity[] {
 /** Words before a number that make it the name of another document, not a count. */
 const REFERENCE_WORDS = new Set(['rfc', 'rfcs', 'issue', 'issues', 'pr', 'prs', 'bug', 'bugs', 'ticket', 'pep']);
 
+/** Words that join the numbers of a list of references ("RFCs 352 and 955"). */
+const LIST_JOINERS = new Set(['and', 'or']);
+
+/** Whether the number is a reference: after "#", or after a reference word, directly or through a list of numbers. */
 function isReference(claim: CheckedText, token: number): boolean {
   const at = claim.tokens[token]!;
   if (claim.text[at.start - 1] === '#') return true;
-  const before = claim.tokens[token - 1];
+  let k = token - 1;
+  while (k >= 0 && (/^\d+$/u.test(claim.tokens[k]!.lower) || LIST_JOINERS.has(claim.tokens[k]!.lower))) k--;
+  const before = claim.tokens[k];
   return before !== undefined && REFERENCE_WORDS.has(before.lower);
 }
 
