@@ -115,15 +115,26 @@ const NEGATION = /\b(?:not|no|never|cannot|none|without|nor)\b|n't\b/iu;
 /** Stand-alone numbers (not parts of names such as "v2" or "[.1]"). */
 const NUMBER = /(?<=^|[\s(])\d+(?:[.,]\d+)*(?=$|[\s,;:.!?)%])/gu;
 
+/** Whether a sentence says "not", and its stand-alone numbers: read once per sentence, as a sentence meets many candidates. */
+const statements = new WeakMap<PoolSentence, { readonly negated: boolean; readonly numbers: string }>();
+function statementOf(sentence: PoolSentence): { readonly negated: boolean; readonly numbers: string } {
+  let found = statements.get(sentence);
+  if (!found) {
+    found = { negated: NEGATION.test(sentence.text), numbers: [...new Set(sentence.text.match(NUMBER) ?? [])].sort().join(' ') };
+    statements.set(sentence, found);
+  }
+  return found;
+}
+
 /**
  * Near-duplicates across documents: tf·idf cosine at least `duplicateThreshold`, or Dice of the
  * content-stem sets at least `duplicateDice`; never when one says "not" and the other does not, or
  * their stand-alone numbers differ (a changed value or a reversed statement is news, not a copy).
  */
 export function nearDuplicate(a: PoolSentence, b: PoolSentence, cosineValue: number, settings: { readonly duplicateThreshold: number; readonly duplicateDice: number }): boolean {
-  if (NEGATION.test(a.text) !== NEGATION.test(b.text)) return false;
-  const numbers = (text: string) => [...new Set(text.match(NUMBER) ?? [])].sort().join(' ');
-  if (numbers(a.text) !== numbers(b.text)) return false;
+  const first = statementOf(a);
+  const second = statementOf(b);
+  if (first.negated !== second.negated || first.numbers !== second.numbers) return false;
   if (cosineValue >= settings.duplicateThreshold) return true;
   const x = new Set(a.terms);
   const y = new Set(b.terms);
