@@ -6,7 +6,8 @@
  * A finding is either
  *   - a swap: neither the body sentence closest to the claim's other words (the frame), nor the
  *     support, nor the next closest sentences name the claim's identifier, and the frame names
- *     another of the same kind; a path counts as named by its last segment too (`std::fmt::Debug`
+ *     another of the same kind (code spans only when both name one thing, not a snippet with
+ *     spaces: on the train half snippets raised 22 of 40 identifier false alarms and 6 catches); a path counts as named by its last segment too (`std::fmt::Debug`
  *     is often written `Debug`). An identifier of another kind in the same place (the same word
  *     before or after it) was tried as a swap too: on the train half it caught no changed
  *     identifier and raised four false alarms, so it is not used; or
@@ -92,6 +93,15 @@ function mentions(lowerSource: string, key: string): boolean {
   return false;
 }
 
+/**
+ * A code span that names one thing (`Copy`, `std::fmt`, `ptr.offset`), not a snippet of code with
+ * spaces in it (`a == b == c`, `loop { ... }`): snippets are written many ways, so one in the body
+ * that differs from the abstract's is no sign of a swapped name.
+ */
+function nameLike(identifier: Identifier): boolean {
+  return identifier.kind !== 'code' || !/\s/u.test(identifier.text);
+}
+
 /** Pool sentences read for the claim's identifier besides the frame and the support. */
 const IDENTIFIER_POOL = 3;
 
@@ -105,7 +115,7 @@ export const checkIdentifiers: Detector = (input) => {
     const named = near.some((e) => namedIn(e.source.toLowerCase(), identifier));
     if (frame && !named) {
       // The sentence closest to the claim's other words names another identifier of the kind: a swap.
-      const swap = identifiersOf(frame).find((other) => other.kind === identifier.kind && !claimKeys.has(other.key) && !other.key.includes(identifier.key) && !identifier.key.includes(other.key));
+      const swap = nameLike(identifier) ? identifiersOf(frame).find((other) => other.kind === identifier.kind && nameLike(other) && !claimKeys.has(other.key) && !other.key.includes(identifier.key) && !identifier.key.includes(other.key)) : undefined;
       if (swap) {
         findings.push({ kind: 'identifier', abstractSays: identifier.text, bodySays: swap.text, evidence: frame });
         continue;
