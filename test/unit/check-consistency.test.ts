@@ -122,6 +122,11 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.equal(checkedText('The ferry does not stop at the pier, but it runs late.', 'en').tokens[scopes[0]!.head!]!.lower, 'stop');
   });
 
+  it('does not take a nominal negation ("has no cabins") as contradicted by a body that names the thing', () => {
+    assert.deepEqual(checkNegation(input('The night ferry has no cabins for passengers.', ['The cabins for passengers are on the night ferry.'])), []);
+    assert.equal(checkNegation(input('The night ferry does not stop at the pier.', ['The night ferry stops at the pier.'])).length, 1);
+  });
+
   it('ignores pseudo-negations and a contrasting "not"', () => {
     assert.deepEqual(negationScopes(checkedText('Not only the ferry but also the bus runs late.', 'en')), []);
     assert.deepEqual(negationScopes(checkedText('Fares are a flat rate, not a distance charge.', 'en')), []);
