@@ -135,8 +135,8 @@ const DETERMINERS = new Set(['the', 'this', 'that', 'each', 'every', 'any', 'whi
 
 /**
  * "one" as a pronoun, not a count: nothing but a function word (the `stopword` package's English
- * list, or an auxiliary) follows it ("one of which", "allows one to", "when one may"), or a determiner precedes
- * it ("the one that"). Common practice, no source.
+ * list, or an auxiliary) follows it ("one of which", "allows one to", "when one may"), or a
+ * determiner precedes it ("the one that"). Common practice, no source.
  */
 function pronounOne(sentence: string, start: number, end: number): boolean {
   const next = sentence.slice(end).match(/^\s+([\p{L}][\p{L}'-]*)/u)?.[1]?.toLowerCase();

@@ -42,14 +42,15 @@ function surfaces(words: readonly string[], language: string): Map<string, strin
 const quoted = (words: readonly string[]) => words.map((w) => `“${w}”`).join(', ');
 const percent = (x: number) => `${Math.round(x * 100)}%`;
 
+export type ClaimKind = 'claim' | 'lead-in' | 'link';
+
 export interface ClaimReportInput {
   readonly analyzed: AnalyzedDocument;
   readonly body: CheckBody;
   readonly sentence: AbstractSentence;
   readonly index: number;
-  readonly claim: boolean;
-  /** Not a claim because it points to a web address (abstract-match.ts). */
-  readonly link?: boolean;
+  /** A claim of its own, or not judged: a lead-in (too few content words) or a pointer to a link (abstract-match.ts). */
+  readonly kind: ClaimKind;
   readonly alignment: Alignment;
   readonly findings: readonly RawFinding[];
   readonly copy: CopyMatch | null;
@@ -75,9 +76,10 @@ export function claimReport(input: ClaimReportInput): AbstractSentenceCheck {
     };
   };
   const strength = alignment.strength;
-  const linked = input.claim && strength >= settings.supported;
+  const claim = input.kind === 'claim';
+  const linked = claim && strength >= settings.supported;
   let support: SupportingSentence[];
-  if (linked || !input.claim) {
+  if (linked || !claim) {
     support = alignment.picks.map((pick) => {
       const bodyWords = surfaces(analyzed.words[body.sentences[pick.position]!]!, language);
       return {
@@ -93,7 +95,7 @@ export function claimReport(input: ClaimReportInput): AbstractSentenceCheck {
 
   const findings = input.findings.map((raw) => findingReport(raw, input));
   let verdict: ClaimVerdict;
-  if (!input.claim) verdict = 'notAClaim';
+  if (!claim) verdict = 'notAClaim';
   else if (!linked) verdict = 'unsupported';
   else if (findings.length > 0) verdict = 'contradicted';
   else verdict = 'supported';
@@ -105,10 +107,10 @@ export function claimReport(input: ClaimReportInput): AbstractSentenceCheck {
     line: sentence.span ? lineOf(body, doc, sentence.span.start) : null,
     support,
     similarity: strength,
-    claim: input.claim,
+    claim,
     supported: verdict === 'supported' || verdict === 'notAClaim',
     verdict,
-    reason: reasonFor(verdict, strength, support, findings, settings, input.link === true),
+    reason: reasonFor(verdict, strength, support, findings, settings, input.kind),
     findings,
     copy: input.copy ? copiedFrom(input.copy, input) : null,
   };
@@ -148,8 +150,8 @@ function copiedFrom(copy: CopyMatch, input: ClaimReportInput): CopiedFrom {
   return { kind: copy.kind, sentences, span, line: lineOf(input.body, doc, span.start), containment: copy.containment };
 }
 
-function reasonFor(verdict: ClaimVerdict, strength: number, support: readonly SupportingSentence[], findings: readonly ConsistencyFinding[], settings: SupportSettings, link: boolean): string {
-  if (verdict === 'notAClaim') return link ? 'points to a web address, which the body cannot support; not judged' : 'a lead-in or a line with too few content words; not judged';
+function reasonFor(verdict: ClaimVerdict, strength: number, support: readonly SupportingSentence[], findings: readonly ConsistencyFinding[], settings: SupportSettings, kind: ClaimKind): string {
+  if (verdict === 'notAClaim') return kind === 'link' ? 'points to a web address, which the body cannot support; not judged' : 'a lead-in or a line with too few content words; not judged';
   if (verdict === 'contradicted') {
     const more = findings.length > 1 ? ` (and ${findings.length - 1} more)` : '';
     return `the body says otherwise — ${findings[0]!.message}${more}`;

@@ -7,8 +7,8 @@
  *   - a swap: neither the body sentence closest to the claim's other words (the frame), nor the
  *     support, nor the next closest sentences name the claim's identifier, and the frame names
  *     another of the same kind (code spans only when both name one thing, not a snippet with
- *     spaces: on the train half snippets raised 22 of 40 identifier false alarms and 6 catches); a path counts as named by its last segment too (`std::fmt::Debug`
- *     is often written `Debug`). An identifier of another kind in the same place (the same word
+ *     spaces: on the train half snippets raised 22 of 40 identifier false alarms and 6 catches);
+ *     a path counts as named by its last segment too (`std::fmt::Debug` is often written `Debug`). An identifier of another kind in the same place (the same word
  *     before or after it) was tried as a swap too: on the train half it caught no changed
  *     identifier and raised four false alarms, so it is not used; or
  *   - an absence: the body never mentions an option or a file name the claim names (compared

@@ -6,6 +6,7 @@
  */
 import { countPhrases, phraseIndex } from '../edmundson';
 import { headingClassesOf, type HeadingClass } from '../../text/headings';
+import { withoutWebAddresses } from '../../text/web-addresses';
 import type { AnalyzedDocument } from '../../types';
 
 // Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
@@ -37,16 +38,12 @@ export function isPlaceholder(text: string): boolean {
   return PLACEHOLDER.test(text.trim());
 }
 
-const URL = /\b(?:[a-z][a-z0-9+.-]*:\/\/|www\.)\S+/giu;
-const MAY_HOLD_WWW = /www\./iu;
-
 /**
  * A sentence that only points elsewhere: a bare URL, or a short "See …" pointer. Links in the
  * source keep their visible text, so a pointer is judged by its shape.
  */
 export function isLinkOnly(text: string, words: readonly string[]): boolean {
-  // Every URL holds "://" or "www." (any case); most sentences hold neither and skip the replace.
-  const withoutUrls = text.includes('://') || MAY_HOLD_WWW.test(text) ? text.replace(URL, ' ') : text;
+  const withoutUrls = withoutWebAddresses(text);
   if (withoutUrls.length < text.length && !TWO_LETTERS.test(withoutUrls.replace(/\b(?:see|at|here|link)\b/giu, ''))) return true;
   return words.length <= 8 && (words[0] === 'see' || words[0] === 'cf');
 }
