@@ -108,10 +108,10 @@ function scopesOf(text: CheckedText): NegationScope[] {
 const NOMINAL_CUES = new Set(['no', 'none', 'nothing', 'without', 'nobody', 'nowhere', 'neither', 'nor']);
 
 /**
- * Whether a cue negates what happens ("does not stop", "never stops"). A
- * claim's nominal negation ("has no fields") is not contradicted by a body that names the thing
- * elsewhere ("the fields of a struct"): on the train half such claims raised 11 of 85 negation
- * false alarms, and leaving them out lost no flipped negation that was caught (239 → 241 caught).
+ * Whether a cue negates what happens ("does not stop", "never stops"). A claim's nominal negation
+ * ("has no fields") is not contradicted by a body that names the thing elsewhere ("the fields of a
+ * struct"): on the train half such claims raised 11 of 85 negation false alarms, and leaving them
+ * out lost no flipped negation that was caught (239 → 241 caught).
  */
 function verbal(text: CheckedText, cue: number): boolean {
   return !NOMINAL_CUES.has(text.tokens[cue]!.lower);
