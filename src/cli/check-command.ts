@@ -5,7 +5,7 @@ import { parseFlags } from './option-flags';
 import { InputError, readInput } from './read-input';
 import { styleFor, type Style } from './style';
 import { forcedFormat } from './summarize-command';
-import { neutralizeControls, terminalSafeJson, warn } from './terminal-text';
+import { neutralizeControls, plural, terminalSafeJson, warn } from './terminal-text';
 
 /** How the command line names the abstract, added to the engine's message when none was found. */
 const HOW_TO_NAME_ABSTRACT = 'Name its heading with --abstract-heading TEXT, or give it in a file with --abstract FILE.';
@@ -79,7 +79,6 @@ function neutralizedReport(report: Check): Check {
 }
 
 const pct = (x: number) => `${Math.round(x * 100)}%`;
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 const MARKS: Readonly<Record<AbstractSentenceCheck['verdict'], string>> = { supported: '✓', contradicted: '✗', unsupported: '?', notAClaim: '·' };
 const VERDICT_WORDS: Readonly<Record<AbstractSentenceCheck['verdict'], string>> = {

@@ -4,11 +4,11 @@
  * digest builder, which keeps only each document's best sentences, so memory stays bounded; a
  * progress line per document goes to standard error (unless --quiet).
  */
-import { readdir, stat } from 'node:fs/promises';
-import { join } from 'node:path';
-import { digestReader, formatForFileName, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
+import { stat } from 'node:fs/promises';
+import { digestReader, SUMMARY_OPTIONS, startDigest, type Digest, type DigestRequest } from '../core/index';
 import { jobsFor, readOnThreads, readOne, type ReaderSetup, type ReadOutcome } from './digest-threads';
 import { choiceFlag, UsageError } from './args';
+import { documentFilesUnder } from './document-files';
 import { engineRequest } from './engine-request';
 import { parseFlags } from './option-flags';
 import { digestToJson, digestToMarkdown, renderDigestText } from './render-digest';
@@ -22,20 +22,10 @@ export const MAX_DIGEST_FILES = 20_000;
 
 /**
  * The files named: a file as given, a folder walked in name order for the files a format claims
- * (Markdown, reStructuredText, text), skipping hidden entries and node_modules.
+ * (Markdown, reStructuredText, text), as document-files.ts describes.
  */
 export async function expandPaths(paths: readonly string[]): Promise<string[]> {
   const files: string[] = [];
-  const walk = async (folder: string): Promise<void> => {
-    const entries = (await readdir(folder, { withFileTypes: true })).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
-    for (const entry of entries) {
-      if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
-      const path = join(folder, entry.name);
-      if (entry.isDirectory()) await walk(path);
-      else if (entry.isFile() && formatForFileName(entry.name)) files.push(path);
-      if (files.length > MAX_DIGEST_FILES) throw new UsageError(`more than ${MAX_DIGEST_FILES.toLocaleString('en-US')} files to digest; name fewer folders`);
-    }
-  };
   for (const path of paths) {
     let isFolder = false;
     try {
@@ -43,8 +33,13 @@ export async function expandPaths(paths: readonly string[]): Promise<string[]> {
     } catch {
       // Not there: readInput says so for this path, in the same words as for summarize.
     }
-    if (isFolder) await walk(path);
-    else files.push(path);
+    if (!isFolder) files.push(path);
+    else {
+      for await (const file of documentFilesUnder(path)) {
+        files.push(file);
+        if (files.length > MAX_DIGEST_FILES) throw new UsageError(`more than ${MAX_DIGEST_FILES.toLocaleString('en-US')} files to digest; name fewer folders`);
+      }
+    }
   }
   return files;
 }

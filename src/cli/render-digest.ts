@@ -2,7 +2,7 @@
 import { escapeMarkdown, type Digest, type DigestOccurrence, type DigestSentence } from '../core/index';
 import { JSON_OFFSETS } from './render-summary';
 import type { Style } from './style';
-import { neutralizeControls as safe } from './terminal-text';
+import { neutralizeControls as safe, plural } from './terminal-text';
 
 export const DIGEST_NOTE = 'Extractive digest: every line is quoted from one of the documents and may lose the context around it.';
 
@@ -29,13 +29,13 @@ function byDocument(digest: Digest): Map<number, DigestSentence[]> {
 function headline(digest: Digest): string {
   const { stats } = digest;
   return (
-    `${count(stats.sentencesOut)} sentences · ${stats.documentsRepresented} of ${stats.documentsRead} documents represented · ` +
-    `${count(stats.wordsOut)} of ${count(stats.wordsIn)} words · ${count(stats.duplicatesMerged)} near-duplicate sentences merged`
+    `${plural(stats.sentencesOut, 'sentence')} · ${stats.documentsRepresented} of ${plural(stats.documentsRead, 'document')} represented · ` +
+    `${count(stats.wordsOut)} of ${plural(stats.wordsIn, 'word')} · ${plural(stats.duplicatesMerged, 'near-duplicate sentence')} merged`
   );
 }
 
 export function renderDigestText(digest: Digest, style: Style): string {
-  const out: string[] = [style.bold(`Digest of ${digest.stats.documents} document${digest.stats.documents === 1 ? '' : 's'}`), style.dim(headline(digest)), style.dim(DIGEST_NOTE)];
+  const out: string[] = [style.bold(`Digest of ${plural(digest.stats.documents, 'document')}`), style.dim(headline(digest)), style.dim(DIGEST_NOTE)];
   for (const notice of digest.notices) out.push(style.warn(`note: ${safe(notice)}`));
   for (const [index, sentences] of byDocument(digest)) {
     const document = digest.documents[index]!;

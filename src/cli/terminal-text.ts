@@ -28,3 +28,6 @@ export function terminalSafeJson(value: unknown): string {
 export function warn(line: string): void {
   process.stderr.write(`${neutralizeControls(line)}\n`);
 }
+
+/** "1 sentence", "2 sentences", "1,024 words": a count with its noun, for messages. */
+export const plural = (n: number, one: string, many = `${one}s`): string => `${n.toLocaleString('en-US')} ${n === 1 ? one : many}`;

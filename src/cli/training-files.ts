@@ -3,25 +3,17 @@
  * listed in a --files list (one path a line, relative to the list's own folder; blank lines and
  * lines starting with # are skipped), filtered by --match.
  */
-import { readdir, readFile } from 'node:fs/promises';
+import { readFile } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { formatForFileName } from '../core/index';
+import { documentFilesUnder } from './document-files';
 import { InputError } from './read-input';
 
-/** Document files under `root`, sorted, skipping hidden folders and node_modules. */
+/** Document files under `root`, sorted (document-files.ts says which). */
 export async function documentFiles(root: string): Promise<string[]> {
   const found: string[] = [];
-  const walk = async (folder: string) => {
-    const entries = await readdir(folder, { withFileTypes: true });
-    for (const entry of entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
-      if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
-      const path = join(folder, entry.name);
-      if (entry.isDirectory()) await walk(path);
-      else if (entry.isFile() && formatForFileName(entry.name)) found.push(path);
-    }
-  };
   try {
-    await walk(root);
+    for await (const path of documentFilesUnder(root)) found.push(path);
   } catch {
     throw new InputError(`folder ${root} cannot be read`);
   }
