@@ -43,6 +43,8 @@ interface Tally {
   /** Flags by cause ("unsupported", or the finding kind of a contradiction). */
   readonly causes: Record<string, number>;
   readonly perturbed: Record<PerturbationKind, { cases: number; measurable: number; caught: number; caughtByKind: number }>;
+  /** Measurable modal swaps where a body sentence about it has a modal of the original's class on the governed word, and how many of them were caught. */
+  modalEvidence?: { measurable: number; caught: number };
   documents: number;
   milliseconds: number;
 }
@@ -147,8 +149,13 @@ export async function measure(split: Half, limit: number, engine: string, folder
       if (!original.abstract.sentences[p.sentence]?.supported) continue;
       counts.measurable++;
       const sentence = changed.abstract.sentences[p.sentence]!;
+      if (p.bodyStatesModal) {
+        tally.modalEvidence ??= { measurable: 0, caught: 0 };
+        tally.modalEvidence.measurable++;
+        if (!sentence.supported) tally.modalEvidence.caught++;
+      }
       if (sentence.supported) {
-        onExample?.(`MISSED ${p.kind} ${document.file}: ${p.after}\n    was: ${p.before}\n    ${(sentence as { reason?: string }).reason ?? ''}`);
+        onExample?.(`MISSED ${p.kind}${p.bodyStatesModal ? ' (a body sentence about it has the original modal)' : ''} ${document.file}: ${p.after}\n    was: ${p.before}\n    ${(sentence as { reason?: string }).reason ?? ''}`);
         continue;
       }
       counts.caught++;
@@ -180,6 +187,11 @@ function merged(figures: CheckFigures): Tally {
     total.documents += tally.documents;
     total.milliseconds += tally.milliseconds;
     for (const [cause, n] of Object.entries(tally.causes)) total.causes[cause] = (total.causes[cause] ?? 0) + n;
+    if (tally.modalEvidence) {
+      total.modalEvidence ??= { measurable: 0, caught: 0 };
+      total.modalEvidence.measurable += tally.modalEvidence.measurable;
+      total.modalEvidence.caught += tally.modalEvidence.caught;
+    }
     for (const kind of PERTURBATION_KINDS) {
       const into = total.perturbed[kind];
       const from = tally.perturbed[kind];
@@ -213,6 +225,14 @@ export function renderFigures(figures: CheckFigures, baseline: CheckFigures | nu
   lines.push(`Real, unperturbed abstract sentences called unsupported (too little of their content in the body, with or without a finding): ${unsupported(total)}${base ? ` (before: ${unsupported(base)})` : ''}.`);
   const specific = PERTURBATION_KINDS.filter((k) => k !== 'replacement').map((k) => `${k} ${ratio(total.perturbed[k].caughtByKind, total.perturbed[k].measurable)}`);
   lines.push(`Recall with the finding of the matching kind (a number finding for a changed number, …): ${specific.join(', ')}.`);
+  if (total.modalEvidence) {
+    const { measurable, caught } = total.modalEvidence;
+    const modal = total.perturbed.modal;
+    lines.push(
+      `Modal swaps where a body sentence about the same thing (3 more content words in common; bench/perturb.ts) puts a modal of the original's class on the governed word: ` +
+        `${measurable} of ${modal.measurable}, recall ${ratio(caught, measurable)}; the other ${modal.measurable - measurable}: recall ${ratio(modal.caught - caught, modal.measurable - measurable)}.`,
+    );
+  }
   const excluded = PERTURBATION_KINDS.map((k) => `${k} ${total.perturbed[k].cases - total.perturbed[k].measurable}`);
   lines.push(`Perturbed cases left out because the original sentence was already flagged: ${excluded.join(', ')} (of ${PERTURBATION_KINDS.map((k) => total.perturbed[k].cases).join(', ')}).`);
   lines.push(`Time: ${(total.milliseconds / Math.max(1, total.documents)).toFixed(0)} ms per document for the original and its perturbed copies (about ${(total.milliseconds / 1000).toFixed(0)} s in all).`);

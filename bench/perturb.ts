@@ -31,12 +31,19 @@ export interface Perturbation {
   readonly after: string;
   /** The abstract with the change made. */
   readonly abstractText: string;
+  /**
+   * Modal swaps only: whether a body sentence about the same thing (3 more content words in common)
+   * puts a modal of the original's class on the governed word, so that a check reading the body has
+   * something to set against the swap.
+   */
+  readonly bodyStatesModal?: boolean;
 }
 
 interface Edit {
   readonly start: number;
   readonly end: number;
   readonly replacement: string;
+  readonly bodyStatesModal?: boolean;
 }
 
 const NUMBER_WORDS: readonly string[] = [
@@ -51,12 +58,28 @@ const MODAL_CLASS: Readonly<Record<string, string>> = {
   must: 'must', shall: 'must', should: 'should', may: 'may', might: 'may', can: 'may', could: 'may', will: 'will', would: 'will',
 };
 const MODAL_REPRESENTATIVES = ['must', 'should', 'may', 'will'];
+const ENGLISH_STOP_WORDS = new Set(eng);
+const MODAL_WORD = /\b(must|shall|should|may|might|can|could|will|would)\b(?!['’])/giu;
 
 /** Lower-cased word prefix used to decide whether the body mentions a word (a crude stem). */
 const stemKey = (word: string) => word.toLowerCase().slice(0, Math.max(4, Math.min(6, word.length - 1)));
 
+interface BodyModalUse {
+  /** Stem key of the governed word. */
+  readonly key: string;
+  readonly modalClass: string;
+  /** Stem keys of the sentence's content words. */
+  readonly words: ReadonlySet<string>;
+}
+
+/** Stem keys of a text's words that are not stop words (the `stopword` package's English list). */
+function contentKeys(text: string): Set<string> {
+  return new Set(wordTokens(text).filter((w) => !ENGLISH_STOP_WORDS.has(w.toLowerCase()) && !/^\d/u.test(w)).map(stemKey));
+}
+
 export class BodyFacts {
   readonly stems: ReadonlySet<string>;
+  private readonly modalUses: readonly BodyModalUse[];
   readonly numbers: ReadonlySet<number>;
   readonly identifiers: ReadonlyMap<string, readonly string[]>;
   constructor(readonly bodyText: string) {
@@ -75,6 +98,28 @@ export class BodyFacts {
       identifiers.set(found.kind, list);
     }
     this.identifiers = identifiers;
+    const modalUses: BodyModalUse[] = [];
+    // Sentences cut at end punctuation: a bench heuristic, good enough to tell which words a modal sits among.
+    for (const sentence of bodyText.split(/(?<=[.!?])\s+|\n\s*\n/u)) {
+      const words = contentKeys(sentence);
+      for (const m of sentence.matchAll(MODAL_WORD)) {
+        const governed = governedWord(sentence, m.index! + m[0].length);
+        if (governed !== null) modalUses.push({ key: stemKey(governed), modalClass: MODAL_CLASS[m[1]!.toLowerCase()]!, words });
+      }
+    }
+    this.modalUses = modalUses;
+  }
+  /** Whether a body sentence about `sentence` (3 more content words in common) puts a modal of `modalClass` on `governed`. */
+  statesModal(sentence: string, governed: string, modalClass: string): boolean {
+    const key = stemKey(governed);
+    const words = contentKeys(sentence);
+    words.delete(key);
+    return this.modalUses.some((use) => {
+      if (use.key !== key || use.modalClass !== modalClass) return false;
+      let shared = 0;
+      for (const w of use.words) if (words.has(w)) shared++;
+      return shared >= 3;
+    });
   }
   mentions(word: string): boolean {
     return this.stems.has(stemKey(word));
@@ -129,7 +174,6 @@ function governedWord(text: string, end: number): string | null {
   return null;
 }
 
-const ENGLISH_STOP_WORDS = new Set(eng);
 /** Words before "one" that make it a pronoun ("the one that", "this one", "each one"). */
 const DETERMINERS = new Set(['the', 'this', 'that', 'each', 'every', 'any', 'which', 'no', 'a', 'an', 'another', 'such', 'only']);
 
@@ -198,9 +242,9 @@ function negationEdits(sentence: string, facts: BodyFacts): Edit[] {
   return edits;
 }
 
-function modalEdits(sentence: string, facts: BodyFacts, random: () => number): Edit[] {
-  const edits: Edit[] = [];
-  for (const m of sentence.matchAll(/\b(must|shall|should|may|might|can|could|will|would)\b(?!['’])/giu)) {
+function modalEdits(sentence: string, facts: BodyFacts, random: () => number): (Edit & { bodyStatesModal: boolean })[] {
+  const edits: (Edit & { bodyStatesModal: boolean })[] = [];
+  for (const m of sentence.matchAll(MODAL_WORD)) {
     const word = m[1]!.toLowerCase();
     if (/^\s*(?:not|n't)\b/u.test(sentence.slice(m.index! + m[0].length))) continue;
     const end = m.index! + m[0].length;
@@ -209,7 +253,7 @@ function modalEdits(sentence: string, facts: BodyFacts, random: () => number): E
     const others = MODAL_REPRESENTATIVES.filter((r) => r !== MODAL_CLASS[word]);
     let replacement = others[Math.floor(random() * others.length)]!;
     if (/^[A-Z]/u.test(m[1]!)) replacement = replacement[0]!.toUpperCase() + replacement.slice(1);
-    edits.push({ start: m.index!, end, replacement });
+    edits.push({ start: m.index!, end, replacement, bodyStatesModal: facts.statesModal(sentence, governed, MODAL_CLASS[word]!) });
   }
   return edits;
 }
@@ -253,7 +297,7 @@ export function perturbAbstract(input: PerturbInput): Perturbation[] {
       else if (kind === 'modal') edits = modalEdits(raw, facts, random);
       else if (kind === 'identifier') edits = identifierEdits(raw, facts, random);
       else edits = wordTokens(raw).length >= 6 ? [{ start: 0, end: raw.length, replacement: '' }] : [];
-      for (const edit of edits) options.push({ sentence: index, edit: { start: edit.start + s.span.start, end: edit.end + s.span.start, replacement: edit.replacement } });
+      for (const edit of edits) options.push({ sentence: index, edit: { ...edit, start: edit.start + s.span.start, end: edit.end + s.span.start } });
     });
     if (options.length === 0) return;
     const pick = options[Math.floor(random() * options.length)]!;
@@ -269,7 +313,14 @@ export function perturbAbstract(input: PerturbInput): Perturbation[] {
     if (after.length !== sentences.length) return;
     const same = sentences.every((s, i) => i === pick.sentence || s.text === after[i]!.text);
     if (!same || after[pick.sentence]!.text === sentences[pick.sentence]!.text) return;
-    results.push({ kind, sentence: pick.sentence, before: sentences[pick.sentence]!.text, after: after[pick.sentence]!.text, abstractText: changed });
+    results.push({
+      kind,
+      sentence: pick.sentence,
+      before: sentences[pick.sentence]!.text,
+      after: after[pick.sentence]!.text,
+      abstractText: changed,
+      ...(edit.bodyStatesModal !== undefined ? { bodyStatesModal: edit.bodyStatesModal } : {}),
+    });
   });
   return results;
 }
