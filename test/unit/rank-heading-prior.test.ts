@@ -35,6 +35,14 @@ describe('heading prior (Edmundson 1969 location idea)', () => {
     assert.equal(headingPrior('Design and future work'), (HEADING_CLASSES.proposal.prior + HEADING_CLASSES.aside.prior) / 2);
   });
 
+  it('reads "Non-goals" as a discussion, not as the goals it negates; "Copyright" and "Footnotes" as back matter', () => {
+    for (const heading of ['Non-goals', 'Non Goals', 'Non-goals of this RFC']) assert.equal(headingPrior(heading), HEADING_CLASSES.discussion.prior, heading);
+    assert.equal(headingPrior('Goals'), HEADING_CLASSES.introduction.prior);
+    assert.equal(headingPrior('Copyright'), HEADING_CLASSES.backMatter.prior);
+    assert.equal(headingPrior('Footnotes'), HEADING_CLASSES.backMatter.prior);
+    assert.equal(headingPrior('Rejected ideas'), HEADING_CLASSES.aside.prior);
+  });
+
   it('does not mistake "reference-level explanation" for a references section', () => {
     assert.ok(headingPrior('Reference-level explanation') > 1);
   });

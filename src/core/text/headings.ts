@@ -46,7 +46,7 @@ export const HEADING_CLASSES: Readonly<Record<HeadingClass, HeadingClassEntry>> 
     prior: 0.75,
     phrases: [
       'Discussion', 'Risks', 'Caveats', 'Limitations', 'Costs', 'Cost', 'Security', 'Performance', 'Testing', 'Timeline', 'Schedule',
-      'Status', 'Notes', 'Terminology', 'Definitions', 'Glossary',
+      'Status', 'Notes', 'Terminology', 'Definitions', 'Glossary', 'Non-goals', 'Test plan',
     ],
   },
   aside: {
@@ -54,13 +54,14 @@ export const HEADING_CLASSES: Readonly<Record<HeadingClass, HeadingClassEntry>> 
     phrases: [
       'Alternatives', 'Alternative', 'Drawbacks', 'Drawback', 'Downsides', 'Unresolved', 'Open questions', 'Open issues', 'Questions',
       'FAQ', 'Future', 'Future work', 'Possibilities', 'Extensions', 'Prior art', 'Related work', 'History', 'Appendix', 'Appendices',
+      'Rejected ideas',
     ],
   },
   backMatter: {
     prior: 0.4,
     phrases: [
       'References', 'Bibliography', 'See also', 'Further reading', 'Links', 'Acknowledgements', 'Acknowledgments', 'Credits',
-      'Changelog', 'Change log', 'Revision history', 'License', 'Contents', 'Table of contents',
+      'Changelog', 'Change log', 'Revision history', 'License', 'Copyright', 'Footnotes', 'Contents', 'Table of contents',
     ],
   },
 };
