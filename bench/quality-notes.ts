@@ -33,6 +33,10 @@ const MAXENT_NOTES: readonly string[] = [
     'fractional target of the same logistic regression. Train halves (rust / nova): best match 0.346 / 0.392; p = 1 0.346 / 0.395; p = 2 0.347 / 0.400; ' +
     'p = 3 0.350 / 0.393; p = 4 0.350 / 0.392; term precision against the whole reference 0.350 / 0.395. On the test halves p = 2, the best on the ' +
     'train halves, lost: 0.349 / 0.376 against 0.354 / 0.382, so the shipped model keeps best-match labels.',
+  '- Tried and not adopted (2026-12-04, evening; train halves, rust / nova, maxent 0.346 / 0.392): two crossed features, the class of the section a ' +
+    'sentence opens and "among the first 3 sentences of the first content section", re-trained from the recorded command: 0.346 / 0.384 (the ' +
+    'logistic loss improved, ROUGE did not). The MMR trade-off λ (0.7, common practice) at 0.5, 0.85 and 1: 0.346 / 0.391, 0.348 / 0.391, ' +
+    '0.348 / 0.390, so λ is no lever here and stays.',
 ];
 
 const NOVA_NOTES: readonly string[] = [
