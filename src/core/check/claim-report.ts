@@ -166,7 +166,7 @@ function reasonFor(verdict: ClaimVerdict, strength: number, support: readonly Su
     const what = s.words.length > 0 ? `${i === 0 ? 'has' : 'adds'} ${quoted(s.words.slice(0, 5))}` : 'adds related words';
     return `line ${s.line} (${s.heading || 'opening text'}) ${what}`;
   });
-  const related = support.flatMap((s) => s.related).slice(0, 3).map((r) => `“${r.abstract}” through “${r.body}”`);
+  const related = support.flatMap((s) => s.related).slice(0, 3).map((r) => `“${r.abstract}” matched by “${r.body}”`);
   const via = related.length > 0 ? `; ${related.join(', ')} (words this document uses together)` : '';
   return `${parts.join('; ')}${via} — match ${percent(strength)}`;
 }
