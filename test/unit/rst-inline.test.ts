@@ -127,5 +127,12 @@ describe('rst: inline markup', () => {
       assert.deepEqual(doc.skipped.map((s) => s.reason), ['linkList']);
       assert.deepEqual(doc.sentences.map((s) => s.text), ['See https://a.example/one for details.']);
     });
+
+    it('reads escapes and inline literals the same way when deciding (a backslash makes no word)', () => {
+      // An escaped character is still text; a backslash alone is not a word; a literal that only holds a link is a link.
+      const doc = rst('https://a.example/one\\_two\n\n\\*note\\* https://a.example\n\n``https://b.example``\n\nKept sentence.\n');
+      assert.deepEqual(doc.skipped.map((s) => s.reason), ['linkList', 'linkList']);
+      assert.deepEqual(doc.sentences.map((s) => s.text), ['*note* https://a.example', 'Kept sentence.']);
+    });
   });
 });
