@@ -1,6 +1,7 @@
 // Every bundle the project ships, with its esbuild options (scripts/build.mjs builds them; the
 // engine-host unit tests build the worker bundles from the same options in memory).
 import { noNodeBuiltins } from './browser-guard.mjs';
+import { markdownItFields } from './markdown-it-fields.mjs';
 
 // natural's German stemmer pulls in a 300 KB stop-word table for a function we never call.
 const alias = { 'stopwords-iso': './src/core/text/stopwords-iso-stub.ts' };
@@ -40,6 +41,6 @@ export function buildOptions(entry, { production = false } = {}) {
     banner: entry.banner,
     ...(entry.conditions ? { conditions: entry.conditions } : {}),
     // A Node built-in in a browser bundle fails the build instead of failing in the editor.
-    plugins: entry.platform === 'browser' ? [noNodeBuiltins] : [],
+    plugins: [markdownItFields, ...(entry.platform === 'browser' ? [noNodeBuiltins] : [])],
   };
 }
