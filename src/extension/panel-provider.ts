@@ -52,13 +52,13 @@ export class SummaryPanel implements vscode.WebviewViewProvider, vscode.Disposab
     private readonly extensionUri: vscode.Uri,
     private readonly onMessage: (message: FromPanel) => void,
     private readonly log: vscode.LogOutputChannel,
-    /** Called when the panel opens: a good moment to start the engine host. */
-    private readonly onFirstShow: () => void = () => undefined,
+    /** Called each time the panel's view is made, before its page loads: a good moment to start the engine host and send the panel its wording. */
+    private readonly onOpen: () => void = () => undefined,
   ) {}
 
   resolveWebviewView(view: vscode.WebviewView): void {
     this.view = view;
-    this.onFirstShow();
+    this.onOpen();
     const { script, style } = panelResources(this.extensionUri);
     view.webview.options = { enableScripts: true, enableCommandUris: false, localResourceRoots: panelResourceRoots(this.extensionUri) };
     view.webview.html = panelHtml({
