@@ -3,18 +3,36 @@
  * dialog), folders walked in name order for the files a format claims, skipping hidden entries and
  * node_modules (as the CLI's `digest` does). The file system is passed in (the editor's
  * `workspace.fs` in the extension, a fake in tests), so this module has no editor API.
+ *
+ * Symbolic links are followed, to files and to folders. The editor's file system gives no real
+ * path to tell a link back up the tree (or to a folder already read) from a new folder, so a
+ * folder reached through a link is compared with the folders read before by what shows of it, its
+ * times and its entries: the same as one of them, it is that folder again and is not read a second
+ * time, so a link loop ends at once. Folders reached without a link are never compared: two real
+ * folders may well look alike.
  */
 import { formatForFileName, formatForLanguageId, GENERIC_FORMAT, type DocumentFormat } from '../core/index';
 
 export interface DigestEntry<U> {
   readonly uri: U;
   readonly name: string;
+  /** What it is, or what it links to. */
   readonly kind: 'file' | 'folder' | 'other';
+  /** A symbolic link. */
+  readonly link?: boolean;
+}
+
+export interface DigestStat<U> {
+  readonly kind: DigestEntry<U>['kind'];
+  readonly size: number;
+  /** Creation and modification times (ms), when the file system gives them. */
+  readonly ctime?: number;
+  readonly mtime?: number;
 }
 
 export interface DigestFileSystem<U> {
-  /** What `uri` is and its size in bytes; throws when it is not there. */
-  stat(uri: U): Promise<{ readonly kind: DigestEntry<U>['kind']; readonly size: number }>;
+  /** What `uri` is (a link: what it links to) and its size in bytes; throws when it is not there. */
+  stat(uri: U): Promise<DigestStat<U>>;
   /** A folder's entries, in any order. */
   list(uri: U): Promise<readonly DigestEntry<U>[]>;
   name(uri: U): string;
@@ -44,6 +62,11 @@ export const MAX_EDITOR_DIGEST_FILES = 500;
 
 const byName = <U>(a: DigestEntry<U>, b: DigestEntry<U>): number => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
 
+/** What shows of a folder: its times and its entries (sorted). Two folders that show the same are taken for one. */
+function folderLook<U>(stat: DigestStat<U>, sortedEntries: readonly DigestEntry<U>[]): string {
+  return JSON.stringify([stat.ctime ?? null, stat.mtime ?? null, sortedEntries.map((e) => [e.name, e.kind, e.link === true])]);
+}
+
 /**
  * The files to digest, in order, each once. A file picked by name is read whatever its extension
  * (as plain text when no format claims it); inside folders only the files a format claims.
@@ -61,19 +84,25 @@ export async function collectDigestFiles<U>(fs: DigestFileSystem<U>, picked: rea
     else if (files.length >= maxFiles) truncated = true;
     else files.push({ uri, format });
   };
+  // How each folder read so far shows (folderLook), for folders reached through a link.
+  const looks = new Set<string>();
   // One folder that cannot be listed (permissions, a file removed meanwhile) is reported, not fatal.
-  const walk = async (folder: U): Promise<void> => {
+  const walk = async (folder: U, viaLink = false): Promise<void> => {
     let entries: DigestEntry<U>[];
+    let look: string;
     try {
       entries = [...(await fs.list(folder))].sort(byName);
+      look = folderLook(await fs.stat(folder), entries);
     } catch {
       skipped.push({ uri: folder, reason: 'unreadable' });
       return;
     }
+    if (viaLink && looks.has(look)) return;
+    looks.add(look);
     for (const entry of entries) {
       if (truncated) return;
       if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
-      if (entry.kind === 'folder') await walk(entry.uri);
+      if (entry.kind === 'folder') await walk(entry.uri, entry.link === true);
       else if (entry.kind === 'file') {
         const format = formatForFileName(entry.name);
         if (!format) continue;

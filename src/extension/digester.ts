@@ -55,9 +55,10 @@ const kindOf = (type: vscode.FileType): 'file' | 'folder' | 'other' =>
 const editorFs: DigestFileSystem<vscode.Uri> = {
   stat: async (uri) => {
     const stat = await vscode.workspace.fs.stat(uri);
-    return { kind: kindOf(stat.type), size: stat.size };
+    return { kind: kindOf(stat.type), size: stat.size, ctime: stat.ctime, mtime: stat.mtime };
   },
-  list: async (uri) => (await vscode.workspace.fs.readDirectory(uri)).map(([name, type]) => ({ uri: vscode.Uri.joinPath(uri, name), name, kind: kindOf(type) })),
+  list: async (uri) =>
+    (await vscode.workspace.fs.readDirectory(uri)).map(([name, type]) => ({ uri: vscode.Uri.joinPath(uri, name), name, kind: kindOf(type), link: (type & vscode.FileType.SymbolicLink) !== 0 })),
   name: (uri) => uri.path.slice(uri.path.lastIndexOf('/') + 1),
 };
 

@@ -37,7 +37,56 @@ function fakeFs(files: Record<string, number>, broken: ReadonlySet<string> = new
 
 const MAX = 10_000;
 
+/**
+ * A file system with symbolic links: `links` maps a link's path to its target; paths below a link
+ * resolve through it, as a real file system does, and a link's stat is its target's.
+ */
+function linkedFs(files: Record<string, number>, links: Record<string, string>): DigestFileSystem<string> {
+  const real = (path: string): string => {
+    for (const [link, target] of Object.entries(links)) {
+      if (path === link || path.startsWith(`${link}/`)) return real(target + path.slice(link.length));
+    }
+    return path;
+  };
+  const base = fakeFs(files);
+  // Times per real folder: a folder reached through a link shows the same ones.
+  const times = (path: string) => ({ ctime: path.length * 7, mtime: path.length * 11 });
+  return {
+    async stat(uri) {
+      const found = await base.stat(real(uri));
+      return found.kind === 'folder' ? { ...found, ...times(real(uri)) } : found;
+    },
+    async list(uri) {
+      const entries = [...(await base.list(real(uri)))].map((e) => ({ ...e, uri: `${uri}/${e.name}` }));
+      for (const link of Object.keys(links)) {
+        const parent = link.slice(0, link.lastIndexOf('/'));
+        if (real(parent) !== real(uri)) continue;
+        const name = link.slice(parent.length + 1);
+        const target = await base.stat(real(link));
+        entries.push({ uri: `${uri}/${name}`, name, kind: target.kind, link: true });
+      }
+      return entries;
+    },
+    name: (uri) => uri.slice(uri.lastIndexOf('/') + 1),
+  };
+}
+
 describe('editor digest: which files are read', () => {
+  it('follows links to folders and files, but not a link back into a folder it is walking', async () => {
+    const fs = linkedFs({ '/w/a.md': 10, '/w/sub/c.md': 10, '/elsewhere/docs/b.md': 10, '/elsewhere/notes.md': 10 }, { '/w/docs': '/elsewhere/docs', '/w/loop': '/w', '/w/sub/up': '/w', '/w/note.md': '/elsewhere/notes.md' });
+    const { files, skipped, truncated } = await collectDigestFiles(fs, ['/w'], MAX);
+    assert.deepEqual(files.map((f) => f.uri), ['/w/a.md', '/w/docs/b.md', '/w/note.md', '/w/sub/c.md']);
+    assert.deepEqual(skipped, []);
+    assert.equal(truncated, false);
+  });
+
+  it('reads a folder reached through a link once, but two real folders that look the same both', async () => {
+    // '/w/p' and '/w/q' hold the same entries and (in this fake) the same times, but neither is a link.
+    const fs = linkedFs({ '/w/p/b.md': 10, '/w/q/b.md': 10, '/w/x/c.md': 10 }, { '/w/y': '/w/x' });
+    const { files } = await collectDigestFiles(fs, ['/w'], MAX);
+    assert.deepEqual(files.map((f) => f.uri), ['/w/p/b.md', '/w/q/b.md', '/w/x/c.md']);
+  });
+
   it('walks a folder in name order, depth first, taking only the files a format claims, with their format', async () => {
     const fs = fakeFs({
       '/w/b.rst': 10,
