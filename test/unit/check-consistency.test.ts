@@ -90,6 +90,23 @@ describe('check consistency: numbers', () => {
     assert.equal(changed[0]!.bodySays, '1182');
   });
 
+  it('reports a reference the body never names when the body names others of its kind, citing one', () => {
+    // The support speaks of something else; the body names issue #961 elsewhere, never #964.
+    const changed = checkNumbers(input('Riders asked for it in issue #964.', ['Riders asked for it.'], ['The dock fix follows issue #961 closely.']));
+    assert.equal(changed.length, 1, JSON.stringify(changed));
+    assert.equal(changed[0]!.note, 'the body never names #964');
+    assert.equal(changed[0]!.bodySays, '#961');
+    assert.equal(changed[0]!.evidence?.sentence, 100);
+    // "RFC #1859" and "rfcs#3875" are references of the "#" kind too.
+    assert.equal(checkNumbers(input('Replace RFC #5578 with docks.', ['Replace the dock proposal.'], ['See RFC #1859 for docks.'])).length, 1);
+    assert.equal(checkNumbers(input('Docks come first (rfcs#3878).', ['Docks come first.'], ['Proposal: rfcs#3875 for docks.'])).length, 1);
+    // The body names this very reference: nothing to report; it names only another kind: not checked.
+    assert.deepEqual(checkNumbers(input('Riders asked for it in issue #961.', ['Riders asked for it.'], ['See issue #961 and RFC 12.'])), []);
+    assert.deepEqual(checkNumbers(input('This follows RFC 1728 for docks.', ['This follows the dock proposal.'], ['See issue #961.'])), []);
+    // A "#" inside a link target stays a link.
+    assert.deepEqual(checkNumbers(input('See https://example.org/docks#2019 for riders.', ['Riders joined.'], ['See issue #961.'])), []);
+  });
+
   it('reads a number joined to its word ("6-dock stations")', () => {
     const findings = checkNumbers(input('The city opened 8-dock stations.', ['The city opened 6-dock stations.']));
     assert.equal(findings.length, 1);
