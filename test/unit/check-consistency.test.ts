@@ -178,6 +178,25 @@ describe('check consistency: negation (NegEx scope, Chapman et al. 2001)', () =>
     assert.deepEqual(checkNegation(input('On Sundays the island ferry is not crowded.', ['On Sundays the island ferry carries bikes.'])), []);
   });
 
+  it('lets a body sentence that restates the claim decide, over other sentences that use the word', () => {
+    const restated = 'Today the night ferry does not stop at the pier.';
+    const other = 'The day ferry does not stop at the old pier.';
+    const close = (e: Evidence) => (e.source === restated.replace(' not', '') ? 0.9 : 0.3);
+    // The body restates the claim without its negation; another sentence negates "stop" of something else.
+    const flipped = input('Today the night ferry does not stop at the pier.', [restated.replace(' not', '')], [other]);
+    assert.deepEqual(checkNegation(flipped), [], 'without closeness figures the other sentence agrees, as before');
+    const found = checkNegation({ ...flipped, closeness: close });
+    assert.equal(found.length, 1, JSON.stringify(found));
+    assert.equal(found[0]!.evidence?.source, restated.replace(' not', ''));
+    // Two restatements that disagree: the body says it both ways, so nothing is reported.
+    const both = input('Today the night ferry does not stop at the pier.', [restated.replace(' not', '')], [restated]);
+    assert.deepEqual(checkNegation({ ...both, closeness: () => 0.9 }), []);
+    // The other direction: the claim asserts, the restatement negates, a looser sentence asserts.
+    const asserted = input('Today the night ferry does stop at the pier.', [restated], ['The day ferry stops at the old pier.']);
+    assert.deepEqual(checkNegation(asserted), []);
+    assert.equal(checkNegation({ ...asserted, closeness: (e) => (e.source === restated ? 0.9 : 0.3) }).length, 1);
+  });
+
   it('stays silent when the pool agrees with the claim', () => {
     const findings = checkNegation(input('The new timetable does not reduce waiting times at the pier.', ['The new timetable does reduce waiting times at the pier.'], ['The new timetable does not reduce waiting times at the pier much.']));
     assert.deepEqual(findings, []);
