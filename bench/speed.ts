@@ -12,9 +12,10 @@
  * --quick: fewer runs and no 2 MB / 10 MB rows; --full: also 10 MB of plain text with the cap raised.
  *
  * Beside the engine, the same child process times a bare markdown-it parse of the same text
- * (default options, `md.parse`, the package's published browser build), so the engine's time can be read as a multiple of the parser's
- * on a machine whose speed varies; and a live row: a summary session (createSummarySession) on a
- * 200 KB document, re-summarized after one paragraph is edited, edit after edit.
+ * (default options, `md.parse`, the package's published browser build), so the engine's time can
+ * be read as a multiple of the parser's on a machine whose speed varies; and a live row: a summary
+ * session (createSummarySession) on a 200 KB document, re-summarized after one paragraph is
+ * edited, edit after edit.
  */
 import os from 'node:os';
 import { RESULTS_FILE, writeResultsBlock } from './results-file';

@@ -99,6 +99,9 @@ describe('check consistency: numbers', () => {
     assert.equal(changed[0]!.evidence?.sentence, 100);
     // "RFC #1859" and "rfcs#3875" are references of the "#" kind too.
     assert.equal(checkNumbers(input('Replace RFC #5578 with docks.', ['Replace the dock proposal.'], ['See RFC #1859 for docks.'])).length, 1);
+    // A reference word is named as the claim writes it, for one document.
+    const listed = checkNumbers(input('This builds on RFCs 352 and 956 for docks.', ['This builds on the dock proposals.'], ['See RFC 352 and RFC 955.']));
+    assert.deepEqual(listed.map((f) => f.note), ['the body never names RFC 956']);
     assert.equal(checkNumbers(input('Docks come first (rfcs#3878).', ['Docks come first.'], ['Proposal: rfcs#3875 for docks.'])).length, 1);
     // The body names this very reference: nothing to report; it names only another kind: not checked.
     assert.deepEqual(checkNumbers(input('Riders asked for it in issue #961.', ['Riders asked for it.'], ['See issue #961 and RFC 12.'])), []);

@@ -54,16 +54,18 @@ const REFERENCE_HASH = /(?:^|[\s([])[A-Za-z]*#$/u;
 const LIST_JOINERS = new Set(['and', 'or']);
 
 /**
- * What kind of document the number names: "#" after a "#", else the reference word before it,
- * directly or through a list of numbers ("RFCs 352 and 955"), in the singular; null for a count.
+ * The document a number names, or null for a count: after a "#" (kind "#"), or after a reference
+ * word, directly or through a list of numbers ("RFCs 352 and 955"; kind the word in the singular).
+ * `name` is the reference as the text writes it, for one document: "#964", "RFC 955".
  */
-function referenceKind(text: CheckedText, token: number): string | null {
+function referenceAt(text: CheckedText, token: number): { readonly kind: string; readonly name: string } | null {
   const at = text.tokens[token]!;
-  if (text.text[at.start - 1] === '#') return '#';
+  if (text.text[at.start - 1] === '#') return { kind: '#', name: `#${at.lower}` };
   let k = token - 1;
   while (k >= 0 && (/^\d+$/u.test(text.tokens[k]!.lower) || LIST_JOINERS.has(text.tokens[k]!.lower))) k--;
   const before = text.tokens[k];
-  return before !== undefined && REFERENCE_WORDS.has(before.lower) ? before.lower.replace(/s$/u, '') : null;
+  if (before === undefined || !REFERENCE_WORDS.has(before.lower)) return null;
+  return { kind: before.lower.replace(/s$/u, ''), name: `${before.raw.replace(/s$/u, '')} ${at.lower}` };
 }
 
 interface NamedReference {
@@ -81,8 +83,8 @@ function bodyReferences(body: BodyFacts): Map<string, Map<number, NamedReference
     const { checked } = evidence;
     checked.tokens.forEach((token, i) => {
       if (!/^\d+$/u.test(token.lower)) return;
-      const kind = referenceKind(checked, i);
-      if (kind === null) return;
+      const kind = referenceAt(checked, i)?.kind;
+      if (kind === undefined) return;
       const byNumber = found!.get(kind) ?? new Map<number, NamedReference>();
       if (!byNumber.has(Number(token.lower))) byNumber.set(Number(token.lower), { evidence, phrase: checked.text.slice(Math.max(0, token.start - (kind === '#' ? 1 : 0)), token.end) });
       found!.set(kind, byNumber);
@@ -138,13 +140,13 @@ export const checkNumbers: Detector = (input) => {
       continue;
     }
     if (claimed.kind === 'ratio') continue;
-    const reference = claimed.kind === 'number' ? referenceKind(input.claim, claimed.token) : null;
+    const reference = claimed.kind === 'number' ? referenceAt(input.claim, claimed.token) : null;
     if (reference !== null) {
       // A reference the body never names is not checked, unless the body names others of its kind and never this one.
-      const named = bodyReferences(input.body).get(reference);
+      const named = bodyReferences(input.body).get(reference.kind);
       if (!named || named.has(claimed.value as number)) continue;
       const other = named.values().next().value!;
-      findings.push({ kind: 'number', abstractSays: claimed.phrase, bodySays: other.phrase, evidence: other.evidence, note: `the body never names ${reference === '#' ? '#' : `${reference.toUpperCase()} `}${claimed.value}` });
+      findings.push({ kind: 'number', abstractSays: claimed.phrase, bodySays: other.phrase, evidence: other.evidence, note: `the body never names ${reference.name}` });
       continue;
     }
     if (stated(claimed, input.body.textNumbers ?? input.body.numbers, input.body.sentences)) continue;
