@@ -84,6 +84,18 @@ describe('parse: Markdown', () => {
       assert.deepEqual(sourceOf(doc), ['One long\n   sentence across\nthree lines.']);
     });
 
+    it('joins a compound the line wrap broke after its hyphen, in every format (common practice, no source)', () => {
+      // Invented demo sentences; the same break occurs in the rust-rfcs corpus ("function-\nlike", "hard-\nwired").
+      const text = 'The parser is hard-\nwired into a function-\nlike shape, and long-\nand short-term plans differ by Rust-\nBased tools.';
+      const expected = ['The parser is hard-wired into a function-like shape, and long- and short-term plans differ by Rust- Based tools.'];
+      for (const format of ['markdown', 'plaintext', 'restructuredtext'] as const) {
+        const doc = parseDocument(text, { format });
+        assert.deepEqual(texts(doc), expected, format);
+        assert.deepEqual(sourceOf(doc), [text], format);
+      }
+      assert.deepEqual(texts(md('A function-\n   like shape.')), ['A function-like shape.']);
+    });
+
     it('treats a hard break as a sentence boundary', () => {
       const doc = md('First line without stop  \nsecond line\\\nthird line');
       assert.deepEqual(texts(doc), ['First line without stop', 'second line', 'third line']);

@@ -16,7 +16,7 @@ export function hasEnglishVerbShape(word: string): boolean {
 /** Frequent English words that the stop-word list keeps but a key phrase never needs (ours). */
 const ENGLISH_NON_KEYWORDS: ReadonlySet<string> = new Set([
   'use', 'uses', 'using', 'allow', 'allows', 'make', 'makes', 'making', 'get', 'gets', 'getting', 'take', 'takes',
-  'one', 'two', 'three', 'four', 'five', 'many', 'much', 'new', 'way', 'ways', 'like', 'want', 'wants', 'give', 'gives', 'e.g', 'i.e', 'etc',
+  'one', 'two', 'three', 'four', 'five', 'many', 'much', 'new', 'way', 'ways', 'like', 'want', 'wants', 'give', 'gives', 'due', 'e.g', 'i.e', 'etc',
 ]);
 
 let lexiconWords: ReadonlySet<string> | undefined;

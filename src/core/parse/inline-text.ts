@@ -7,7 +7,8 @@
  * `[starts[first], ends[last])`.
  *
  * Whitespace is collapsed when the text is finished: runs of blanks become one ' ', blanks around a
- * hard break ('\n') disappear, and both ends are trimmed. Soft line breaks are written as ' '.
+ * hard break ('\n') disappear, and both ends are trimmed. Soft line breaks are written as ' ', except
+ * after a hyphen that the line wrap cut a compound at (see hyphenatedAcrossLines).
  */
 
 import { splitSentences, type LineBreaks } from '../segment/sentences';
@@ -125,7 +126,7 @@ export class InlineTextBuilder {
         if (lineBreaks[nextBreak] === i && code === SPACE) pendingSoft = true;
         continue;
       } else {
-        if (pendingBlank >= 0 && units.length > 0 && units[units.length - 1] !== LINE_FEED) {
+        if (pendingBlank >= 0 && units.length > 0 && units[units.length - 1] !== LINE_FEED && !(pendingSoft && this.hyphenatedAcrossLines(units, i))) {
           if (pendingSoft) softBreaks.push(units.length);
           starts[units.length] = this.starts[pendingBlank]!;
           ends[units.length] = this.ends[pendingBlank]!;
@@ -158,6 +159,24 @@ export class InlineTextBuilder {
     };
   }
 
+  /**
+   * A compound broken after its hyphen by the line wrap ("function-" at a line end, "like" on the
+   * next line) reads as one word, as it does in the rendered text of a hard-wrapped paragraph;
+   * a suspended hyphen ("pre- and post-") keeps its space. `units` is the output so far, `next`
+   * the first unit after the line break. Common practice, no source.
+   */
+  private hyphenatedAcrossLines(units: readonly number[], next: number): boolean {
+    const last = units.length - 1;
+    if (last < 1 || (units[last] !== HYPHEN_MINUS && units[last] !== HYPHEN) || !LETTER.test(String.fromCharCode(units[last - 1]!))) return false;
+    let word = '';
+    for (let k = next; k < this.units.length && word.length <= MAX_CONJUNCTION; k++) {
+      const unit = String.fromCharCode(this.units[k]!);
+      if (!LOWER_LETTER.test(unit)) break;
+      word += unit;
+    }
+    return word.length > 0 && !SUSPENDED_HYPHEN_WORDS.has(word);
+  }
+
   /** One UTF-16 unit, given by its code, produced by the source range `[start, end)`. */
   pushCode(code: number, start: number, end: number): void {
     this.units.push(code);
@@ -168,6 +187,13 @@ export class InlineTextBuilder {
 
 const SPACE = 0x20;
 const LINE_FEED = 0x0a;
+const HYPHEN_MINUS = 0x2d;
+const HYPHEN = 0x2010;
+const LETTER = /\p{L}/u;
+const LOWER_LETTER = /\p{Ll}/u;
+/** Words after a hyphen that leave it suspended ("long- and short-term"; English and German). */
+const SUSPENDED_HYPHEN_WORDS: ReadonlySet<string> = new Set(['and', 'or', 'nor', 'to', 'und', 'oder', 'bis']);
+const MAX_CONJUNCTION = 4;
 
 /** Offsets scratch of finish() for paragraphs up to this many units; a longer one gets its own. */
 const SCRATCH_UNITS = 4096;
