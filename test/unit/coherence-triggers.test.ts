@@ -122,6 +122,8 @@ describe('coherence: back-references', () => {
     assert.equal(first('Entries follow the previous step.'), 'backReference:the previous step');
     assert.equal(first('The following example shows a dock schedule in the new format.'), 'backReference:The following example');
     assert.equal(first('Operators paste the following snippet into the ferry config.'), 'backReference:the following snippet');
+    assert.equal(first('Add the following lines to the pier config to start the ticket scanner.'), 'backReference:the following lines');
+    assert.equal(first('Run the following command on every dock server.'), 'backReference:the following command');
   });
 
   it('does not flag "the former" as "ex-", "above" as a preposition, or a named source', () => {

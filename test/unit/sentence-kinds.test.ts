@@ -106,6 +106,18 @@ describe('sentence kinds: fragments', () => {
     assert.equal(fragmentKind('the full timetable for the winter season', 7, '[the full timetable for the winter season](https://ferry.example/t)'), 'linkOnly');
   });
 
+  it('marks a sentence that only points elsewhere (common practice, no source)', () => {
+    // Invented demo sentences; the shape is the "For more information, see …" of product documentation.
+    assert.equal(fragmentKind('For more information, see Running the ferry timetable service.', 9), 'pointer');
+    assert.equal(fragmentKind('Please refer to the harbour operations guide for the winter schedule.', 11), 'pointer');
+    assert.equal(fragmentKind('See the timetable RFC for the rules on late departures.', 10), 'pointer');
+    assert.equal(fragmentKind('(See the crew handbook, chapter three.)', 6), 'pointer');
+    assert.equal(fragmentKind('Cf. the summer timetable of the north pier ferry.', 9), 'pointer');
+    // Prose that merely starts like one, or runs longer than a pointer, stays prose.
+    assert.equal(fragmentKind('Seeing the queue grow, the crew opens a second gangway at the north pier.', 14), null);
+    assert.equal(fragmentKind('For more information about delays, riders check the board, the app and the text line that the harbour office runs.', 20), null);
+  });
+
   it('normalizes copies to one key', () => {
     assert.equal(normalizeSentence('  The **ferry** leaves at nine.  '), normalizeSentence('the ferry leaves at nine'));
     assert.notEqual(normalizeSentence('The ferry leaves at nine.'), normalizeSentence('The ferry leaves at ten.'));

@@ -35,7 +35,7 @@ const DOCUMENT_PARTS = set(`
   sentence list table figure one two page part parts item items question answer`);
 
 /** Blocks a forward pointer names besides the document parts: "the following snippet". */
-const FORWARD_PARTS = set('snippet snippets code diagram diagrams configuration listing listings output excerpt sample samples');
+const FORWARD_PARTS = set('snippet snippets code diagram diagrams configuration listing listings output excerpt sample samples line lines command commands block blocks script scripts');
 
 /** After "as mentioned in ...": words that still point inside this document. */
 const INTERNAL_PLACES = set('previous preceding last earlier above first introduction overview prior same this');

@@ -6,9 +6,11 @@
  *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
  *    fewer, a lead-in ending in a colon, an unfinished clause (ending in ", and"), link-only text, a
- *    bare reference ("RFC 1234.", "[3]").
+ *    bare reference ("RFC 1234.", "[3]"), a pointer elsewhere ("For more information, see …";
+ *    text/pointers.ts).
  * Plain rules on the sentence's text and source; nothing here is learned or tuned.
  */
+import { isPointerSentence } from '../text/pointers';
 import type { BarredKind, ParsedDocument } from '../types';
 
 // Hoisted: the bundler turns a \p{…} literal into `new RegExp(…)`, which inside a function runs at every call.
@@ -16,7 +18,7 @@ const LEADING_MARKS = /^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u;
 const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
 
 export type { BarredKind };
-export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference';
+export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference' | 'pointer';
 
 export const SENTENCE_KIND_DEFAULTS = {
   /** At most this many words is a fragment (issue 11: "≤ 6 words"). */
@@ -109,6 +111,7 @@ export function fragmentKind(text: string, words: number, source = text, setting
   if (UNFINISHED.test(trimmed)) return 'unfinished';
   if (BARE_REFERENCE.test(trimmed)) return 'bareReference';
   if (isLinkOnly(source)) return 'linkOnly';
+  if (isPointerSentence(trimmed, words)) return 'pointer';
   if (words <= settings.fragmentWords) return 'short';
   return null;
 }

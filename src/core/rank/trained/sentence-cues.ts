@@ -6,6 +6,7 @@
  */
 import { countPhrases, phraseIndex } from '../edmundson';
 import { headingClassesOf, type HeadingClass } from '../../text/headings';
+import { isPointerSentence } from '../../text/pointers';
 import { withoutWebAddresses } from '../../text/web-addresses';
 import type { AnalyzedDocument } from '../../types';
 
@@ -39,13 +40,14 @@ export function isPlaceholder(text: string): boolean {
 }
 
 /**
- * A sentence that only points elsewhere: a bare URL, or a short "See …" pointer. Links in the
- * source keep their visible text, so a pointer is judged by its shape.
+ * A sentence that only points elsewhere: a bare URL, or a pointer ("See …", "For more
+ * information, see …"; text/pointers.ts). Links in the source keep their visible text, so a
+ * pointer is judged by its shape.
  */
 export function isLinkOnly(text: string, words: readonly string[]): boolean {
   const withoutUrls = withoutWebAddresses(text);
   if (withoutUrls.length < text.length && !TWO_LETTERS.test(withoutUrls.replace(/\b(?:see|at|here|link)\b/giu, ''))) return true;
-  return words.length <= 8 && (words[0] === 'see' || words[0] === 'cf');
+  return isPointerSentence(text, words.length);
 }
 
 /** Classes that mark a section as something other than the document's own content. */
