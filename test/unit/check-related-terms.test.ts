@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { LSA_DEFAULTS, relatedness, symmetricEigen, termSpace } from '../../src/core/check/related-terms';
+import { LSA_DEFAULTS, relatedness, relatedTerms, symmetricEigen, termSpace } from '../../src/core/check/related-terms';
 
 describe('check: related terms (latent semantic analysis, Deerwester et al. 1990)', () => {
   it('decomposes a symmetric matrix exactly (cyclic Jacobi)', () => {
@@ -33,6 +33,17 @@ describe('check: related terms (latent semantic analysis, Deerwester et al. 1990
     assert.ok(relatedness(space, 'ferry', 'boat') > 0.8, String(relatedness(space, 'ferry', 'boat')));
     assert.ok(relatedness(space, 'ferry', 'fare') < 0.3, String(relatedness(space, 'ferry', 'fare')));
     assert.equal(relatedness(space, 'ferry', 'unknown'), 0);
+  });
+
+  it('relates nothing to a term of one sentence: its row only repeats that sentence (ours)', () => {
+    const space = termSpace(sentences, { ...LSA_DEFAULTS, dimensions: 2 })!;
+    // "rise" is only in ['price', 'ticket', 'rise']; without the rule it points where "price" and "ticket" point.
+    const loose = termSpace(sentences, { ...LSA_DEFAULTS, dimensions: 2, minTermSentences: 1 })!;
+    assert.ok(relatedness(loose, 'rise', 'price') > 0.9, String(relatedness(loose, 'rise', 'price')));
+    assert.equal(relatedness(space, 'rise', 'price'), 0);
+    assert.ok(!relatedTerms(space, 'price', 0.5).has('rise'));
+    assert.equal(relatedTerms(space, 'rise', 0.5).size, 0);
+    assert.ok(relatedTerms(space, 'ferry', 0.8).has('boat'));
   });
 
   it('is deterministic and gives nothing for a document too short to learn from', () => {

@@ -22,6 +22,11 @@ export const LSA_DEFAULTS = {
   iterations: 2,
   /** Below this many sentences there is too little co-occurrence to learn from; no relations. */
   minSentences: 12,
+  /**
+   * A term in fewer sentences than this relates to nothing: its row only repeats the one sentence
+   * it is in, so every word of that sentence would look related to it ("text" and "third").
+   */
+  minTermSentences: 2,
   seed: 0x1a5e,
 };
 
@@ -30,6 +35,8 @@ export interface TermSpace {
   /** Unit-length term rows of U·Σ, `dimensions` values each. */
   readonly rows: Float64Array;
   readonly dimensions: number;
+  /** Per term id: 1 when the term is in enough sentences to take part in relations. */
+  readonly relatable: Uint8Array;
 }
 
 /** mulberry32 (common practice, no source), mapped to [-1, 1). */
@@ -164,15 +171,17 @@ export function termSpace(sentences: readonly (readonly string[])[], settings = 
     norm = Math.sqrt(norm);
     if (norm > 0) for (let d = 0; d < k; d++) rows[t * k + d]! /= norm;
   }
-  return { vocabulary: index.vocabulary, rows, dimensions: k };
+  const relatable = new Uint8Array(m);
+  for (let t = 0; t < m; t++) relatable[t] = index.sentenceFrequency[t]! >= settings.minTermSentences ? 1 : 0;
+  return { vocabulary: index.vocabulary, rows, dimensions: k, relatable };
 }
 
-/** Cosine of two terms in the space; 0 for a term the body never uses. */
+/** Cosine of two terms in the space; 0 for a term the body never uses or uses in too few sentences. */
 export function relatedness(space: TermSpace, a: string, b: string): number {
   if (a === b) return 1;
   const i = space.vocabulary.get(a);
   const j = space.vocabulary.get(b);
-  if (i === undefined || j === undefined) return 0;
+  if (i === undefined || j === undefined || !space.relatable[i] || !space.relatable[j]) return 0;
   let dot = 0;
   for (let d = 0; d < space.dimensions; d++) dot += space.rows[i * space.dimensions + d]! * space.rows[j * space.dimensions + d]!;
   return dot;
@@ -182,10 +191,10 @@ export function relatedness(space: TermSpace, a: string, b: string): number {
 export function relatedTerms(space: TermSpace, term: string, min: number): Map<string, number> {
   const related = new Map<string, number>();
   const i = space.vocabulary.get(term);
-  if (i === undefined) return related;
+  if (i === undefined || !space.relatable[i]) return related;
   const k = space.dimensions;
   for (const [other, j] of space.vocabulary) {
-    if (j === i) continue;
+    if (j === i || !space.relatable[j]) continue;
     let dot = 0;
     for (let d = 0; d < k; d++) dot += space.rows[i * k + d]! * space.rows[j * k + d]!;
     if (dot >= min) related.set(other, dot);
