@@ -85,6 +85,8 @@ export EXTENSIONS_GALLERY='{}' # no marketplace
 for ws in workspace-ui workspace-suite workspace-web workspace-digest; do
   mkdir -p "$RUN/$ws" && cp "$ROOT"/media/demo/*.md "$RUN/$ws/"
 done
+# The reStructuredText demo, for the UI run's check of an opening-text abstract.
+cp "$ROOT/media/demo/ferry-timetable-planner.rst" "$RUN/workspace-ui/"
 # The digest's three invented files, in a folder of their own (the in-editor suite digests it too).
 for ws in workspace-suite workspace-digest; do
   cp -r "$ROOT/test/e2e/fixtures/digest" "$RUN/$ws/digest"

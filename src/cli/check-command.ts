@@ -1,4 +1,4 @@
-/** `tersely check FILE [--abstract-heading TEXT | --abstract FILE] [--format text|json] [--strict]` */
+/** `tersely check FILE [--abstract-heading TEXT | --abstract-opening | --abstract FILE] [--format text|json] [--strict]` */
 import { checkAbstract, SUMMARY_OPTIONS, type AbstractReport, type AbstractSentenceCheck, type AbstractSource } from '../core/index';
 import { choiceFlag, UsageError } from './args';
 import { parseFlags } from './option-flags';
@@ -8,7 +8,7 @@ import { forcedFormat } from './summarize-command';
 import { neutralizeControls, plural, terminalSafeJson, warn } from './terminal-text';
 
 /** How the command line names the abstract, added to the engine's message when none was found. */
-const HOW_TO_NAME_ABSTRACT = 'Name its heading with --abstract-heading TEXT, or give it in a file with --abstract FILE.';
+const HOW_TO_NAME_ABSTRACT = 'Name its heading with --abstract-heading TEXT, check the text before the first heading with --abstract-opening, or give it in a file with --abstract FILE.';
 
 /** What ROUGE means here, in one sentence. */
 export const ROUGE_EXPLAINED =
@@ -34,6 +34,7 @@ async function readNamed(path: string, stdinFormat: Parameters<typeof readInput>
 export async function runCheck(args: string[]): Promise<number> {
   const { options, extra, positionals, notes } = parseFlags('check', args, {
     'abstract-heading': { type: 'string' },
+    'abstract-opening': { type: 'boolean' },
     abstract: { type: 'string' },
     format: { type: 'string' },
     'input-format': { type: 'string' },
@@ -42,7 +43,8 @@ export async function runCheck(args: string[]): Promise<number> {
   if (positionals.length !== 1) throw new UsageError('check takes exactly one FILE');
   const heading = extra['abstract-heading'] as string | undefined;
   const abstractFile = extra.abstract as string | undefined;
-  if (heading !== undefined && abstractFile !== undefined) throw new UsageError('choose one of --abstract-heading and --abstract');
+  const opening = extra['abstract-opening'] === true;
+  if ([heading !== undefined, abstractFile !== undefined, opening].filter(Boolean).length > 1) throw new UsageError('choose one of --abstract-heading, --abstract-opening and --abstract');
   const format = choiceFlag('format', extra.format as string | undefined, ['text', 'json'] as const) ?? 'text';
   const strict = extra.strict === true;
   const inputFormat = forcedFormat(extra, notes);
@@ -52,6 +54,7 @@ export async function runCheck(args: string[]): Promise<number> {
   const input = await readNamed(positionals[0]!, inputFormat ?? 'markdown', maxChars);
   let abstract: AbstractSource | undefined;
   if (heading !== undefined) abstract = { kind: 'heading', heading };
+  if (opening) abstract = { kind: 'opening' };
   if (abstractFile !== undefined) {
     const file = await readNamed(abstractFile, 'markdown', maxChars);
     abstract = { kind: 'text', text: file.text, format: file.format };
@@ -106,7 +109,7 @@ function sentenceLines(sentence: AbstractSentenceCheck, style: Style): string[] 
 
 export function renderCheck(name: string, report: Check, style: Style): string {
   const out: string[] = [];
-  const where = report.abstract.heading ? `the "${report.abstract.heading}" section` : 'the separate abstract';
+  const where = report.abstract.heading ? `the "${report.abstract.heading}" section` : report.abstract.origin === 'opening' ? 'the opening text before the first heading' : 'the separate abstract';
   out.push(style.bold(`Abstract check: ${name}`), style.dim(`Checking ${where} (${report.abstract.words} words, ${plural(report.abstract.sentences.length, 'sentence')}) against the body.`));
   out.push(style.dim(report.rule));
 

@@ -42,6 +42,7 @@ export function helpText(): string {
     '',
     'check options',
     helpLine('--abstract-heading TEXT', 'the section holding the abstract (default: Summary, Abstract or TL;DR)'),
+    helpLine('--abstract-opening', 'the text before the first section heading is the abstract (an introduction, as in many specifications)'),
     helpLine('--abstract FILE', 'read the abstract from a separate file instead'),
     ...optionHelp('check'),
     helpLine('--input-format FORMAT', `read the document as ${inputFormats}`),

@@ -18,7 +18,7 @@ import { checkedSpan } from './ranges';
 import { formatFor, settingKeyOf, toEngineOptions } from './settings';
 import { CancelledError, type EngineClient } from './worker-client';
 
-type Source = { readonly kind: 'heading'; readonly heading: string } | { readonly kind: 'text'; readonly text: string; readonly span: Span };
+type Source = { readonly kind: 'heading'; readonly heading: string } | { readonly kind: 'opening' } | { readonly kind: 'text'; readonly text: string; readonly span: Span };
 
 interface ShownCheck {
   readonly id: number;
@@ -59,10 +59,10 @@ export class AbstractCheck {
     }
     const first = await this.check(editor, source);
     if (!first || first.report.ok || source || (first.report.reason !== 'noAbstract' && first.report.reason !== 'missingHeading')) return first && this.show(editor, first);
-    // No abstract section found: let the user pick one.
-    const picked = await this.pickHeading(document);
+    // No abstract section found: let the user pick one (or the opening text).
+    const picked = await this.pickSource(document);
     if (!picked) return this.show(editor, first);
-    const second = await this.check(editor, { kind: 'heading', heading: picked });
+    const second = await this.check(editor, picked);
     return second && this.show(editor, second);
   }
 
@@ -82,7 +82,7 @@ export class AbstractCheck {
     if (source?.kind === 'text') text = text.slice(0, source.span.start) + source.text.replace(/[^\r\n]/g, ' ') + text.slice(source.span.end);
     const format = formatFor(document.languageId, document.fileName);
     const { budget: _budget, ...options } = toEngineOptions(settings, format, 0);
-    const abstract = source === undefined ? undefined : source.kind === 'heading' ? source : { kind: 'text' as const, text: source.text, format };
+    const abstract = source === undefined ? undefined : source.kind === 'text' ? { kind: 'text' as const, text: source.text, format } : source;
     const version = document.version;
     const progress = startProgress(panel, 'checkAbstract', wording);
     try {
@@ -100,7 +100,7 @@ export class AbstractCheck {
     }
   }
 
-  private async pickHeading(document: vscode.TextDocument): Promise<string | undefined> {
+  private async pickSource(document: vscode.TextDocument): Promise<Source | undefined> {
     const { t } = this.context.wording;
     // Parsed in the engine host, so the extension bundle carries no document parser.
     let found: readonly { heading: string; depth: number }[];
@@ -114,16 +114,18 @@ export class AbstractCheck {
       void vscode.window.showErrorMessage(t('Tersely could not read the document’s headings: {0}', message));
       return undefined;
     }
-    const headings = found.map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, heading: s.heading }));
+    const headings = found.map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, source: { kind: 'heading', heading: s.heading } as Source }));
     if (headings.length === 0) {
       void vscode.window.showInformationMessage(t('No section is headed Summary, Abstract or TL;DR, and the document has no headings. Select the abstract’s text and run Check Abstract again.'));
       return undefined;
     }
-    const choice = await vscode.window.showQuickPick(headings, {
+    // An introduction before the first heading often serves as the abstract (specifications).
+    const opening = { label: t('Opening text (before the first heading)'), source: { kind: 'opening' } as Source };
+    const choice = await vscode.window.showQuickPick([opening, ...headings], {
       title: t('Which section is the abstract?'),
-      placeHolder: t('No section is headed Summary, Abstract or TL;DR. Pick the abstract’s heading (or press Escape and select its text instead).'),
+      placeHolder: t('No section is headed Summary, Abstract or TL;DR. Pick the abstract’s heading or the opening text (or press Escape and select its text instead).'),
     });
-    return choice?.heading;
+    return choice?.source;
   }
 
   private show(editor: vscode.TextEditor, result: { report: AbstractReport; version: number; text: string }): CheckOutcome {

@@ -43,7 +43,7 @@ export function abstractView(report: AbstractReport, documentName: string, wordi
   const { abstract, sections } = report;
   const covered = sections.filter((s) => s.covered).length;
   const flagged = abstract.sentences.filter((s) => !s.supported).length;
-  const name = abstract.heading ? `“${abstract.heading}”` : t('The selected text');
+  const name = abstract.heading ? `“${abstract.heading}”` : abstract.origin === 'opening' ? t('The opening text') : t('The selected text');
   const headline = t(
     '{0}: {1} sentences, {2} words; covers {3} of {4} sections; {5} may lack support in the body.',
     name,

@@ -347,6 +347,23 @@ async function main(): Promise<void> {
     await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '06-abstract-check.png') });
     mark(`abstract check: ${checks['abstractCheck'] ? JSON.stringify(checks['abstractCheck']) : ''}`);
 
+    // ---- no abstract section: the picker offers the opening text, which is then checked ----
+    await openFile(page, 'ferry-timetable-planner.rst', 'Demo document for Tersely');
+    await runCommand(page, 'Tersely: Check Abstract');
+    const openingItem = page.locator('.quick-input-widget .quick-input-list .monaco-list-row', { hasText: 'Opening text (before the first heading)' });
+    await openingItem.waitFor({ timeout: 30_000 });
+    const pickerRows = await page.locator('.quick-input-widget .quick-input-list .monaco-list-row').allInnerTexts();
+    assert.ok(pickerRows.some((row) => row.includes('Problem description')), `the picker lists the headings too: ${pickerRows.join(' | ')}`);
+    await page.screenshot({ path: join(artifacts, '06b-abstract-picker.png') });
+    await openingItem.click();
+    await poll(() => checkPart.locator('.check-title').innerText().catch(() => ''), (t) => t.includes('ferry-timetable-planner.rst'), 30_000, 'the check of the opening text');
+    const openingHeadline = await checkPart.locator('.check-headline').innerText();
+    assert.match(openingHeadline, /^The opening text: \d+ sentences/);
+    checks['openingCheck'] = { headline: openingHeadline, pickerRows };
+    await checkPart.scrollIntoViewIfNeeded();
+    await page.locator('iframe.webview.ready').first().screenshot({ path: join(artifacts, '06c-opening-check.png') });
+    mark(`opening text checked: ${openingHeadline}`);
+
     // ---- back to the demo summary; narrow and wide panel; dark, light and high-contrast themes ----
     // The demo keeps its scroll position from earlier steps, so any rendered line will do; then to the top.
     // Its tab is still open: a click brings it back.

@@ -299,6 +299,35 @@ describe('check: abstract options and edge cases', () => {
   });
 });
 
+describe('check: the opening text as the abstract', () => {
+  it('checks the introduction before the first heading against the rest (the rst demo)', () => {
+    const text = demo('ferry-timetable-planner.rst');
+    const check = expectCheck(checkAbstract(text, { format: 'restructuredtext', language: 'en', abstract: { kind: 'opening' } }));
+    assert.equal(check.abstract.origin, 'opening');
+    assert.equal(check.abstract.heading, null);
+    const firstHeading = text.indexOf('Problem description');
+    assert.ok(check.abstract.sentences.length >= 3);
+    assert.match(check.abstract.sentences[0]!.text, /^The Skerra ferry runs a fixed timetable/);
+    // Every abstract sentence comes from before the first section; no section of the body is the opening.
+    for (const s of check.abstract.sentences) assert.ok(s.span !== null && s.span.end <= firstHeading, s.text);
+    assert.ok(check.sections.length >= 3 && check.sections.every((s) => s.heading !== ''), check.sections.map((s) => s.heading).join(' | '));
+    // Tersely's own summary to compare with leaves the opening out, as it leaves out an abstract section.
+    assert.ok(check.rouge !== null);
+    const opening = new Set(check.abstract.sentences.map((s) => s.text));
+    assert.ok(check.rouge!.summary.every((s) => !opening.has(s.text)), 'the comparison summary copies the opening');
+  });
+
+  it('says why when there is no opening text or no heading to end it', () => {
+    const noOpening = checkAbstract('# Ferry\n\n## Fares\n\nFares rise in May for every crossing.\n\n## Crew\n\nThe crew works four shifts a week.\n', { format: 'markdown', language: 'en', abstract: { kind: 'opening' } });
+    assert.equal(noOpening.ok, false);
+    assert.equal((noOpening as { reason: string }).reason, 'emptyAbstract');
+    assert.match((noOpening as { error: string }).error, /no text before its first section heading/);
+    const noHeadings = checkAbstract('The ferry runs late on Fridays. The crew works four shifts a week.\n', { format: 'markdown', language: 'en', abstract: { kind: 'opening' } });
+    assert.equal(noHeadings.ok, false);
+    assert.match((noHeadings as { error: string }).error, /no section headings/);
+  });
+});
+
 // Rust RFCs (MIT/Apache-2.0, /work/shared/corpus) open with a "Summary" written by their authors:
 // real abstracts by other people. These are the first five (by number) whose Summary has three
 // sentences or more; a one-sentence abstract is not meant to cover a whole RFC.

@@ -37,6 +37,20 @@ describe('command line: tersely check', function () {
   it('exits 2 on a usage error', () => {
     assert.equal(tersely(['check', DEMO, '--strict', '--format', 'yaml']).code, 2);
     assert.equal(tersely(['check']).code, 2);
+    const both = tersely(['check', DEMO, '--abstract-opening', '--abstract-heading', 'Summary']);
+    assert.equal(both.code, 2);
+    assert.match(both.stderr, /choose one of --abstract-heading, --abstract-opening and --abstract/);
+  });
+
+  it('checks the opening text with --abstract-opening, and names that way when no abstract section is found', () => {
+    const rst = join('media', 'demo', 'ferry-timetable-planner.rst');
+    const none = tersely(['check', rst]);
+    assert.notEqual(none.code, 0);
+    assert.match(none.stderr, /--abstract-opening/);
+    const opening = tersely(['check', rst, '--abstract-opening']);
+    assert.equal(opening.code, 0, opening.stderr);
+    assert.match(opening.stdout, /Checking the opening text before the first heading \(\d+ words, \d+ sentences\)/);
+    assert.match(opening.stdout, /1\. The Skerra ferry runs a fixed timetable/);
   });
 
   it('names the changed number and the flipped negation with both sides and the body line, and explains ROUGE in one sentence', () => {

@@ -4,6 +4,13 @@ import { checkAbstract } from '../../src/core/check/abstract';
 import { abstractView } from '../../src/extension/abstract-view';
 
 describe('extension abstract view', () => {
+  it('names an opening-text abstract as such in the headline', () => {
+    const text = readFileSync(new URL('../../media/demo/ferry-timetable-planner.rst', import.meta.url), 'utf8');
+    const report = checkAbstract(text, { format: 'restructuredtext', abstract: { kind: 'opening' } });
+    assert.ok(report.ok);
+    assert.match(abstractView(report, 'ferry-timetable-planner.rst').panel.headline, /^The opening text: \d+ sentences/);
+  });
+
   it('turns an engine report into a headline and findings with spans inside the document', () => {
     const text = readFileSync(new URL('../../media/demo/abstract-check.md', import.meta.url), 'utf8');
     const report = checkAbstract(text, { format: 'markdown' });

@@ -3,7 +3,7 @@
  */
 import { analyze } from '../analyze';
 import { parseDocument } from '../formats/registry';
-import { topSectionDepth } from '../select/units';
+import { balanceUnits, topSectionDepth } from '../select/units';
 import { FALLBACK_ABSTRACT_HEADINGS, HEADING_CLASSES, normalizeHeading } from '../text/headings';
 import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
 import type { AbstractSource } from './abstract-report';
@@ -42,6 +42,20 @@ export function sectionWithDescendants(doc: ParsedDocument, root: number): Uint8
   return inside;
 }
 
+export const NO_OPENING_MESSAGE = 'The document has no text before its first section heading to check as the abstract.';
+export const NO_HEADINGS_MESSAGE = 'The document has no section headings, so its opening text cannot be told from its body.';
+
+/**
+ * The sections of the opening text: the root and a lone title that encloses the document, i.e.
+ * what comes before the first heading at the document's top section level (select/units.ts).
+ */
+export function openingSections(doc: ParsedDocument): Uint8Array {
+  const units = balanceUnits(doc, 1).unitOfSection;
+  const inside = new Uint8Array(doc.sections.length);
+  for (const section of doc.sections) if (units[section.index] === 0) inside[section.index] = 1;
+  return inside;
+}
+
 export function missingHeadingMessage(heading: string): string {
   return `No section headed "${heading}" was found.`;
 }
@@ -60,7 +74,7 @@ export interface AbstractSentence {
 }
 
 export interface LocatedAbstract {
-  readonly origin: 'section' | 'text';
+  readonly origin: 'section' | 'opening' | 'text';
   readonly heading: string | null;
   readonly section: number | null;
   readonly span: Span | null;
@@ -92,22 +106,36 @@ export function locateAbstract(analyzed: AnalyzedDocument, source: AbstractSourc
     return { origin: 'text', heading: null, section: null, span: null, sections: new Uint8Array(doc.sections.length), sentences };
   }
 
+  if (source?.kind === 'opening') {
+    if (!doc.sections.some((section) => section.depth > 0)) return { reason: 'noAbstract', error: NO_HEADINGS_MESSAGE };
+    const sections = openingSections(doc);
+    const sentences = doc.sentences.filter((s) => sections[s.section] === 1).map((s) => abstractSentenceOf(analyzed, s.index));
+    if (sentences.length === 0) return { reason: 'emptyAbstract', error: NO_OPENING_MESSAGE };
+    const span = { start: sentences[0]!.span!.start, end: sentences[sentences.length - 1]!.span!.end };
+    return { origin: 'opening', heading: null, section: null, span, sections, sentences };
+  }
+
   const wanted = source?.kind === 'heading' ? source.heading : undefined;
   const index = findAbstractSection(doc, wanted);
   if (index === null) return wanted === undefined ? { reason: 'noAbstract', error: NO_ABSTRACT_MESSAGE } : { reason: 'missingHeading', error: missingHeadingMessage(wanted) };
   const section = doc.sections[index]!;
   const sections = sectionWithDescendants(doc, index);
-  const sentences = doc.sentences
-    .filter((s) => sections[s.section] === 1)
-    .map((s) => ({
-      sentence: s.index,
-      text: s.text,
-      span: s.span,
-      source: doc.text.slice(s.span.start - doc.baseOffset, s.span.end - doc.baseOffset),
-      terms: analyzed.terms[s.index]!,
-      wordList: analyzed.words[s.index]!,
-      words: analyzed.words[s.index]!.length,
-    }));
+  const sentences = doc.sentences.filter((s) => sections[s.section] === 1).map((s) => abstractSentenceOf(analyzed, s.index));
   if (sentences.length === 0) return { reason: 'emptyAbstract', error: `The section "${section.heading}" has no sentences to check.` };
   return { origin: 'section', heading: section.heading, section: index, span: section.span, sections, sentences };
+}
+
+/** A sentence of the checked document as an abstract sentence. */
+function abstractSentenceOf(analyzed: AnalyzedDocument, index: number): AbstractSentence {
+  const { doc } = analyzed;
+  const s = doc.sentences[index]!;
+  return {
+    sentence: s.index,
+    text: s.text,
+    span: s.span,
+    source: doc.text.slice(s.span.start - doc.baseOffset, s.span.end - doc.baseOffset),
+    terms: analyzed.terms[s.index]!,
+    wordList: analyzed.words[s.index]!,
+    words: analyzed.words[s.index]!.length,
+  };
 }

@@ -10,6 +10,8 @@ import type { DocumentFormat, Span } from '../types';
 /** Where the abstract comes from: a section of the document, or text supplied separately. */
 export type AbstractSource =
   | { readonly kind: 'heading'; readonly heading: string }
+  /** The text before the document's first section heading (an introduction serving as the abstract). */
+  | { readonly kind: 'opening' }
   | { readonly kind: 'text'; readonly text: string; readonly format?: DocumentFormat };
 
 /** What a consistency finding is about. */
@@ -193,8 +195,8 @@ export interface AbstractCheck {
   readonly ok: true;
   readonly language: string;
   readonly abstract: {
-    readonly origin: 'section' | 'text';
-    /** Heading of the abstract section (null for separate text). */
+    readonly origin: 'section' | 'opening' | 'text';
+    /** Heading of the abstract section (null for the opening text and separate text). */
     readonly heading: string | null;
     readonly section: number | null;
     readonly span: Span | null;

@@ -56,22 +56,47 @@ export function abstractChecker(documentText: string, request: Omit<CheckAbstrac
   const models = new Map<number, BodyModel | null>();
   let ranked: RankResult | null = null;
   const ranking = () => (ranked ??= rankPrepared(prepared));
+  const whole: Comparison = { prepared, ranking };
+  // An opening-text abstract has no heading to leave out of the comparison summary: the summary is
+  // made from the document with the opening blanked (same length, so every offset stays right).
+  let opening: Comparison | null = null;
+  const withoutOpening = (located: LocatedAbstract): Comparison => {
+    if (opening) return opening;
+    const { doc } = prepared.analyzed;
+    let text = doc.text;
+    for (const sentence of located.sentences) {
+      const from = sentence.span!.start - doc.baseOffset;
+      const to = sentence.span!.end - doc.baseOffset;
+      text = text.slice(0, from) + text.slice(from, to).replace(/[^\r\n]/g, ' ') + text.slice(to);
+    }
+    const blanked = prepareDocument(text, summaryRequest);
+    if (!blanked.ok) return whole;
+    let blankedRanking: RankResult | null = null;
+    return (opening = { prepared: blanked.prepared, ranking: () => (blankedRanking ??= rankPrepared(blanked.prepared)) });
+  };
   return (abstract) => {
     const located = locateAbstract(prepared.analyzed, abstract, prepared.analyzed.language);
     if ('error' in located) return { ok: false, reason: located.reason, error: located.error };
-    const key = located.section ?? -1;
+    // One body per abstract place: a section, the opening text, or none (separate text).
+    const key = located.section ?? (located.origin === 'opening' ? -2 : -1);
     if (!models.has(key)) models.set(key, bodyModel(prepared.analyzed, located.sections, prepared.options.excludeHeadings));
     const model = models.get(key)!;
     if (model === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
-    return report(prepared, located, matchAbstract(prepared.analyzed, located, thresholds, model), thresholds, ranking);
+    return report(prepared, located, matchAbstract(prepared.analyzed, located, thresholds, model), thresholds, located.origin === 'opening' ? withoutOpening(located) : whole);
   };
 }
 
-function report(prepared: PreparedDocument, located: LocatedAbstract, match: ReturnType<typeof matchAbstract>, thresholds: AbstractThresholds, ranking: () => RankResult): AbstractCheck {
+/** The document Tersely's comparison summary is made from, and its ranking (made once, on demand). */
+interface Comparison {
+  readonly prepared: PreparedDocument;
+  readonly ranking: () => RankResult;
+}
+
+function report(prepared: PreparedDocument, located: LocatedAbstract, match: ReturnType<typeof matchAbstract>, thresholds: AbstractThresholds, comparison: Comparison): AbstractCheck {
   const { analyzed } = prepared;
   const { sentences, sections, unjudged, content } = match;
   const notices: string[] = [];
-  const rouge = rougeComparison(prepared, located, notices, ranking);
+  const rouge = rougeComparison(comparison, located, notices);
 
   return {
     ok: true,
@@ -120,7 +145,7 @@ function validThresholds(partial: Partial<AbstractThresholds> | undefined): Part
 }
 
 /** Tersely's own summary at the abstract's length, compared with the abstract both ways. */
-function rougeComparison(prepared: PreparedDocument, located: LocatedAbstract, notices: string[], ranking: () => RankResult): AbstractRougeComparison | null {
+function rougeComparison({ prepared, ranking }: Comparison, located: LocatedAbstract, notices: string[]): AbstractRougeComparison | null {
   const { analyzed } = prepared;
   const words = located.sentences.reduce((sum, s) => sum + s.words, 0);
   // The summary must not simply copy the abstract back, so the abstract section is left out.
