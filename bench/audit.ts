@@ -60,7 +60,7 @@ export function auditSummary(summary: Summary, templateKeys: ReadonlySet<string>
     const key = normalizeSentence(sentence.text);
     tally.picks++;
     tally.words += words;
-    if (fragmentKind(sentence.text, words, source) !== null) tally.fragments++;
+    if (fragmentKind(sentence.text, words, source, { answeredInParagraph: sentence.positionInParagraph < sentence.paragraphLength - 1 }) !== null) tally.fragments++;
     if (barredKind(sentence.text, words) !== null) tally.barred++;
     if (templateKeys.has(key)) tally.template++;
     if (seen.has(key)) tally.repeated++;
@@ -141,7 +141,7 @@ export async function run(argv: readonly string[]): Promise<number> {
     '',
     `Generated ${new Date().toISOString().slice(0, 10)} by \`node dist/bench.cjs audit\` on the test halves; do not edit by hand.`,
     '',
-    'Every pick of the default method, counted by rule: fragments = six words or fewer, a lead-in ending in a colon, link-only, a bare reference, a pointer elsewhere (\'For more information, see …\') or an unfinished clause (ending in a comma, a semicolon, \'and\', \'or\', \'nor\' or \'but\'); ' +
+    'Every pick of the default method, counted by rule: fragments = six words or fewer, a lead-in ending in a colon, a question its paragraph goes on to answer, link-only, a bare reference, a pointer elsewhere (\'For more information, see …\') or an unfinished clause (ending in a comma, a semicolon, \'and\', \'or\', \'nor\' or \'but\'); ' +
       'barred = placeholder answers, pull-request boilerplate, bylines, metadata lines; template = a sentence `learnTemplateText` finds recurring ' +
       'in independent documents of the same corpus\'s train half (what `tersely train` stores in a model), passed to the engine in the model; ' +
       'repeated = the same normalized text twice in one summary; runs = three or more consecutive sentences of one paragraph (the rule lifts when the length takes in every candidate sentence; such runs are counted apart).',

@@ -106,6 +106,16 @@ describe('sentence kinds: fragments', () => {
     assert.equal(fragmentKind('the full timetable for the winter season', 7, '[the full timetable for the winter season](https://ferry.example/t)'), 'linkOnly');
   });
 
+  it('marks a question its paragraph goes on to answer, not one left open (common practice, no source)', () => {
+    // Invented demo sentences: a run-in question ("**Why …?** Because …") leads in to its answer.
+    const question = 'Why does the night ferry leave from the north pier instead of the harbour?';
+    assert.equal(fragmentKind(question, 14, `**${question}**`, { answeredInParagraph: true }), 'answeredQuestion');
+    assert.equal(fragmentKind(question, 14, question, { answeredInParagraph: true }), 'answeredQuestion');
+    // Alone in its paragraph (an open question), or not a question: prose.
+    assert.equal(fragmentKind(question, 14, question), null);
+    assert.equal(fragmentKind('The night ferry leaves from the north pier because the harbour is dredged.', 13, undefined, { answeredInParagraph: true }), null);
+  });
+
   it('marks a sentence that only points elsewhere (common practice, no source)', () => {
     // Invented demo sentences; the shape is the "For more information, see …" of product documentation.
     assert.equal(fragmentKind('For more information, see Running the ferry timetable service.', 9), 'pointer');

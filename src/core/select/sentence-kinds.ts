@@ -5,9 +5,9 @@
  *    metadata lines ("Start Date: …"), and API lines: an HTTP request line or a bare URL path
  *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
- *    fewer, a lead-in ending in a colon, an unfinished clause (ending in ", and"), link-only text, a
- *    bare reference ("RFC 1234.", "[3]"), a pointer elsewhere ("For more information, see …";
- *    text/pointers.ts).
+ *    fewer, a lead-in ending in a colon, a question its paragraph goes on to answer, an unfinished
+ *    clause (ending in ", and"), link-only text, a bare reference ("RFC 1234.", "[3]"), a pointer
+ *    elsewhere ("For more information, see …"; text/pointers.ts).
  * Plain rules on the sentence's text and source; nothing here is learned or tuned.
  */
 import { isPointerSentence } from '../text/pointers';
@@ -18,7 +18,7 @@ const LEADING_MARKS = /^[\s\p{P}\p{S}]+(?=\p{L}|\p{N})/u;
 const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
 
 export type { BarredKind };
-export type FragmentKind = 'short' | 'leadIn' | 'unfinished' | 'linkOnly' | 'bareReference' | 'pointer';
+export type FragmentKind = 'short' | 'leadIn' | 'answeredQuestion' | 'unfinished' | 'linkOnly' | 'bareReference' | 'pointer';
 
 export const SENTENCE_KIND_DEFAULTS = {
   /** At most this many words is a fragment (issue 11: "≤ 6 words"). */
@@ -104,10 +104,21 @@ function barredKindOf(trimmed: string, key: string, words: number, settings: typ
  */
 const UNFINISHED = /(?:[,;]|\b(?:and|or|nor|but))$/i;
 
-/** Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known. */
-export function fragmentKind(text: string, words: number, source = text, settings = SENTENCE_KIND_DEFAULTS): FragmentKind | null {
+/** Where a sentence stands, as far as fragments care. */
+export interface FragmentPlace {
+  /** More sentences follow it in its paragraph. */
+  readonly answeredInParagraph?: boolean;
+}
+
+/**
+ * Why a sentence is a fragment, or null. `source` is its Markdown/rst source when known; `place`
+ * tells whether the paragraph goes on after it: a question it goes on to answer ("Why a ratio?
+ * A fixed cap is …") is a lead-in to its answer, as a colon lead-in is to its list.
+ */
+export function fragmentKind(text: string, words: number, source = text, place: FragmentPlace = {}, settings = SENTENCE_KIND_DEFAULTS): FragmentKind | null {
   const trimmed = text.trim();
   if (/:\s*$/.test(trimmed)) return 'leadIn';
+  if (place.answeredInParagraph && /\?["'”’)*_]*$/u.test(trimmed)) return 'answeredQuestion';
   if (UNFINISHED.test(trimmed)) return 'unfinished';
   if (BARE_REFERENCE.test(trimmed)) return 'bareReference';
   if (isLinkOnly(source)) return 'linkOnly';
@@ -158,7 +169,7 @@ export function sentenceKinds(doc: ParsedDocument, wordCounts: readonly number[]
     const words = wordCounts[i] ?? 0;
     barred[i] = templateKeys.has(key) ? 'template' : barredKindOf(sentence.text.trim(), key, words, SENTENCE_KIND_DEFAULTS);
     const source = doc.text.slice(sentence.span.start - doc.baseOffset, sentence.span.end - doc.baseOffset);
-    if (fragmentKind(sentence.text, words, source) !== null) fragment[i] = 1;
+    if (fragmentKind(sentence.text, words, source, { answeredInParagraph: sentence.positionInParagraph < sentence.paragraphLength - 1 }) !== null) fragment[i] = 1;
   });
   return { barred, fragment, textKey };
 }
