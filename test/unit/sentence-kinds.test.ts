@@ -37,6 +37,9 @@ describe('sentence kinds: barred outright', () => {
     for (const line of ['N/A', 'TBD', 'None.', 'none', 'To be determined.', 'TODO for the ferry schedule', 'Not applicable.']) assert.equal(barred(line), 'placeholder', line);
     assert.equal(barred('Prepared by the harbour operations group.'), 'byline');
     for (const line of ['Start Date: 2024-03-11', 'Status: accepted', 'Primary assignee: ada']) assert.equal(barred(line), 'metadata', line);
+    // A version line in prose (invented demo lines), but not a sentence about what a version does.
+    for (const line of ['Report version 1.2, circulated for comment in November.', 'Version 3.', 'Draft version 0.4 (internal).']) assert.equal(barred(line), 'metadata', line);
+    for (const line of ['Version 2 adds a late crossing on Fridays.', 'Version 2, with its new fares, starts in May.']) assert.equal(barred(line), null, line);
   });
 
   it('bars an HTTP request line or a bare path alone: it names an endpoint but says nothing about it', () => {

@@ -2,7 +2,7 @@
  * What kind of line a sentence is, before any ranker looks at it:
  *  - barred: never a summary line — placeholder answers ("N/A", "TBD", "None."), pull-request
  *    boilerplate (issue references, sign-off trailers, "cc @…", check-list items), bylines and
- *    metadata lines ("Start Date: …"), and API lines: an HTTP request line or a bare URL path
+ *    metadata lines ("Start Date: …", "Report version 1.2, circulated …"), and API lines: an HTTP request line or a bare URL path
  *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
  *    fewer, a lead-in ending in a colon, a question its paragraph goes on to answer, an unfinished
@@ -55,6 +55,12 @@ const CHECKLIST = /^\s*(?:[-*+]\s*)?\[[ xX]\]\s/;
 const BYLINE = /^(?:prepared|written|authored|drafted|compiled|edited|submitted|proposed|created|maintained|posted|reviewed|approved)\s+by\b/i;
 /** Header fields of design documents and forms, "Key: value" on one short line. */
 const METADATA = /^(?:authors?|owners?|reviewers?|approvers?|assignees?|primary\s+assignee|other\s+contributors|contributors?|date|start\s+date|created|updated|last\s+updated|version|status|state|feature\s+name|rfc\s+pr|rust\s+issue|tracking\s+issue|blueprint|launchpad|shepherds?|champions?|team|teams|contact|email|discussion|pr|issue|target\s+release|milestone|labels?|category|type|priority)\s*:\s*\S/i;
+/**
+ * A document's version line in prose ("Report version 1.2, circulated for comment in November."):
+ * the version number, then nothing or only how the version went out. "Version 2 adds …" is content.
+ */
+const VERSION_LINE =
+  /^(?:(?:report|document|draft|spec|specification|proposal|design)\s+)?(?:version|revision)\s+\d+(?:\.\d+)*[a-z]?\s*(?:$|[.;]|\(|,\s*(?:circulated|released|issued|dated|updated|revised|published|approved|sent|shared|distributed)\b)/i;
 
 /**
  * An HTTP request line (the methods of RFC 9110 §9, from memory) or a bare path, alone on its line,
@@ -93,7 +99,7 @@ function barredKindOf(trimmed: string, key: string, words: number, settings: typ
   if (key === '' || PLACEHOLDERS.has(key) || LATER_NOTE.test(trimmed)) return 'placeholder';
   if (ISSUE_LINE.test(trimmed) || TRAILER.test(trimmed) || MENTION_LINE.test(trimmed) || CHECKLIST.test(trimmed)) return 'boilerplate';
   if (words <= settings.bylineWords && BYLINE.test(trimmed)) return 'byline';
-  if (words <= settings.bylineWords && METADATA.test(trimmed)) return 'metadata';
+  if (words <= settings.bylineWords && (METADATA.test(trimmed) || VERSION_LINE.test(trimmed))) return 'metadata';
   if (API_LINE.test(trimmed)) return 'apiLine';
   return null;
 }
