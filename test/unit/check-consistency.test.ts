@@ -212,6 +212,12 @@ describe('check consistency: modality', () => {
     assert.deepEqual(uses.map((u) => u.modalClass), ['obligation', 'possibility']);
   });
 
+  it('does not take a quoted value for the word a modal governs (common practice, no source)', () => {
+    // "should be 'cancelled'" names a status value, not a verb the modal commits to (invented demo sentence).
+    assert.deepEqual(modalUses(checkedText("The crossing status should be 'cancelled' after a storm warning.", 'en')), []);
+    assert.equal(modalUses(checkedText('The crossing should be cancelled after a storm warning.', 'en')).length, 1);
+  });
+
   it('reports must against may on the same verb, and accepts a plain statement for "will"', () => {
     const swapped = checkModality(input('Operators must publish the winter timetable online.', ['Operators may publish the winter timetable online.']));
     assert.equal(swapped.length, 1);

@@ -5,7 +5,7 @@
  * the claim. Negation of the modal is the negation detector's business.
  *
  * The governed word is the first content word after the modal (within four words, before any
- * punctuation). The body's sentences that use that word, closest to the claim first (and the
+ * punctuation or quotation mark: "should be 'failed'" names a status value, not a verb). The body's sentences that use that word, closest to the claim first (and the
  * support), are read: a modal of the claim's class on the word there agrees; otherwise a modal of
  * another class on it is a finding, except prediction against possibility ("will" / "can"). A
  * body that states plainly what the abstract says with a modal ("adds" for "will add") is a
@@ -25,7 +25,7 @@ const SINGLE: Readonly<Record<string, ModalClass>> = {
 };
 /** "have to", "needs to", "required to": obligation spelled with two words. */
 const BEFORE_TO: Readonly<Record<string, ModalClass>> = { have: 'obligation', has: 'obligation', had: 'obligation', need: 'obligation', needs: 'obligation', required: 'obligation' };
-const BREAK = /[,;:()[\]{}!?]|\.\s/u;
+const BREAK = /[,;:()[\]{}!?"'`‘’“”]|\.\s/u;
 const HEAD_WINDOW = 4;
 
 export interface ModalUse {
