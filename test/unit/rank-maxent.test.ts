@@ -102,7 +102,16 @@ describe('rank: the maximum-entropy model file and scores', () => {
     assert.equal(ranked.scores[sentenceIndex(/This proposal adds/)], -0.25);
     // "None.": placeholder (−3), no cue (0): −2 − 3.
     assert.equal(ranked.scores[sentenceIndex(/^None\.$/)], -5);
-    assert.equal(ranked.features!.intentCue![sentenceIndex(/This proposal adds/)], 1.25);
+    // Each feature's share is given against the document's average sentence (explain.ts), so the
+    // shares of a sentence add up to its score minus the mean score (Lundberg & Lee 2017, linear models; from memory).
+    const i = sentenceIndex(/This proposal adds/);
+    const mean = (values: ArrayLike<number>) => Array.from(values).reduce((x, y) => x + y, 0) / values.length;
+    const raw = Array.from(ranked.featureValues!.bins['intentCue']!, (value) => model.weights.intentCue[value]!);
+    assert.equal(raw[i], 1.25);
+    assert.ok(Math.abs(ranked.features!.intentCue![i]! - (1.25 - mean(raw))) < 1e-12);
+    const shares = Object.values(ranked.features!).reduce((sum, column) => sum + column[i]!, 0);
+    assert.ok(Math.abs(shares - (ranked.scores[i]! - mean(ranked.scores))) < 1e-9, `${shares} vs ${ranked.scores[i]! - mean(ranked.scores)}`);
+    for (const column of Object.values(ranked.features!)) assert.ok(Math.abs(mean(column)) < 1e-9);
   });
 
   it('refuses malformed models, naming what is wrong', () => {

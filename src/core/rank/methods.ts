@@ -17,8 +17,8 @@ export interface MethodInfo {
   readonly numbers: string;
 }
 
-/** A trained model's numbers: each feature's share of the log-odds. */
-const CONTRIBUTIONS = 'Each line below: how far that feature moves the score (above 0 towards picking, below 0 against).';
+/** A trained model's numbers: each feature's share of the log-odds, relative to the document's average sentence. */
+const CONTRIBUTIONS = 'Each line below: how far that feature puts this sentence above or below the document’s average sentence (above 0 towards picking, below 0 against).';
 /** The other methods' numbers: the scores and counts they work from. */
 const INPUTS = 'Each line below: a score or count the method works from (higher counts more).';
 

@@ -13,6 +13,7 @@
  * A sentence's score is its log-odds b + Σ_f weights[f][value of f] (for a continuous feature,
  * weights[f][0] × its scaled value); features the model leaves out add nothing.
  */
+import { relativeToAverage } from './explain';
 import defaultMaxentJson from '../../../../media/models/maxent-model.json';
 import type { AnalyzedDocument, RankResult } from '../../types';
 import { CONTINUOUS_NAMES, MAXENT_FEATURES, maxentFeatures, type MaxentFeatureMatrix } from './maxent-features';
@@ -90,7 +91,10 @@ export function defaultMaxentModel(): MaxentModel {
 
 const MAXENT_VALUE_LABELS: Readonly<Record<string, readonly string[]>> = Object.fromEntries(MAXENT_FEATURES.map((f) => [f.name, f.values]));
 
-/** Ranks by the model's log-odds; `features` holds each feature's contribution (its weight for the sentence's value). */
+/**
+ * Ranks by the model's log-odds; `features` holds each feature's contribution (its weight for the
+ * sentence's value), relative to the document's average sentence (explain.ts).
+ */
 export function rankMaxent(a: AnalyzedDocument, model: MaxentModel = defaultMaxentModel(), matrix?: MaxentFeatureMatrix): RankResult {
   const n = a.doc.sentences.length;
   const values = matrix ?? maxentFeatures(a);
@@ -109,7 +113,7 @@ export function rankMaxent(a: AnalyzedDocument, model: MaxentModel = defaultMaxe
     features[name] = contribution;
     if (!continuous) bins[name] = column;
   }
-  return { scores, features, featureValues: { bins, labels: MAXENT_VALUE_LABELS } };
+  return { scores, features: relativeToAverage(features), featureValues: { bins, labels: MAXENT_VALUE_LABELS } };
 }
 
 /** Every feature value of a model with its weight, for people reading what was learned. */

@@ -13,6 +13,7 @@
  * Counts rather than probabilities are stored, so a file can be checked by hand and smoothing
  * changed without retraining.
  */
+import { relativeToAverage } from './explain';
 import defaultModelJson from '../../../../media/models/default-model.json';
 import { checkLearnedTemplateText } from '../../select/template-text';
 import type { AnalyzedDocument, RankResult } from '../../types';
@@ -159,12 +160,12 @@ function modelCounts(model: BayesModel): NaiveBayesCounts {
 
 const VALUE_LABELS: Readonly<Record<string, readonly string[]>> = Object.fromEntries(FEATURES.map((f) => [f.name, f.values]));
 
-/** Ranks by the model's log-odds; `features` holds each feature's contribution. */
+/** Ranks by the model's log-odds; `features` holds each feature's contribution relative to the document's average sentence (explain.ts). */
 export function rankBayes(a: AnalyzedDocument, model: BayesModel = defaultModel(), matrix?: FeatureMatrix): RankResult {
   const n = a.doc.sentences.length;
   const values = matrix ?? sentenceFeatures(a);
   const { scores, contributions } = scoreNaiveBayes(modelCounts(model), model.smoothing, values, n);
-  return { scores, features: contributions, featureValues: { bins: values, labels: VALUE_LABELS } };
+  return { scores, features: relativeToAverage(contributions), featureValues: { bins: values, labels: VALUE_LABELS } };
 }
 
 /** Every feature value of a model with its log-odds contribution, for people reading what was learned. */
