@@ -98,6 +98,10 @@ describe('coherence: demonstratives', () => {
   it('does not flag self-reference, time phrases, "those who" or "such as"', () => {
     assert.equal(first('This section lists the landings.'), null);
     assert.equal(first('This guide explains the booking.'), null);
+    // A design document's "this design" / "this plan" is the document itself, as "this proposal" is.
+    assert.equal(first('This design keeps the crossings the tide allows.'), null);
+    assert.equal(first('This plan replaces the printed timetable.'), null);
+    assert.equal(first('This approach replaces the printed timetable.'), 'demonstrative:This approach');
     assert.equal(first('This year the club built two robots.'), null);
     assert.equal(first('Those who borrow a ladder sign a note.'), null);
     assert.equal(first('Tools such as saws need a briefing.'), null);

@@ -36,7 +36,7 @@ const OBJECT_ONLY = new Set(['them', 'him']);
 /** Nouns after "this" that point at the text itself or at the present time, not at earlier text. */
 const SELF_OR_NOW = new Set(
   `section chapter document page guide article paper report post note readme tutorial handbook manual
-   file book list release repository repo project website site blog wiki proposal spec specification
+   file book list release repository repo project website site blog wiki proposal spec specification design plan
    overview walkthrough faq checklist changelog summary appendix part tool extension library
    rfc pep adr pr patch commit crate package plugin app script
    year month week quarter morning afternoon evening night weekend spring summer autumn fall winter
