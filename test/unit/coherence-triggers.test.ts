@@ -124,6 +124,8 @@ describe('coherence: back-references', () => {
     assert.equal(first('As noted earlier, the dome shuts in wind.'), 'backReference:As noted earlier');
     assert.equal(first('The aforementioned valve is replaced yearly.'), 'backReference:aforementioned');
     assert.equal(first('Entries follow the previous step.'), 'backReference:the previous step');
+    assert.equal(first('We doubt the last option is needed.'), 'backReference:the last option');
+    assert.equal(first('In the second case the ferry waits at the pier.'), 'backReference:the second case');
     assert.equal(first('The following example shows a dock schedule in the new format.'), 'backReference:The following example');
     assert.equal(first('Operators paste the following snippet into the ferry config.'), 'backReference:the following snippet');
     assert.equal(first('Add the following lines to the pier config to start the ticket scanner.'), 'backReference:the following lines');
@@ -131,6 +133,9 @@ describe('coherence: back-references', () => {
   });
 
   it('does not flag "the former" as "ex-", "above" as a preposition, or a named source', () => {
+    assert.equal(first('The first option keeps the printed timetable.'), null);
+    assert.equal(first('Of the three ferries, the last one sails at nine.'), null);
+    assert.equal(first('We compared the old timetable and the tide plan, and the second approach won.'), null);
     assert.equal(first('The former head baker supplies the starter.'), null);
     assert.equal(first('The latter half of the year is busy.'), null);
     assert.equal(first('Readings above 35 degrees raise an alert.'), null);

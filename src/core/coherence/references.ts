@@ -1,6 +1,6 @@
 /**
  * Explicit pointers to other parts of the text ("the former", "the latter", "the steps above",
- * "as mentioned", "see below", "the previous section", forward: "the following example") and
+ * "as mentioned", "see below", "the previous section", "the last option", forward: "the following example") and
  * additive back-references ("also", "too", "as well", "either", "Another option ..."): the
  * sentence presupposes something said elsewhere. Halliday and Hasan (1976, "Cohesion in
  * English") call the second kind additive conjunction and comparative reference — from memory.
@@ -28,6 +28,12 @@ const LATTER_TIME = set('half part stage stages years days decades months weeks 
 
 /** Nouns after "the former" that make it an anaphor rather than "ex-" ("the former option"). */
 const FORMER_ANAPHORIC = set('one two option approach method case variant choice group kind type design model setting version');
+
+/** Ordinals that pick one of a list named earlier ("the last option"); "first" often opens the list itself. */
+const ORDINAL_PICKS = set('second third fourth last');
+
+/** Members of a list of choices, besides FORMER_ANAPHORIC's nouns: "the last alternative". */
+const LIST_MEMBERS = set('options alternative alternatives proposal proposals solution solutions idea ideas');
 
 /** Document parts after "the previous/preceding". */
 const DOCUMENT_PARTS = set(`
@@ -75,6 +81,14 @@ function backReferenceAt(tokens: readonly Token[], i: number): FoundTrigger | nu
       return null; // "the former head baker": an ex-holder of a role
     }
     return span(i, nextIndex + 1);
+  }
+
+  // "the last option", "the second approach": one of a list the summary may leave out.
+  if (word === 'the' && ORDINAL_PICKS.has(next) && !pairedEarlier(tokens, i)) {
+    const nounIndex = nextWord(tokens, nextIndex + 1);
+    const noun = nounIndex === nextIndex + 1 ? tokens[nounIndex]!.lower : '';
+    // Not "the last one": "of the three ferries, the last one" names its list in the same breath.
+    if ((FORMER_ANAPHORIC.has(noun) && noun !== 'one' && noun !== 'two') || LIST_MEMBERS.has(noun)) return span(i, nounIndex + 1);
   }
 
   if (word === 'above' || word === 'below') {
