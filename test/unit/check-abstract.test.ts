@@ -103,6 +103,19 @@ describe('check: abstract against body', () => {
     assert.ok(content.items.some((i) => i.covered) && content.items.some((i) => !i.covered));
   });
 
+  it('leaves verbs, generic words and placeholder answers out of the key content (common practice, no source)', () => {
+    // Invented demo document: every section says "we add" something "new" and answers a template question "None."
+    const doc = [
+      '# Harbour ferry', '', '## Summary', '', 'The ferry gets a tide-aware timetable.', '',
+      '## Timetable', '', 'We add a new tide column to the ferry timetable. Crossings follow the tide tables.', '', '### Security', '', 'None.', '',
+      '## Crew', '', 'We add a new shift rota for the ferry crew. The crew keeps its shifts.', '', '### Upgrades', '', 'None.', '',
+      '## Passengers', '', 'We add a new notice board for ferry passengers. Passengers see the tide.', '', '### Other effects', '', 'None.', '',
+    ].join('\n');
+    const words = expectCheck(checkAbstract(doc, { format: 'markdown', language: 'en' })).content.items.map((i) => i.word.toLowerCase());
+    assert.ok(words.includes('ferry'), words.join(', '));
+    for (const generic of ['add', 'new', 'none']) assert.ok(!words.includes(generic), `${generic} in ${words.join(', ')}`);
+  });
+
   it('lists up to three supporting sentences, best first, pointing into the body', () => {
     for (const sentence of check.abstract.sentences) {
       assert.ok(sentence.support.length <= 3);

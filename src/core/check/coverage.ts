@@ -10,6 +10,8 @@
  * a content term. A term that three sections and the title use weighs 4; terms used by one source
  * only are not key content. Coverage is the weight of the key terms the abstract uses over the total.
  */
+import { isNonKeyword } from '../keyphrases/textrank-keywords';
+import { barredKind } from '../select/sentence-kinds';
 import { normalizeHeading } from '../text/headings';
 import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
 import type { LocatedAbstract } from './abstract-locator';
@@ -126,7 +128,10 @@ export function contentCoverage(analyzed: AnalyzedDocument, located: LocatedAbst
   const counts = new Map<string, number>();
   const first = new Map<string, number>();
   body.terms.forEach((terms, position) => {
-    const unit = units[doc.sentences[body.sentences[position]!]!.section]!;
+    const sentence = doc.sentences[body.sentences[position]!]!;
+    // A placeholder answer ("None.") or a metadata line repeated in every section is no content.
+    if (barredKind(sentence.text, analyzed.words[sentence.index]!.length) !== null) return;
+    const unit = units[sentence.section]!;
     for (const term of terms) {
       if (/\d/u.test(term)) continue;
       let set = sources.get(term);
@@ -141,12 +146,15 @@ export function contentCoverage(analyzed: AnalyzedDocument, located: LocatedAbst
   const titleCounts = title !== null && !unitHeadings.has(normalizeHeading(title)) && normalizeHeading(title) !== normalizeHeading(located.heading ?? '');
   const titleTerms = new Set(titleCounts ? analyzed.titleTerms : []);
   const weightOf = (term: string) => sources.get(term)!.size + (titleTerms.has(term) ? 1 : 0);
-  const key = [...sources.keys()]
-    .filter((term) => weightOf(term) >= 2)
+  const repeated = [...sources.keys()].filter((term) => weightOf(term) >= 2);
+  const words = surfaceWords(analyzed, body, new Set(repeated));
+  // Verbs and generic words ("add", "new", "use") are not content an abstract should name: the
+  // key-phrase filter's part-of-speech stand-in (keyphrases/english-shapes.ts) leaves them out.
+  const key = repeated
+    .filter((term) => !isNonKeyword((words.get(term) ?? term).toLowerCase(), analyzed.language))
     .sort((a, b) => weightOf(b) - weightOf(a) || counts.get(b)! - counts.get(a)! || first.get(a)! - first.get(b)!)
     .slice(0, KEY_CONTENT_SIZE);
   const abstractTerms = new Set(claimTerms.flat());
-  const words = surfaceWords(analyzed, body, new Set(key));
   const items: KeyContent[] = key.map((term) => {
     const sentence = body.sentences[first.get(term)!]!;
     const headings = [...sources.get(term)!].sort((a, b) => a - b).map((u) => doc.sections[u]!.heading);

@@ -75,6 +75,11 @@ const TIE_TOLERANCE = 1e-3;
  * english-shapes.ts); a language without an entry keeps every non-stop word.
  */
 const NON_KEYWORDS: Readonly<Record<string, (word: string) => boolean>> = { en: isEnglishNonKeyword };
+
+/** Whether a lower-case word is no content word in `language` by the filter above (false for a language without one). */
+export function isNonKeyword(word: string, language: string): boolean {
+  return NON_KEYWORDS[language]?.(word) ?? false;
+}
 const NUMBER_LIKE = /^[\p{N}.,'-]+$/u;
 
 interface Clause {
