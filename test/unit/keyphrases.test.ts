@@ -75,6 +75,18 @@ describe('key phrases (TextRank keywords, Mihalcea & Tarau 2004)', () => {
     for (const o of ferry.occurrences) assert.match(text.slice(o.start, o.end).toLowerCase(), /^night\W+ferry$/);
   });
 
+  it('reads no barred line in a summary: a sign-off or a byline names no topic of the document (ours)', () => {
+    // Invented demo pull request; the sign-off trailer repeats a name the body never uses.
+    const text = [
+      'The ferry timetable test failed once in forty runs because it waited a fixed time for the tide timer.',
+      'The test now drives a fake tide clock, so the ferry timetable test no longer depends on machine load.',
+      '', 'Signed-off-by: Wenna Tregarthen <wenna@example.invalid>', 'Signed-off-by: Wenna Tregarthen <wenna@example.invalid>', '',
+    ].join('\n');
+    const words = summarize(text, { format: 'markdown' }).keyPhrases.flatMap((k) => k.text.split(' '));
+    assert.ok(words.includes('timetable'), words.join(' | '));
+    assert.ok(!words.some((w) => w === 'wenna' || w === 'tregarthen'), words.join(' | '));
+  });
+
   it('is empty for a text without candidate words, and part of every summary', () => {
     assert.deepEqual(extractKeyPhrases(prepared('It is what it is. And so on.').analyzed), []);
     const summary = summarize(PAPER_ABSTRACT, { format: 'plaintext' });

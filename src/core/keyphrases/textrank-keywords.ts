@@ -89,9 +89,10 @@ interface Clause {
 }
 
 /** Each sentence split at clause punctuation, then into word tokens. */
-function clausesOf(a: AnalyzedDocument): Clause[] {
+function clausesOf(a: AnalyzedDocument, skip?: (sentence: number) => boolean): Clause[] {
   const clauses: Clause[] = [];
   a.doc.sentences.forEach((sentence, index) => {
+    if (skip?.(index)) return;
     for (const piece of sentence.text.split(CLAUSE_BREAK)) {
       const tokens = wordTokens(piece);
       if (tokens.length > 0) clauses.push({ sentence: index, tokens });
@@ -100,15 +101,18 @@ function clausesOf(a: AnalyzedDocument): Clause[] {
   return clauses;
 }
 
-/** Extracts the document's key phrases. Deterministic: vertices are numbered in order of first appearance. */
-export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhraseSettings> = {}): KeyPhrase[] {
+/**
+ * Extracts the document's key phrases. Deterministic: vertices are numbered in order of first
+ * appearance. `skip` names sentences not to read (lines that are no content of the document).
+ */
+export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhraseSettings> = {}, skip?: (sentence: number) => boolean): KeyPhrase[] {
   const settings: KeyPhraseSettings = { ...KEYPHRASE_DEFAULTS, ...overrides };
   const stops = stopWords(a.language);
   const nonKeyword = NON_KEYWORDS[a.language];
   const isCandidate = (word: string) =>
     word.length >= settings.minWordLength && word.length <= settings.maxWordLength && HAS_LETTER.test(word) && !NUMBER_LIKE.test(word) && !stops.has(word) && !nonKeyword?.(word);
 
-  const clauses = clausesOf(a);
+  const clauses = clausesOf(a, skip);
   const vertexOf = new Map<string, number>();
   // The filter and the stem depend on the token alone, so each distinct token is judged once.
   const vertexOfToken = new Map<string, number>();

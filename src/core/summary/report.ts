@@ -22,6 +22,9 @@ import type {
 
 import { minutesToRead } from '../reading';
 
+/** Barred kinds whose words key phrases leave out. */
+const NO_TOPIC: ReadonlySet<string> = new Set<BarredKind>(['boilerplate', 'byline', 'metadata', 'template']);
+
 export { WORDS_PER_MINUTE, minutesToRead } from '../reading';
 
 export interface ReportInput {
@@ -102,7 +105,8 @@ export function describeSummary(input: ReportInput): Summary {
     language: analyzed.language,
     sentences,
     shares,
-    keyPhrases: extractKeyPhrases(analyzed),
+    // Sign-offs, bylines, metadata lines and template text name no topic of the document (an API line does).
+    keyPhrases: extractKeyPhrases(analyzed, {}, input.kinds ? (i) => NO_TOPIC.has(input.kinds!.barred[i] ?? '') : undefined),
     stats: {
       wordsIn,
       wordsOut,
