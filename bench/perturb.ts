@@ -237,6 +237,8 @@ function negationEdits(sentence: string, facts: BodyFacts): Edit[] {
   for (const m of sentence.matchAll(aux)) {
     const end = m.index! + m[0].length;
     if (!/^\s+[\p{L}]/u.test(sentence.slice(end))) continue;
+    // "is only available" → "is not only available" is the idiom "not only … (but also)", not a flipped claim.
+    if (/^\s+only\b/iu.test(sentence.slice(end))) continue;
     if (grounded(end)) edits.push({ start: end, end, replacement: ' not' });
   }
   return edits;

@@ -25,3 +25,16 @@ describe('benchmark perturbations: modal swaps', () => {
     assert.equal(modalSwap('Cafés must publish their menus.\n').bodyStatesModal, false);
   });
 });
+
+describe('benchmark perturbations: negation flips', () => {
+  const flips = (abstract: string, body: string) =>
+    perturbAbstract({ abstractText: abstract, format: 'markdown', facts: new BodyFacts(body), foreignSentences: [], seed: 7 }).filter((p) => p.kind === 'negation');
+
+  it('inserts "not" after an auxiliary the body grounds, but never makes the idiom "not only" (common practice, no source)', () => {
+    const body = 'The winter timetable is available on the harbour board.\n';
+    const [flip] = flips('The winter timetable is available on the harbour board.\n', body);
+    assert.ok(flip);
+    assert.match(flip!.after, /\bis not available\b/);
+    assert.deepEqual(flips('The winter timetable is only available on the harbour board.\n', body).map((p) => p.after), []);
+  });
+});
