@@ -330,6 +330,18 @@ describe('check: the opening text as the abstract', () => {
     assert.ok(check.rouge!.summary.every((s) => !opening.has(s.text)), 'the comparison summary copies the opening');
   });
 
+  it('looks up what the opening names in the body only, as it does for an abstract section', () => {
+    // Invented demo document: the option and the count appear in the opening alone.
+    const body = ['## Stations', '', 'The harbour scheme runs 21 docking stations along the quay, each with ten bikes.', 'Riders unlock bikes with the app at any of the stations.', '',
+      '## Operations', '', 'Vans move bikes between the stations twice a day, and the crew checks every dock each morning.', 'The crew logs every repair in the harbour maintenance sheet.', ''];
+    const claim = 'The harbour scheme runs 12 docking stations along the quay and uses the --night-mode option.';
+    const findingsOf = (check: AbstractCheck) => check.findings.map((f) => f.message).join(' | ');
+    const asSection = expectCheck(checkAbstract(['# Harbour bikes', '', '## Summary', '', claim, '', ...body].join('\n'), { format: 'markdown', language: 'en' }));
+    const asOpening = expectCheck(checkAbstract(['# Harbour bikes', '', claim, '', ...body].join('\n'), { format: 'markdown', language: 'en', abstract: { kind: 'opening' } }));
+    assert.match(findingsOf(asSection), /never mentions --night-mode/);
+    assert.match(findingsOf(asOpening), /never mentions --night-mode/);
+  });
+
   it('says why when there is no opening text or no heading to end it', () => {
     const noOpening = checkAbstract('# Ferry\n\n## Fares\n\nFares rise in May for every crossing.\n\n## Crew\n\nThe crew works four shifts a week.\n', { format: 'markdown', language: 'en', abstract: { kind: 'opening' } });
     assert.equal(noOpening.ok, false);

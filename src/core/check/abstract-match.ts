@@ -59,7 +59,11 @@ export interface CheckBody {
   readonly lines: LineIndex;
 }
 
-function readBody(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excludeHeadings: readonly string[]): CheckBody {
+/** Where the abstract is in the checked document: its sections, and the span its text covers (null for separate text). */
+export type AbstractPlace = Pick<LocatedAbstract, 'sections' | 'span'>;
+
+function readBody(analyzed: AnalyzedDocument, abstract: AbstractPlace, excludeHeadings: readonly string[]): CheckBody {
+  const abstractSections = abstract.sections;
   const { doc, language } = analyzed;
   const excluded = excludedSections(doc, excludeHeadings);
   const sentences: number[] = [];
@@ -81,10 +85,10 @@ function readBody(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excl
       if (typeof q.value === 'number') numbers.add(q.value);
     }
   }
-  // Identifiers are looked up in the whole text outside the abstract: code blocks are not sentences.
-  const abstractSpans = doc.sections.filter((s) => abstractSections[s.index] === 1 && s.parent !== null && abstractSections[s.parent] !== 1).map((s) => s.span);
-  let outside = doc.text;
-  for (const span of abstractSpans.sort((a, b) => b.start - a.start)) outside = outside.slice(0, span.start - doc.baseOffset) + '\n' + outside.slice(span.end - doc.baseOffset);
+  // Identifiers and figures are looked up in the whole text outside the abstract (code blocks are
+  // not sentences); the abstract's own span is left out, a section or the opening text alike.
+  const span = abstract.span;
+  const outside = span === null ? doc.text : doc.text.slice(0, span.start - doc.baseOffset) + '\n' + doc.text.slice(span.end - doc.baseOffset);
   return { sentences, terms, termLists, evidence, facts: { numbers, textNumbers: numbersInText(outside.toLowerCase()), lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
 }
 
@@ -120,8 +124,8 @@ export interface BodyModel {
 }
 
 /** Null when the document has no prose outside the abstract. */
-export function bodyModel(analyzed: AnalyzedDocument, abstractSections: Uint8Array, excludeHeadings: readonly string[]): BodyModel | null {
-  const body = readBody(analyzed, abstractSections, excludeHeadings);
+export function bodyModel(analyzed: AnalyzedDocument, abstract: AbstractPlace, excludeHeadings: readonly string[]): BodyModel | null {
+  const body = readBody(analyzed, abstract, excludeHeadings);
   if (body.sentences.length === 0) return null;
   // idf over the body's sentences: a claim term the body never uses gets the largest weight.
   const index = buildTermIndex(body.termLists);

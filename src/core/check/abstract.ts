@@ -79,7 +79,7 @@ export function abstractChecker(documentText: string, request: Omit<CheckAbstrac
     if ('error' in located) return { ok: false, reason: located.reason, error: located.error };
     // One body per abstract place: a section, the opening text, or none (separate text).
     const key = located.section ?? (located.origin === 'opening' ? -2 : -1);
-    if (!models.has(key)) models.set(key, bodyModel(prepared.analyzed, located.sections, prepared.options.excludeHeadings));
+    if (!models.has(key)) models.set(key, bodyModel(prepared.analyzed, located, prepared.options.excludeHeadings));
     const model = models.get(key)!;
     if (model === null) return { ok: false, reason: 'noBody', error: 'The document has no prose outside the abstract to check it against.' };
     return report(prepared, located, matchAbstract(prepared.analyzed, located, thresholds, model), thresholds, located.origin === 'opening' ? withoutOpening(located) : whole);
