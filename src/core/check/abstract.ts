@@ -58,21 +58,24 @@ export function abstractChecker(documentText: string, request: Omit<CheckAbstrac
   const ranking = () => (ranked ??= rankPrepared(prepared));
   const whole: Comparison = { prepared, ranking };
   // An opening-text abstract has no heading to leave out of the comparison summary: the summary is
-  // made from the document with the opening blanked (same length, so every offset stays right).
-  let opening: Comparison | null = null;
-  const withoutOpening = (located: LocatedAbstract): Comparison => {
-    if (opening) return opening;
+  // made from the document with the opening's sentences blanked (same length, so every offset
+  // stays right). Made once; null when that text cannot be read (the report then says so).
+  let opening: Comparison | null | undefined;
+  const withoutOpening = (located: LocatedAbstract): Comparison | null => {
+    if (opening !== undefined) return opening;
     const { doc } = prepared.analyzed;
-    let text = doc.text;
+    const parts: string[] = [];
+    let at = 0;
     for (const sentence of located.sentences) {
       const from = sentence.span!.start - doc.baseOffset;
       const to = sentence.span!.end - doc.baseOffset;
-      text = text.slice(0, from) + text.slice(from, to).replace(/[^\r\n]/g, ' ') + text.slice(to);
+      parts.push(doc.text.slice(at, from), doc.text.slice(from, to).replace(/[^\r\n]/g, ' '));
+      at = to;
     }
-    const blanked = prepareDocument(text, summaryRequest);
-    if (!blanked.ok) return whole;
+    parts.push(doc.text.slice(at));
+    const blanked = prepareDocument(parts.join(''), summaryRequest);
     let blankedRanking: RankResult | null = null;
-    return (opening = { prepared: blanked.prepared, ranking: () => (blankedRanking ??= rankPrepared(blanked.prepared)) });
+    return (opening = blanked.ok ? { prepared: blanked.prepared, ranking: () => (blankedRanking ??= rankPrepared(blanked.prepared)) } : null);
   };
   return (abstract) => {
     const located = locateAbstract(prepared.analyzed, abstract, prepared.analyzed.language);
@@ -92,11 +95,12 @@ interface Comparison {
   readonly ranking: () => RankResult;
 }
 
-function report(prepared: PreparedDocument, located: LocatedAbstract, match: ReturnType<typeof matchAbstract>, thresholds: AbstractThresholds, comparison: Comparison): AbstractCheck {
+function report(prepared: PreparedDocument, located: LocatedAbstract, match: ReturnType<typeof matchAbstract>, thresholds: AbstractThresholds, comparison: Comparison | null): AbstractCheck {
   const { analyzed } = prepared;
   const { sentences, sections, unjudged, content } = match;
   const notices: string[] = [];
-  const rouge = rougeComparison(comparison, located, notices);
+  if (comparison === null) notices.push('No comparison summary: the document without its opening text could not be read.');
+  const rouge = comparison === null ? null : rougeComparison(comparison, located, notices);
 
   return {
     ok: true,
