@@ -9,6 +9,7 @@
  *   4. sections and key content are judged covered by the same links (coverage.ts).
  * The body is what a summary reads: sentences outside the abstract and outside excluded sections.
  */
+import { barredKind } from '../select/sentence-kinds';
 import { excludedSections } from '../select/units';
 import { LineIndex } from '../text/lines';
 import { wordTokens } from '../text/tokens';
@@ -55,6 +56,8 @@ export interface CheckBody {
   /** Normalized terms with repeats (tf). */
   readonly termLists: readonly (readonly string[])[];
   readonly evidence: readonly Evidence[];
+  /** Per body sentence: a placeholder answer, boilerplate, byline, metadata or API line (select/sentence-kinds.ts). */
+  readonly barred: readonly boolean[];
   readonly facts: BodyFacts;
   readonly lines: LineIndex;
 }
@@ -70,6 +73,7 @@ function readBody(analyzed: AnalyzedDocument, abstract: AbstractPlace, excludeHe
   const terms: Set<string>[] = [];
   const termLists: string[][] = [];
   const evidence: Evidence[] = [];
+  const barred: boolean[] = [];
   const numbers = new Set<number>();
   for (const sentence of doc.sentences) {
     if (abstractSections[sentence.section] === 1 || excluded[sentence.section] === 1) continue;
@@ -81,6 +85,7 @@ function readBody(analyzed: AnalyzedDocument, abstract: AbstractPlace, excludeHe
     termLists.push(list);
     terms.push(new Set(list));
     evidence.push({ sentence: sentence.index, checked, source, span: sentence.span });
+    barred.push(barredKind(sentence.text, analyzed.words[sentence.index]!.length) !== null);
     for (const q of quantitiesIn(checked)) {
       if (typeof q.value === 'number') numbers.add(q.value);
     }
@@ -89,7 +94,7 @@ function readBody(analyzed: AnalyzedDocument, abstract: AbstractPlace, excludeHe
   // not sentences); the abstract's own span is left out, a section or the opening text alike.
   const span = abstract.span;
   const outside = span === null ? doc.text : doc.text.slice(0, span.start - doc.baseOffset) + '\n' + doc.text.slice(span.end - doc.baseOffset);
-  return { sentences, terms, termLists, evidence, facts: { numbers, textNumbers: numbersInText(outside.toLowerCase()), lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
+  return { sentences, terms, termLists, evidence, barred, facts: { numbers, textNumbers: numbersInText(outside.toLowerCase()), lowerSource: outside.toLowerCase(), sentences: evidence }, lines: new LineIndex(doc.text) };
 }
 
 /**

@@ -11,7 +11,6 @@
  * only are not key content. Coverage is the weight of the key terms the abstract uses over the total.
  */
 import { isNonKeyword } from '../keyphrases/textrank-keywords';
-import { barredKind } from '../select/sentence-kinds';
 import { normalizeHeading } from '../text/headings';
 import type { AnalyzedDocument, ParsedDocument, Span } from '../types';
 import type { LocatedAbstract } from './abstract-locator';
@@ -128,10 +127,9 @@ export function contentCoverage(analyzed: AnalyzedDocument, located: LocatedAbst
   const counts = new Map<string, number>();
   const first = new Map<string, number>();
   body.terms.forEach((terms, position) => {
-    const sentence = doc.sentences[body.sentences[position]!]!;
     // A placeholder answer ("None.") or a metadata line repeated in every section is no content.
-    if (barredKind(sentence.text, analyzed.words[sentence.index]!.length) !== null) return;
-    const unit = units[sentence.section]!;
+    if (body.barred[position]) return;
+    const unit = units[doc.sentences[body.sentences[position]!]!.section]!;
     for (const term of terms) {
       if (/\d/u.test(term)) continue;
       let set = sources.get(term);

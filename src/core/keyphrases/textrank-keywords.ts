@@ -80,6 +80,7 @@ const NON_KEYWORDS: Readonly<Record<string, (word: string) => boolean>> = { en: 
 export function isNonKeyword(word: string, language: string): boolean {
   return NON_KEYWORDS[language]?.(word) ?? false;
 }
+
 const NUMBER_LIKE = /^[\p{N}.,'-]+$/u;
 
 interface Clause {
@@ -108,9 +109,8 @@ function clausesOf(a: AnalyzedDocument, skip?: (sentence: number) => boolean): C
 export function extractKeyPhrases(a: AnalyzedDocument, overrides: Partial<KeyPhraseSettings> = {}, skip?: (sentence: number) => boolean): KeyPhrase[] {
   const settings: KeyPhraseSettings = { ...KEYPHRASE_DEFAULTS, ...overrides };
   const stops = stopWords(a.language);
-  const nonKeyword = NON_KEYWORDS[a.language];
   const isCandidate = (word: string) =>
-    word.length >= settings.minWordLength && word.length <= settings.maxWordLength && HAS_LETTER.test(word) && !NUMBER_LIKE.test(word) && !stops.has(word) && !nonKeyword?.(word);
+    word.length >= settings.minWordLength && word.length <= settings.maxWordLength && HAS_LETTER.test(word) && !NUMBER_LIKE.test(word) && !stops.has(word) && !isNonKeyword(word, a.language);
 
   const clauses = clausesOf(a, skip);
   const vertexOf = new Map<string, number>();
