@@ -114,13 +114,13 @@ export class AbstractCheck {
       void vscode.window.showErrorMessage(t('Tersely could not read the document’s headings: {0}', message));
       return undefined;
     }
-    const headings = found.map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, source: { kind: 'heading', heading: s.heading } as Source }));
+    const headings: { label: string; source: Source }[] = found.map((s) => ({ label: `${'  '.repeat(Math.max(0, s.depth - 1))}${s.heading}`, source: { kind: 'heading', heading: s.heading } }));
     if (headings.length === 0) {
       void vscode.window.showInformationMessage(t('No section is headed Summary, Abstract or TL;DR, and the document has no headings. Select the abstract’s text and run Check Abstract again.'));
       return undefined;
     }
     // An introduction before the first heading often serves as the abstract (specifications).
-    const opening = { label: t('Opening text (before the first heading)'), source: { kind: 'opening' } as Source };
+    const opening: { label: string; source: Source } = { label: t('Opening text (before the first heading)'), source: { kind: 'opening' } };
     const choice = await vscode.window.showQuickPick([opening, ...headings], {
       title: t('Which section is the abstract?'),
       placeHolder: t('No section is headed Summary, Abstract or TL;DR. Pick the abstract’s heading or the opening text (or press Escape and select its text instead).'),
