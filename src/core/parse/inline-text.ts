@@ -169,7 +169,7 @@ export class InlineTextBuilder {
     const last = units.length - 1;
     if (last < 1 || (units[last] !== HYPHEN_MINUS && units[last] !== HYPHEN) || !LETTER.test(String.fromCharCode(units[last - 1]!))) return false;
     let word = '';
-    for (let k = next; k < this.units.length && word.length <= MAX_CONJUNCTION; k++) {
+    for (let k = next; k < this.units.length && word.length < LETTERS_TO_READ; k++) {
       const unit = String.fromCharCode(this.units[k]!);
       if (!LOWER_LETTER.test(unit)) break;
       word += unit;
@@ -193,7 +193,8 @@ const LETTER = /\p{L}/u;
 const LOWER_LETTER = /\p{Ll}/u;
 /** Words after a hyphen that leave it suspended ("long- and short-term"; English and German). */
 const SUSPENDED_HYPHEN_WORDS: ReadonlySet<string> = new Set(['and', 'or', 'nor', 'to', 'und', 'oder', 'bis']);
-const MAX_CONJUNCTION = 4;
+/** Letters read after the break: one more than the longest of those words tells it from a longer word. */
+const LETTERS_TO_READ = Math.max(...[...SUSPENDED_HYPHEN_WORDS].map((w) => w.length)) + 1;
 
 /** Offsets scratch of finish() for paragraphs up to this many units; a longer one gets its own. */
 const SCRATCH_UNITS = 4096;

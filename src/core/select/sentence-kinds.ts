@@ -2,8 +2,9 @@
  * What kind of line a sentence is, before any ranker looks at it:
  *  - barred: never a summary line — placeholder answers ("N/A", "TBD", "None."), pull-request
  *    boilerplate (issue references, sign-off trailers, "cc @…", check-list items), bylines and
- *    metadata lines ("Start Date: …", "Report version 1.2, circulated …"), and API lines: an HTTP request line or a bare URL path
- *    ("GET /flavors/{flavor_id}"), which name an endpoint but say nothing about it;
+ *    metadata lines ("Start Date: …", "Report version 1.2, circulated …"), and API lines: an HTTP
+ *    request line or a bare URL path ("GET /flavors/{flavor_id}"), which name an endpoint but say
+ *    nothing about it;
  *  - fragment: may be picked on its own merit but never to fill a section's seat — six words or
  *    fewer, a lead-in ending in a colon, a question its paragraph goes on to answer, an unfinished
  *    clause (ending in ", and"), link-only text, a bare reference ("RFC 1234.", "[3]"), a pointer

@@ -5,11 +5,12 @@
  * the claim. Negation of the modal is the negation detector's business.
  *
  * The governed word is the first content word after the modal (within four words, before any
- * punctuation or quotation mark: "should be 'failed'" names a status value, not a verb). The body's sentences that use that word, closest to the claim first (and the
- * support), are read: a modal of the claim's class on the word there agrees; otherwise a modal of
- * another class on it is a finding, except prediction against possibility ("will" / "can"). A
- * body that states plainly what the abstract says with a modal ("adds" for "will add") is a
- * paraphrase, not a conflict. English only.
+ * punctuation or quotation mark: "should be 'failed'" names a status value, not a verb). The
+ * body's sentences that use that word, closest to the claim first (and the support), are read: a
+ * modal of the claim's class on the word there agrees; otherwise a modal of another class on it is
+ * a finding, except prediction against possibility ("will" / "can"). A body that states plainly
+ * what the abstract says with a modal ("adds" for "will add") is a paraphrase, not a conflict.
+ * English only.
  */
 import type { CheckedText } from './claim-tokens';
 import { sharedTerms } from './claim-tokens';
